@@ -1,0 +1,77 @@
+package org.trundle.core;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+/**
+ * Argument checks shared by the public API: each failure is an
+ * {@link IllegalArgumentException} whose message names the parameter and the value.
+ */
+public final class Checks {
+    private Checks() {
+    }
+
+    /**
+     * @param name parameter name for the message
+     * @param value value to check
+     * @return the value, when finite and strictly positive
+     */
+    public static double positive(String name, double value) {
+        if (!(value > 0) || !Double.isFinite(value)) {
+            throw new IllegalArgumentException(name + " must be finite and positive, got " + value);
+        }
+        return value;
+    }
+
+    /**
+     * @param name parameter name for the message
+     * @param value value to check
+     * @return the value, when finite and not negative
+     */
+    public static double nonNegative(String name, double value) {
+        if (!(value >= 0) || !Double.isFinite(value)) {
+            throw new IllegalArgumentException(name + " must be finite and not negative, got " + value);
+        }
+        return value;
+    }
+
+    /**
+     * @param name parameter name for the message
+     * @param value value to check
+     * @return the value, when finite
+     */
+    public static double finite(String name, double value) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException(name + " must be finite, got " + value);
+        }
+        return value;
+    }
+
+    /**
+     * @param name parameter name for the message
+     * @param v vector to check
+     * @return the vector, when non-null with finite components
+     */
+    public static Vector3D finite(String name, Vector3D v) {
+        if (v == null) {
+            throw new IllegalArgumentException(name + " must be given, got null");
+        }
+        if (!Double.isFinite(v.getX()) || !Double.isFinite(v.getY()) || !Double.isFinite(v.getZ())) {
+            throw new IllegalArgumentException(name + " must have finite components, got " + v);
+        }
+        return v;
+    }
+
+    /**
+     * @param name parameter name for the message
+     * @param v vector to check
+     * @return the unit vector along v, when v is finite and not (near) zero
+     */
+    public static Vector3D direction(String name, Vector3D v) {
+        finite(name, v);
+        double n = v.getNorm();
+        if (!(n > 1e-300)) {
+            throw new IllegalArgumentException(name + " must be a non-zero direction, got " + v);
+        }
+        return v.scalarMultiply(1.0 / n);
+    }
+}

@@ -1,0 +1,50 @@
+package org.trundle.core;
+
+import java.util.OptionalDouble;
+
+/** Two contact laws acting together; see {@link ContactLaw#and(ContactLaw)}. */
+final class CombinedLaw implements ContactLaw {
+    private final ContactLaw a;
+    private final ContactLaw b;
+    private final OptionalDouble restitution;
+
+    CombinedLaw(ContactLaw a, ContactLaw b) {
+        if (a == null || b == null) {
+            throw new IllegalArgumentException("contact law must be given, got null");
+        }
+        this.a = a;
+        this.b = b;
+        OptionalDouble ea = a.restitution();
+        OptionalDouble eb = b.restitution();
+        if (ea.isPresent() && eb.isPresent()) {
+            throw new IllegalArgumentException("restitution is set twice, by " + a.name() + " and by " + b.name());
+        }
+        this.restitution = ea.isPresent() ? ea : eb;
+    }
+
+    @Override
+    public double gripLimit(ContactContext c) {
+        return Math.min(a.gripLimit(c), b.gripLimit(c));
+    }
+
+    @Override
+    public double slidingFriction(ContactContext c) {
+        return a.slidingFriction(c) + b.slidingFriction(c);
+    }
+
+    @Override
+    public void addCouples(ContactContext c) {
+        a.addCouples(c);
+        b.addCouples(c);
+    }
+
+    @Override
+    public OptionalDouble restitution() {
+        return restitution;
+    }
+
+    @Override
+    public String name() {
+        return a.name() + " + " + b.name();
+    }
+}

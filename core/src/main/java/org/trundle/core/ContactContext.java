@@ -1,0 +1,133 @@
+package org.trundle.core;
+
+/**
+ * What a {@link ContactLaw} sees of the contact at one instant, and where it adds its couples.
+ *
+ * <p>Read: the ball, the contact geometry, the normal force {@code F_n} (N, or the normal impulse
+ * in N·s when the law is asked for impulse bounds at an impact, see {@link #isImpulse()}), the
+ * slip velocity {@code s = v − r ω × n} of the contact point (m/s), the relative spin
+ * {@code ω − ω_surface} (rad/s), and the phase. Write: {@link #addCouple} adds a couple (N·m) acting
+ * on the ball, booked under a {@link LossKind}.
+ *
+ * <p>A mutable view owned by one run and reused on every call, so that the right-hand side
+ * allocates nothing; a law must not keep a reference to it.
+ */
+public final class ContactContext {
+    private Ball ball;
+    private ContactGeometry geometry;
+    private double normalForce;
+    private boolean impulse;
+    private Phase phase = Phase.ROLLING;
+    private final double[] slip = new double[3];
+    private final double[] relativeSpin = new double[3];
+    final double[] torque = new double[3];
+    final double[] lossRate = new double[LossKind.values().length];
+
+    /** Creates an empty context (the solver makes one per run). */
+    public ContactContext() {
+    }
+
+    void set(Ball b, ContactGeometry g, double fn, Phase p, double[] s, double[] relSpin, boolean isImpulse) {
+        this.ball = b;
+        this.geometry = g;
+        this.normalForce = fn;
+        this.phase = p;
+        this.impulse = isImpulse;
+        System.arraycopy(s, 0, slip, 0, 3);
+        System.arraycopy(relSpin, 0, relativeSpin, 0, 3);
+        torque[0] = 0;
+        torque[1] = 0;
+        torque[2] = 0;
+        java.util.Arrays.fill(lossRate, 0.0);
+    }
+
+    /**
+     * Prepares the context outside the solver (for testing a law on its own).
+     *
+     * @param b ball
+     * @param g contact geometry
+     * @param fn normal force (N)
+     * @param p phase
+     * @param s slip velocity (m/s)
+     * @param relSpin relative spin (rad/s)
+     */
+    public void prepare(Ball b, ContactGeometry g, double fn, Phase p, double[] s, double[] relSpin) {
+        set(b, g, fn, p, s, relSpin, false);
+    }
+
+    /** @return the ball */
+    public Ball ball() {
+        return ball;
+    }
+
+    /** @return the contact geometry (read only) */
+    public ContactGeometry geometry() {
+        return geometry;
+    }
+
+    /** @return normal force F_n (N), or normal impulse (N·s) when {@link #isImpulse()} */
+    public double normalForce() {
+        return normalForce;
+    }
+
+    /** @return true when the law is asked for impulse bounds at an impact */
+    public boolean isImpulse() {
+        return impulse;
+    }
+
+    /** @return the phase being evaluated (rolling or sliding) */
+    public Phase phase() {
+        return phase;
+    }
+
+    /**
+     * @param i component 0..2
+     * @return component i of the unit normal toward the ball
+     */
+    public double normal(int i) {
+        return geometry.normal[i];
+    }
+
+    /**
+     * @param i component 0..2
+     * @return component i of the contact-point slip velocity s (m/s); zero while rolling
+     */
+    public double slip(int i) {
+        return slip[i];
+    }
+
+    /** @return slip speed |s| (m/s) */
+    public double slipSpeed() {
+        return Math.sqrt(slip[0] * slip[0] + slip[1] * slip[1] + slip[2] * slip[2]);
+    }
+
+    /**
+     * @param i component 0..2
+     * @return component i of the spin relative to the surface (rad/s)
+     */
+    public double relativeSpin(int i) {
+        return relativeSpin[i];
+    }
+
+    /** @return spin about the normal, (ω − ω_surface)·n (rad/s) */
+    public double normalSpin() {
+        double[] n = geometry.normal;
+        return relativeSpin[0] * n[0] + relativeSpin[1] * n[1] + relativeSpin[2] * n[2];
+    }
+
+    /**
+     * Adds a contact couple acting on the ball and books the power it dissipates,
+     * {@code −τ·(ω − ω_surface)}, under {@code kind}.
+     *
+     * @param tx couple x (N·m)
+     * @param ty couple y (N·m)
+     * @param tz couple z (N·m)
+     * @param kind where the dissipated energy is booked
+     */
+    public void addCouple(double tx, double ty, double tz, LossKind kind) {
+        torque[0] += tx;
+        torque[1] += ty;
+        torque[2] += tz;
+        lossRate[kind.ordinal()] -= tx * relativeSpin[0] + ty * relativeSpin[1] + tz * relativeSpin[2];
+    }
+}

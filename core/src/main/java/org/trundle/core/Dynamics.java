@@ -1,0 +1,332 @@
+package org.trundle.core;
+
+import org.hipparchus.ode.OrdinaryDifferentialEquation;
+
+/**
+ * The right-hand side of one phase, on primitive arrays, allocation-free.
+ *
+ * <p>State layout (the one mapper between domain state and arrays): centre c [0,3), velocity v
+ * [3,6), quaternion q [6,10) (scalar first, body to world), spin ω [10,13), dissipated work by
+ * {@link LossKind} [13,17), applied-load work [17], centre path length [18].
+ *
+ * <p>Rolling (design notes §3): with {@code n}, {@code H} at the centre and the no-slip velocity
+ * {@code v = r ω × n}, the constraints {@code n·v = 0}, {@code v − r ω × n = 0} differentiated with
+ * {@code ṅ = H v} and Newton–Euler ({@code m a = m g + F + F_app}, {@code I α = −r n × F + τ}) give
+ * for the isotropic ball
+ * <pre>
+ *   F_n = m(−vᵀ H v − n·g) − n·F_app
+ *   F_t = k m/(1+k) · [ (τ × n)/(k m r) + r P(ω × H v) − P g − P F_app/m ]
+ * </pre>
+ * and the centre moves with {@code ċ = r ω × n(c)}, which keeps {@code d(c)} a first integral
+ * of the exact flow and the slip identically zero.
+ *
+ * <p>Sliding (§4): {@code F_n} from the normal constraint with the actual {@code v}; friction
+ * {@code −f ŝ} with {@code f} from the law, {@code ŝ} the slip direction; below the stick
+ * threshold {@code ε} the direction is blended continuously toward the direction {@code d₀} fixed
+ * when sliding began. Flight: gravity and applied loads only.
+ */
+final class Dynamics implements OrdinaryDifferentialEquation {
+    static final int C = 0;
+    static final int V = 3;
+    static final int Q = 6;
+    static final int W = 10;
+    static final int LOSS = 13;
+    static final int APPLIED = 17;
+    static final int PATH = 18;
+    static final int DIM = 19;
+
+    private final double r;
+    private final double m;
+    private final double k;
+    private final double inertia;
+    private final double[] g;
+    private final Surface surface;
+    private final ContactLaw law;
+    private final AppliedLoad load;
+
+    final ContactGeometry geo = new ContactGeometry();
+    final ContactContext ctx = new ContactContext();
+    private final Ball ball;
+
+    Phase phase = Phase.FLIGHT;
+    final double[] slideDir0 = new double[3];
+    double stickEps;
+
+    // results of the last evaluation
+    double normalForce;
+    double neededTangential;
+    double grip;
+    double slipSpeed;
+    final double[] friction = new double[3];
+    final double[] vel = new double[3];
+    final double[] slip = new double[3];
+
+    long evaluations;
+    long budget = Long.MAX_VALUE;
+
+    // workspaces
+    private final double[] c = new double[3];
+    private final double[] w = new double[3];
+    private final double[] q = new double[4];
+    private final double[] fApp = new double[3];
+    private final double[] tApp = new double[3];
+    private final double[] hv = new double[3];
+    private final double[] tmp = new double[3];
+    private final double[] force = new double[3];
+    private final double[] tau = new double[3];
+    private final double[] scratchDot = new double[DIM];
+
+    Dynamics(Ball ball, Surface surface, ContactLaw law, double[] gravity, AppliedLoad load) {
+        this.ball = ball;
+        this.r = ball.radius();
+        this.m = ball.mass();
+        this.k = ball.inertiaFactor();
+        this.inertia = ball.momentOfInertia();
+        this.g = gravity.clone();
+        this.surface = surface;
+        this.law = law;
+        this.load = load;
+        this.geo.scratch = surface.newScratch();
+    }
+
+    @Override
+    public int getDimension() {
+        return DIM;
+    }
+
+    @Override
+    public double[] computeDerivatives(double t, double[] y) {
+        double[] yDot = new double[DIM];
+        evaluate(t, y, yDot);
+        return yDot;
+    }
+
+    /** Evaluates the phase's forces without keeping derivatives (event functions, samples). */
+    void evaluate(double t, double[] y) {
+        evaluate(t, y, scratchDot);
+    }
+
+    void evaluate(double t, double[] y, double[] yDot) {
+        if (++evaluations > budget) {
+            throw new BudgetExhausted();
+        }
+        System.arraycopy(y, C, c, 0, 3);
+        System.arraycopy(y, Q, q, 0, 4);
+        System.arraycopy(y, W, w, 0, 3);
+        fApp[0] = 0;
+        fApp[1] = 0;
+        fApp[2] = 0;
+        tApp[0] = 0;
+        tApp[1] = 0;
+        tApp[2] = 0;
+        double pRoll = 0;
+        double pPivot = 0;
+        double pSlide = 0;
+        double pOther = 0;
+        double[] ax = tmp;
+        switch (phase) {
+            case ROLLING: {
+                surface.query(t, c, geo);
+                double[] n = geo.normal;
+                // v = r w x n
+                cross(w, n, vel);
+                scale(vel, r);
+                load.apply(t, c, vel, q, w, fApp, tApp);
+                mulSym(geo.hessian, vel, hv);
+                double vHv = dot(vel, hv);
+                double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
+                zero(slip);
+                ctx.set(ball, geo, fn, Phase.ROLLING, slip, w, false);
+                law.addCouples(ctx);
+                for (int i = 0; i < 3; i++) {
+                    tau[i] = ctx.torque[i] + tApp[i];
+                }
+                // tmp = (tau x n)/(k m r) + r (w x Hv) - g - fApp/m, projected on the tangent plane
+                cross(tau, n, ax);
+                double s1 = 1.0 / (k * m * r);
+                double wx = w[1] * hv[2] - w[2] * hv[1];
+                double wy = w[2] * hv[0] - w[0] * hv[2];
+                double wz = w[0] * hv[1] - w[1] * hv[0];
+                ax[0] = ax[0] * s1 + r * wx - g[0] - fApp[0] / m;
+                ax[1] = ax[1] * s1 + r * wy - g[1] - fApp[1] / m;
+                ax[2] = ax[2] * s1 + r * wz - g[2] - fApp[2] / m;
+                double an = dot(ax, n);
+                double kf = k * m / (1 + k);
+                for (int i = 0; i < 3; i++) {
+                    friction[i] = kf * (ax[i] - an * n[i]);
+                }
+                normalForce = fn;
+                neededTangential = norm(friction);
+                grip = law.gripLimit(ctx);
+                slipSpeed = 0;
+                pRoll = ctx.lossRate[LossKind.ROLLING_RESISTANCE.ordinal()];
+                pPivot = ctx.lossRate[LossKind.PIVOTING_RESISTANCE.ordinal()];
+                pOther = ctx.lossRate[LossKind.OTHER.ordinal()] + ctx.lossRate[LossKind.SLIDING_FRICTION.ordinal()];
+                for (int i = 0; i < 3; i++) {
+                    force[i] = fn * n[i] + friction[i];
+                }
+                break;
+            }
+            case SLIDING: {
+                surface.query(t, c, geo);
+                double[] n = geo.normal;
+                System.arraycopy(y, V, vel, 0, 3);
+                // s = v - r w x n, tangential part
+                cross(w, n, slip);
+                for (int i = 0; i < 3; i++) {
+                    slip[i] = vel[i] - r * slip[i];
+                }
+                double sn = dot(slip, n);
+                for (int i = 0; i < 3; i++) {
+                    slip[i] -= sn * n[i];
+                }
+                load.apply(t, c, vel, q, w, fApp, tApp);
+                mulSym(geo.hessian, vel, hv);
+                double vHv = dot(vel, hv);
+                double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
+                double sp = norm(slip);
+                double[] dir = ax;
+                if (sp >= stickEps) {
+                    for (int i = 0; i < 3; i++) {
+                        dir[i] = slip[i] / sp;
+                    }
+                } else {
+                    double blend = stickEps - sp;
+                    for (int i = 0; i < 3; i++) {
+                        dir[i] = slip[i] + blend * slideDir0[i];
+                    }
+                    double dn = dot(dir, n);
+                    for (int i = 0; i < 3; i++) {
+                        dir[i] -= dn * n[i];
+                    }
+                    double len = norm(dir);
+                    if (len > 0) {
+                        scale(dir, 1.0 / len);
+                    }
+                }
+                ctx.set(ball, geo, fn, Phase.SLIDING, slip, w, false);
+                double f = law.slidingFriction(ctx);
+                law.addCouples(ctx);
+                for (int i = 0; i < 3; i++) {
+                    friction[i] = -f * dir[i];
+                    tau[i] = ctx.torque[i] + tApp[i];
+                    force[i] = fn * n[i] + friction[i];
+                }
+                normalForce = fn;
+                neededTangential = f;
+                grip = Double.NaN;
+                slipSpeed = sp;
+                pSlide = -dot(friction, slip);
+                pRoll = ctx.lossRate[LossKind.ROLLING_RESISTANCE.ordinal()];
+                pPivot = ctx.lossRate[LossKind.PIVOTING_RESISTANCE.ordinal()];
+                pOther = ctx.lossRate[LossKind.OTHER.ordinal()] + ctx.lossRate[LossKind.SLIDING_FRICTION.ordinal()];
+                break;
+            }
+            default: {
+                System.arraycopy(y, V, vel, 0, 3);
+                load.apply(t, c, vel, q, w, fApp, tApp);
+                zero(force);
+                zero(friction);
+                zero(slip);
+                System.arraycopy(tApp, 0, tau, 0, 3);
+                normalForce = 0;
+                neededTangential = 0;
+                grip = Double.NaN;
+                slipSpeed = 0;
+                break;
+            }
+        }
+        if (yDot == null) {
+            return;
+        }
+        // alpha = (-r n x F + tau)/I, with the contact force F applied at c - r n
+        double[] n = geo.normal;
+        double ix = tau[0];
+        double iy = tau[1];
+        double iz = tau[2];
+        if (phase.inContact()) {
+            ix -= r * (n[1] * force[2] - n[2] * force[1]);
+            iy -= r * (n[2] * force[0] - n[0] * force[2]);
+            iz -= r * (n[0] * force[1] - n[1] * force[0]);
+        }
+        yDot[C] = vel[0];
+        yDot[C + 1] = vel[1];
+        yDot[C + 2] = vel[2];
+        yDot[V] = g[0] + (force[0] + fApp[0]) / m;
+        yDot[V + 1] = g[1] + (force[1] + fApp[1]) / m;
+        yDot[V + 2] = g[2] + (force[2] + fApp[2]) / m;
+        // q' = 1/2 (0, w) * q
+        yDot[Q] = -0.5 * (w[0] * q[1] + w[1] * q[2] + w[2] * q[3]);
+        yDot[Q + 1] = 0.5 * (q[0] * w[0] + w[1] * q[3] - w[2] * q[2]);
+        yDot[Q + 2] = 0.5 * (q[0] * w[1] + w[2] * q[1] - w[0] * q[3]);
+        yDot[Q + 3] = 0.5 * (q[0] * w[2] + w[0] * q[2] - w[1] * q[1]);
+        yDot[W] = ix / inertia;
+        yDot[W + 1] = iy / inertia;
+        yDot[W + 2] = iz / inertia;
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = pSlide;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = pRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = pPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = pOther;
+        yDot[APPLIED] = dot(fApp, vel) + dot(tApp, w);
+        yDot[PATH] = norm(vel);
+        for (int i = 0; i < DIM; i++) {
+            if (!Double.isFinite(yDot[i])) {
+                throw new NumericalFailure("non-finite derivative component " + i + " = " + yDot[i]
+                    + " at t = " + t + " s in phase " + phase.label());
+            }
+        }
+    }
+
+    /** Thrown when the evaluation budget is used up. */
+    static final class BudgetExhausted extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        BudgetExhausted() {
+            super("evaluation budget exhausted", null, false, false);
+        }
+    }
+
+    /** Thrown when a derivative is not finite. */
+    static final class NumericalFailure extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        NumericalFailure(String message) {
+            super(message, null, false, false);
+        }
+    }
+
+    static double dot(double[] a, double[] b) {
+        return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+    }
+
+    static double norm(double[] a) {
+        return Math.sqrt(dot(a, a));
+    }
+
+    static void cross(double[] a, double[] b, double[] out) {
+        double x = a[1] * b[2] - a[2] * b[1];
+        double y = a[2] * b[0] - a[0] * b[2];
+        double z = a[0] * b[1] - a[1] * b[0];
+        out[0] = x;
+        out[1] = y;
+        out[2] = z;
+    }
+
+    static void scale(double[] a, double s) {
+        a[0] *= s;
+        a[1] *= s;
+        a[2] *= s;
+    }
+
+    static void zero(double[] a) {
+        a[0] = 0;
+        a[1] = 0;
+        a[2] = 0;
+    }
+
+    static void mulSym(double[] h, double[] v, double[] out) {
+        out[0] = h[0] * v[0] + h[1] * v[1] + h[2] * v[2];
+        out[1] = h[3] * v[0] + h[4] * v[1] + h[5] * v[2];
+        out[2] = h[6] * v[0] + h[7] * v[1] + h[8] * v[2];
+    }
+}

@@ -1,0 +1,765 @@
+package org.trundle.core;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.hipparchus.exception.MathRuntimeException;
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.hipparchus.ode.ODEState;
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.hipparchus.ode.events.Action;
+import org.hipparchus.ode.events.ODEStepEndHandler;
+import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
+import org.hipparchus.ode.sampling.ODEStateInterpolator;
+import org.hipparchus.ode.sampling.ODEStepHandler;
+
+/**
+ * One run of a {@link Simulation}: the phase machine. It integrates one phase at a time with
+ * the phase's event detectors, stops at the first event, applies the switch (impulses, phase
+ * choice) and starts the next segment. Owns every workspace of the run.
+ */
+final class Engine {
+    private final Simulation sim;
+    private final RunObserver observer;
+    private final SolverSettings set;
+    private final Surface surface;
+    private final ContactLaw law;
+    private final double r;
+    private final double m;
+    private final double k;
+    private final double inertia;
+    private final double[] g;
+    private final Dynamics dyn;
+
+    private double speedScale;
+    private double stickEps;
+    private double settleSpeed;
+    private double impactSlack;
+    private double restitution;
+    private double[] absTol;
+    private double[] relTol;
+
+    private double t;
+    private double[] y;
+    private Phase phase;
+    private double endTime;
+
+    private final List<RunEvent> events = new ArrayList<>();
+    private final List<PhaseSpan> spans = new ArrayList<>();
+    private double spanStart;
+    private double spanPath;
+
+    private double maxDistanceError;
+    private double maxRollingSlip;
+    private double maxNormalForce;
+    private double maxKinetic;
+    private double extent;
+    private double[] c0;
+    private double impactLoss;
+    private long steps;
+    private int sampleIndex;
+    private double sampleT0;
+    private BallState lastGood;
+
+    // set by handlers during a segment
+    private Trigger fired;
+    private String geometryStop;
+    private double[] pendingReset;
+
+    Engine(Simulation sim, RunObserver observer) {
+        this.sim = sim;
+        this.observer = observer;
+        this.set = sim.settings();
+        this.surface = sim.surface();
+        this.law = sim.law();
+        Ball b = sim.ball();
+        this.r = b.radius();
+        this.m = b.mass();
+        this.k = b.inertiaFactor();
+        this.inertia = b.momentOfInertia();
+        this.g = sim.gravity().toArray();
+        this.dyn = new Dynamics(b, surface, law, g, sim.load());
+        this.restitution = law.restitution().orElse(0.0);
+    }
+
+    RunResult run(BallState start, double duration) {
+        t = start.time();
+        endTime = t + duration;
+        y = new double[Dynamics.DIM];
+        Rotation q = start.orientation();
+        put(y, Dynamics.C, start.centre());
+        put(y, Dynamics.V, start.velocity());
+        y[Dynamics.Q] = q.getQ0();
+        y[Dynamics.Q + 1] = q.getQ1();
+        y[Dynamics.Q + 2] = q.getQ2();
+        y[Dynamics.Q + 3] = q.getQ3();
+        put(y, Dynamics.W, start.spin());
+        c0 = start.centre().toArray();
+        double gn = Dynamics.norm(g);
+        speedScale = Math.max(Math.max(start.velocity().getNorm(), r * start.spin().getNorm()),
+            Math.max(Math.sqrt(gn * r), 1e-3));
+        stickEps = set.stickSpeedFraction() * speedScale;
+        settleSpeed = set.settleSpeed() > 0 ? set.settleSpeed() : Math.max(0.01 * Math.sqrt(gn * r), 1e-6);
+        impactSlack = 1e-9 * r;
+        dyn.stickEps = stickEps;
+        double tol = set.tolerance();
+        double eScale = m * speedScale * speedScale + m * gn * r;
+        absTol = new double[Dynamics.DIM];
+        relTol = new double[Dynamics.DIM];
+        for (int i = 0; i < Dynamics.DIM; i++) {
+            relTol[i] = tol;
+            double s;
+            if (i < Dynamics.V || i == Dynamics.PATH) {
+                s = r;
+            } else if (i < Dynamics.Q) {
+                s = speedScale;
+            } else if (i < Dynamics.W) {
+                s = 1.0;
+            } else if (i < Dynamics.LOSS) {
+                s = speedScale / r;
+            } else {
+                s = eScale;
+            }
+            absTol[i] = tol * s;
+        }
+        dyn.budget = set.maxEvaluations();
+
+        phase = startPhase(start.phase());
+        BallState s0 = toState(t, y, phase);
+        double e0 = sim.energy(s0);
+        lastGood = s0;
+        maxKinetic = s0.kineticEnergy(sim.ball());
+        observer.start(s0);
+        spanStart = t;
+        spanPath = 0;
+        sampleT0 = t;
+        sampleIndex = 0;
+        emitSample(t, y, phase, true);
+        for (RunEvent e : events) {
+            observer.event(e);
+        }
+
+        EndReason reason = null;
+        String message = "";
+        while (reason == null) {
+            if (events.size() >= set.maxEvents()) {
+                reason = EndReason.BUDGET;
+                message = "event budget of " + set.maxEvents() + " events exhausted";
+                break;
+            }
+            if (t >= endTime) {
+                reason = EndReason.DURATION;
+                break;
+            }
+            fired = null;
+            geometryStop = null;
+            ODEStateAndDerivative end;
+            try {
+                end = integrateSegment();
+            } catch (Dynamics.BudgetExhausted e) {
+                reason = EndReason.BUDGET;
+                message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+                restoreLastGood();
+                break;
+            } catch (SurfaceDomainException e) {
+                reason = EndReason.GEOMETRY;
+                message = e.getMessage();
+                restoreLastGood();
+                break;
+            } catch (Dynamics.NumericalFailure | MathRuntimeException e) {
+                throw new SimulationException("run failed: " + e.getMessage(), lastGood, e);
+            }
+            t = end.getTime();
+            y = end.getPrimaryState();
+            if (geometryStop != null) {
+                reason = EndReason.GEOMETRY;
+                message = geometryStop;
+                break;
+            }
+            if (fired == null) {
+                reason = EndReason.DURATION;
+                break;
+            }
+            reason = applySwitch(fired);
+        }
+        closeSpan();
+        BallState endState = toState(t, y, phase);
+        emitSample(t, y, phase, true);
+        double ke = endState.kineticEnergy(sim.ball());
+        maxKinetic = Math.max(maxKinetic, ke);
+        double e1 = sim.energy(endState);
+        double scale = Math.max(maxKinetic + m * gn * extent, eScale * 1e-12);
+        EnergyBudget budget = new EnergyBudget(e0, e1,
+            y[Dynamics.LOSS + LossKind.SLIDING_FRICTION.ordinal()],
+            y[Dynamics.LOSS + LossKind.ROLLING_RESISTANCE.ordinal()],
+            y[Dynamics.LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()],
+            y[Dynamics.LOSS + LossKind.OTHER.ordinal()],
+            impactLoss, y[Dynamics.APPLIED], scale);
+        RunResult result = new RunResult(reason, message, endState, events, spans, budget,
+            maxDistanceError, maxRollingSlip, maxNormalForce, dyn.evaluations, steps);
+        observer.finish(result);
+        return result;
+    }
+
+    private void restoreLastGood() {
+        t = lastGood.time();
+        put(y, Dynamics.C, lastGood.centre());
+        put(y, Dynamics.V, lastGood.velocity());
+        put(y, Dynamics.W, lastGood.spin());
+        Rotation q = lastGood.orientation();
+        y[Dynamics.Q] = q.getQ0();
+        y[Dynamics.Q + 1] = q.getQ1();
+        y[Dynamics.Q + 2] = q.getQ2();
+        y[Dynamics.Q + 3] = q.getQ3();
+        phase = lastGood.phase();
+    }
+
+    private ODEStateAndDerivative integrateSegment() {
+        dyn.phase = phase;
+        DormandPrince853Integrator integ = new DormandPrince853Integrator(0.0, endTime - t + 1e-300,
+            absTol, relTol);
+        integ.addStepHandler(new StepObserver());
+        if (phase.inContact()) {
+            integ.addStepEndHandler(new Projection());
+            integ.addEventDetector(new SwitchDetector(this, Trigger.LIFT_OFF, set));
+            if (surface.hasEdges()) {
+                integ.addEventDetector(new SwitchDetector(this, Trigger.EXIT, set));
+            }
+            if (phase == Phase.ROLLING) {
+                dyn.evaluate(t, y);
+                if (Double.isFinite(dyn.grip)) {
+                    integ.addEventDetector(new SwitchDetector(this, Trigger.SLIP, set));
+                }
+            } else {
+                integ.addEventDetector(new SwitchDetector(this, Trigger.STICK, set));
+            }
+        } else {
+            integ.addEventDetector(new SwitchDetector(this, Trigger.IMPACT, set));
+        }
+        return integ.integrate(dyn, new ODEState(t, y.clone()), endTime);
+    }
+
+    /** Event function value of a trigger at a state. */
+    double g(Trigger trig, ODEStateAndDerivative s) {
+        double[] ys = s.getPrimaryState();
+        double ts = s.getTime();
+        switch (trig) {
+            case LIFT_OFF:
+                dyn.evaluate(ts, ys);
+                return dyn.normalForce;
+            case SLIP:
+                dyn.evaluate(ts, ys);
+                return dyn.grip - dyn.neededTangential;
+            case STICK:
+                dyn.evaluate(ts, ys);
+                return dyn.slipSpeed - stickEps;
+            case EXIT:
+                surface.query(ts, centre(ys), dyn.geo);
+                return dyn.geo.patchMargin;
+            case IMPACT:
+            default:
+                surface.query(ts, centre(ys), dyn.geo);
+                return dyn.geo.distance - r + impactSlack;
+        }
+    }
+
+    /** Reaction to a located root of a trigger's event function. */
+    Action occurred(Trigger trig, ODEStateAndDerivative s, boolean increasing) {
+        if (increasing) {
+            return Action.CONTINUE;
+        }
+        if (trig == Trigger.IMPACT) {
+            double[] ys = s.getPrimaryState();
+            surface.query(s.getTime(), centre(ys), dyn.geo);
+            double vn = ys[Dynamics.V] * dyn.geo.normal[0] + ys[Dynamics.V + 1] * dyn.geo.normal[1]
+                + ys[Dynamics.V + 2] * dyn.geo.normal[2];
+            if (dyn.geo.patchMargin < 0 || vn >= 0) {
+                return Action.CONTINUE;
+            }
+        }
+        fired = trig;
+        return Action.STOP;
+    }
+
+    /** Applies the switch of a fired trigger at (t, y); returns an end reason or null to go on. */
+    private EndReason applySwitch(Trigger trig) {
+        BallState before = toState(t, y, phase);
+        switch (trig) {
+            case LIFT_OFF: {
+                setDerivedVelocity();
+                changePhase(Phase.FLIGHT);
+                log(EventKind.LIFT_OFF, before, null, Vector3D.ZERO);
+                return null;
+            }
+            case SLIP: {
+                dyn.phase = Phase.ROLLING;
+                dyn.evaluate(t, y);
+                setSlideDirectionFromRolling();
+                setDerivedVelocity();
+                changePhase(Phase.SLIDING);
+                log(EventKind.SLIP, before, null, Vector3D.ZERO);
+                return null;
+            }
+            case STICK: {
+                Vector3D j = stickImpulse();
+                Phase next = contactPhaseAfterStick();
+                if (next == Phase.SLIDING) {
+                    // the grip cannot hold rolling: keep sliding from zero slip, no event
+                    phase = Phase.SLIDING;
+                    return null;
+                }
+                changePhase(next);
+                log(next == Phase.ROLLING ? EventKind.STICK : EventKind.LIFT_OFF, before, null, j);
+                return null;
+            }
+            case EXIT: {
+                surface.query(t, centre(y), dyn.geo);
+                String edge = surface.edgeName(dyn.geo.edge);
+                if (phase == Phase.ROLLING) {
+                    setDerivedVelocity();
+                }
+                if (set.stopAtExit()) {
+                    log(EventKind.EXIT, before, before, Vector3D.ZERO, edge);
+                    return EndReason.EXIT;
+                }
+                changePhase(Phase.FLIGHT);
+                log(EventKind.EXIT, before, null, Vector3D.ZERO, edge);
+                return null;
+            }
+            case IMPACT:
+            default: {
+                Vector3D j = impact();
+                log(EventKind.IMPACT, before, null, j);
+                return null;
+            }
+        }
+    }
+
+    private void log(EventKind kind, BallState before, BallState after, Vector3D impulse) {
+        log(kind, before, after, impulse, null);
+    }
+
+    private void log(EventKind kind, BallState before, BallState after, Vector3D impulse, String edge) {
+        BallState a = after != null ? after : toState(t, y, phase);
+        RunEvent e = new RunEvent(kind, before, a, edge, impulse);
+        events.add(e);
+        trackForce(t, y, phase);
+        emitSample(t, y, phase, true);
+        observer.event(e);
+    }
+
+    private void changePhase(Phase next) {
+        if (next != phase) {
+            closeSpan();
+            phase = next;
+            spanStart = t;
+            spanPath = y[Dynamics.PATH];
+        }
+    }
+
+    private void closeSpan() {
+        if (t > spanStart || spans.isEmpty()) {
+            spans.add(new PhaseSpan(phase, spanStart, t, y[Dynamics.PATH] - spanPath));
+        }
+        spanStart = t;
+        spanPath = y[Dynamics.PATH];
+    }
+
+    // ---------------------------------------------------------------- start
+
+    private Phase startPhase(Phase requested) {
+        surface.query(t, centre(y), dyn.geo);
+        double gap = dyn.geo.distance - r;
+        double tolLen = set.contactTolerance() * r;
+        if (requested == Phase.FLIGHT) {
+            if (gap < -tolLen) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
+                    surface.name(), dyn.geo.distance, r));
+            }
+            return Phase.FLIGHT;
+        }
+        if (Math.abs(gap) > tolLen) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                "start centre is %s m from surface %s, but a %s start needs distance r = %s m (tolerance %s m);"
+                    + " use a flight start for a ball off the surface",
+                dyn.geo.distance, surface.name(), requested.label(), r, tolLen));
+        }
+        if (dyn.geo.patchMargin < 0) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                "start contact point lies outside the patch of surface %s by %s m (edge %s)",
+                surface.name(), -dyn.geo.patchMargin, surface.edgeName(dyn.geo.edge)));
+        }
+        double[] n = dyn.geo.normal;
+        double vn = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
+        double tolSpeed = set.contactTolerance() * speedScale;
+        if (Math.abs(vn) > tolSpeed) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                "start velocity has a normal component %s m/s on surface %s (tolerance %s m/s);"
+                    + " a contact start must move tangentially",
+                vn, surface.name(), tolSpeed));
+        }
+        projectOntoSurface();
+        double[] s = slipOf(y);
+        double slip = Dynamics.norm(s);
+        if (requested == Phase.ROLLING || requested == Phase.REST) {
+            if (slip > tolSpeed) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "start velocity violates the no-slip condition v = r w x n by %s m/s (tolerance %s m/s);"
+                        + " build a rolling start with Simulation.rollingStart(centre, velocity)",
+                    slip, tolSpeed));
+            }
+        }
+        Phase p = chooseContactPhase(slip <= stickEps || requested != Phase.SLIDING);
+        if (p == Phase.FLIGHT) {
+            BallState s0 = toState(t, y, requested == Phase.SLIDING ? Phase.SLIDING : Phase.ROLLING);
+            events.add(new RunEvent(EventKind.LIFT_OFF, s0, toState(t, y, Phase.FLIGHT), null, Vector3D.ZERO));
+        } else if (p == Phase.SLIDING && requested != Phase.SLIDING) {
+            BallState s0 = toState(t, y, Phase.ROLLING);
+            events.add(new RunEvent(EventKind.SLIP, s0, toState(t, y, Phase.SLIDING), null, Vector3D.ZERO));
+        }
+        return p;
+    }
+
+    /**
+     * Chooses rolling, sliding or flight for a ball on the surface with no normal velocity.
+     * With {@code rollingCandidate} the slip is removed (tiny, by a sticking impulse) and the grip
+     * test decides between rolling and sliding.
+     */
+    private Phase chooseContactPhase(boolean rollingCandidate) {
+        if (rollingCandidate) {
+            stickImpulse();
+            dyn.phase = Phase.ROLLING;
+            dyn.evaluate(t, y);
+            if (!(dyn.normalForce > 0)) {
+                return Phase.FLIGHT;
+            }
+            if (dyn.neededTangential <= dyn.grip) {
+                return Phase.ROLLING;
+            }
+            setSlideDirectionFromRolling();
+            return Phase.SLIDING;
+        }
+        dyn.phase = Phase.SLIDING;
+        double[] s = slipOf(y);
+        double sp = Dynamics.norm(s);
+        for (int i = 0; i < 3; i++) {
+            dyn.slideDir0[i] = s[i] / sp;
+        }
+        dyn.evaluate(t, y);
+        return dyn.normalForce > 0 ? Phase.SLIDING : Phase.FLIGHT;
+    }
+
+    private Phase contactPhaseAfterStick() {
+        dyn.phase = Phase.ROLLING;
+        dyn.evaluate(t, y);
+        if (!(dyn.normalForce > 0)) {
+            return Phase.FLIGHT;
+        }
+        if (dyn.neededTangential <= dyn.grip) {
+            return Phase.ROLLING;
+        }
+        setSlideDirectionFromRolling();
+        return Phase.SLIDING;
+    }
+
+    private void setSlideDirectionFromRolling() {
+        double f = dyn.neededTangential;
+        for (int i = 0; i < 3; i++) {
+            dyn.slideDir0[i] = f > 0 ? -dyn.friction[i] / f : 0.0;
+        }
+        if (!(f > 0)) {
+            // no preferred direction: any tangent will do, pick one deterministically
+            double[] n = dyn.geo.normal;
+            double[] a = Math.abs(n[0]) < 0.9 ? new double[] {1, 0, 0} : new double[] {0, 1, 0};
+            Dynamics.cross(n, a, dyn.slideDir0);
+            Dynamics.scale(dyn.slideDir0, 1.0 / Dynamics.norm(dyn.slideDir0));
+        }
+    }
+
+    // ---------------------------------------------------------------- impulses
+
+    /** Removes the contact-point slip by the impulse {@code J = −k m s/(1+k)}; books the loss. */
+    private Vector3D stickImpulse() {
+        surface.query(t, centre(y), dyn.geo);
+        double[] s = slipOf(y);
+        double f = -k * m / (1 + k);
+        double[] j = {f * s[0], f * s[1], f * s[2]};
+        double before = kinetic(y);
+        applyImpulse(j);
+        y[Dynamics.LOSS + LossKind.SLIDING_FRICTION.ordinal()] += before - kinetic(y);
+        return new Vector3D(j[0], j[1], j[2]);
+    }
+
+    /** Impact at re-contact: restitution and friction impulses, then the settling hand-over. */
+    private Vector3D impact() {
+        surface.query(t, centre(y), dyn.geo);
+        double[] n = dyn.geo.normal.clone();
+        double vn = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
+        double[] s = slipOf(y);
+        double jn = -(1 + restitution) * m * vn;
+        double f = -k * m / (1 + k);
+        double[] jt = {f * s[0], f * s[1], f * s[2]};
+        double[] w = {y[Dynamics.W], y[Dynamics.W + 1], y[Dynamics.W + 2]};
+        dyn.ctx.set(sim.ball(), dyn.geo, jn, Phase.SLIDING, s, w, true);
+        double gripJ = law.gripLimit(dyn.ctx);
+        double jtn = Dynamics.norm(jt);
+        if (jtn > gripJ) {
+            double slideJ = law.slidingFriction(dyn.ctx);
+            double sp = Dynamics.norm(s);
+            for (int i = 0; i < 3; i++) {
+                jt[i] = sp > 0 ? -slideJ * s[i] / sp : 0.0;
+            }
+        }
+        double[] j = {jn * n[0] + jt[0], jn * n[1] + jt[1], jn * n[2] + jt[2]};
+        double before = kinetic(y);
+        applyImpulse(j);
+        projectOntoSurface();
+        double vn1 = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
+        impactLoss += before - kinetic(y);
+        if (vn1 <= settleSpeed) {
+            double[] saved = y.clone();
+            double ke = kinetic(y);
+            for (int i = 0; i < 3; i++) {
+                y[Dynamics.V + i] -= vn1 * n[i];
+            }
+            double settleLoss = ke - kinetic(y);
+            double lossBefore = y[Dynamics.LOSS + LossKind.SLIDING_FRICTION.ordinal()];
+            double[] sl = slipOf(y);
+            Phase next = chooseContactPhase(Dynamics.norm(sl) <= stickEps);
+            if (next != Phase.FLIGHT) {
+                impactLoss += settleLoss;
+                changePhase(next);
+                return new Vector3D(j[0], j[1], j[2]).add(-m * vn1, new Vector3D(n[0], n[1], n[2]));
+            }
+            y = saved;
+            y[Dynamics.LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossBefore;
+        }
+        phase = Phase.FLIGHT;
+        return new Vector3D(j[0], j[1], j[2]);
+    }
+
+    private void applyImpulse(double[] j) {
+        double[] n = dyn.geo.normal;
+        for (int i = 0; i < 3; i++) {
+            y[Dynamics.V + i] += j[i] / m;
+        }
+        // d(omega) = (-r n x J)/I
+        double[] nxj = new double[3];
+        Dynamics.cross(n, j, nxj);
+        for (int i = 0; i < 3; i++) {
+            y[Dynamics.W + i] -= r * nxj[i] / inertia;
+        }
+    }
+
+    // ---------------------------------------------------------------- helpers
+
+    /** Slip velocity of the contact point, tangential part, from the state's v and ω (uses dyn.geo). */
+    private double[] slipOf(double[] ys) {
+        double[] n = dyn.geo.normal;
+        double[] w = {ys[Dynamics.W], ys[Dynamics.W + 1], ys[Dynamics.W + 2]};
+        double[] wxn = new double[3];
+        Dynamics.cross(w, n, wxn);
+        double[] s = new double[3];
+        for (int i = 0; i < 3; i++) {
+            s[i] = ys[Dynamics.V + i] - r * wxn[i];
+        }
+        double sn = Dynamics.dot(s, n);
+        for (int i = 0; i < 3; i++) {
+            s[i] -= sn * n[i];
+        }
+        return s;
+    }
+
+    /** Sets the velocity slot of y to the no-slip velocity r ω × n. */
+    private void setDerivedVelocity() {
+        surface.query(t, centre(y), dyn.geo);
+        double[] w = {y[Dynamics.W], y[Dynamics.W + 1], y[Dynamics.W + 2]};
+        double[] v = new double[3];
+        Dynamics.cross(w, dyn.geo.normal, v);
+        for (int i = 0; i < 3; i++) {
+            y[Dynamics.V + i] = r * v[i];
+        }
+    }
+
+    /** Moves the centre to distance r along the normal and removes the normal velocity. */
+    private void projectOntoSurface() {
+        surface.query(t, centre(y), dyn.geo);
+        double dr = r - dyn.geo.distance;
+        double[] n = dyn.geo.normal;
+        for (int i = 0; i < 3; i++) {
+            y[Dynamics.C + i] += dr * n[i];
+        }
+        surface.query(t, centre(y), dyn.geo);
+        n = dyn.geo.normal;
+        double vn = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
+        if (phase == null || phase.inContact()) {
+            for (int i = 0; i < 3; i++) {
+                y[Dynamics.V + i] -= vn * n[i];
+            }
+        }
+    }
+
+    private double kinetic(double[] ys) {
+        double v2 = ys[Dynamics.V] * ys[Dynamics.V] + ys[Dynamics.V + 1] * ys[Dynamics.V + 1]
+            + ys[Dynamics.V + 2] * ys[Dynamics.V + 2];
+        double w2 = ys[Dynamics.W] * ys[Dynamics.W] + ys[Dynamics.W + 1] * ys[Dynamics.W + 1]
+            + ys[Dynamics.W + 2] * ys[Dynamics.W + 2];
+        return 0.5 * m * v2 + 0.5 * inertia * w2;
+    }
+
+    private static double[] centre(double[] ys) {
+        return new double[] {ys[Dynamics.C], ys[Dynamics.C + 1], ys[Dynamics.C + 2]};
+    }
+
+    private static void put(double[] a, int at, Vector3D v) {
+        a[at] = v.getX();
+        a[at + 1] = v.getY();
+        a[at + 2] = v.getZ();
+    }
+
+    /** Domain state from the array state; rolling uses the no-slip velocity. */
+    private BallState toState(double ts, double[] ys, Phase p) {
+        double vx = ys[Dynamics.V];
+        double vy = ys[Dynamics.V + 1];
+        double vz = ys[Dynamics.V + 2];
+        if (p == Phase.ROLLING) {
+            Phase keep = dyn.phase;
+            dyn.phase = Phase.ROLLING;
+            dyn.evaluate(ts, ys);
+            dyn.phase = keep;
+            vx = dyn.vel[0];
+            vy = dyn.vel[1];
+            vz = dyn.vel[2];
+        }
+        Rotation q = new Rotation(ys[Dynamics.Q], ys[Dynamics.Q + 1], ys[Dynamics.Q + 2], ys[Dynamics.Q + 3], true);
+        return BallState.of(ts, new Vector3D(ys[Dynamics.C], ys[Dynamics.C + 1], ys[Dynamics.C + 2]),
+            new Vector3D(vx, vy, vz), q, new Vector3D(ys[Dynamics.W], ys[Dynamics.W + 1], ys[Dynamics.W + 2]), p);
+    }
+
+    private void trackForce(double ts, double[] ys, Phase p) {
+        if (p.inContact()) {
+            Phase keep = dyn.phase;
+            dyn.phase = p;
+            dyn.evaluate(ts, ys);
+            dyn.phase = keep;
+            maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
+        }
+    }
+
+    private void emitSample(double ts, double[] ys, Phase p, boolean isEvent) {
+        Phase keep = dyn.phase;
+        dyn.phase = p;
+        dyn.evaluate(ts, ys);
+        dyn.phase = keep;
+        BallState s = toState(ts, ys, p);
+        Vector3D fr = new Vector3D(dyn.friction[0], dyn.friction[1], dyn.friction[2]);
+        Vector3D cp = null;
+        if (p.inContact()) {
+            double[] n = dyn.geo.normal;
+            cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
+        }
+        observer.sample(new Sample(s, p.inContact() ? dyn.normalForce : 0.0, fr, cp, isEvent));
+    }
+
+    /** Step observer: samples, last good state, scales. */
+    private final class StepObserver implements ODEStepHandler {
+        @Override
+        public void handleStep(ODEStateInterpolator interpolator) {
+            steps++;
+            ODEStateAndDerivative cur = interpolator.getCurrentState();
+            double[] yc = cur.getPrimaryState();
+            double tc = cur.getTime();
+            double interval = set.sampleInterval();
+            if (interval > 0) {
+                while (true) {
+                    double ts = sampleT0 + (sampleIndex + 1) * interval;
+                    if (ts > tc || ts > endTime) {
+                        break;
+                    }
+                    sampleIndex++;
+                    ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
+                    emitSample(ts, si.getPrimaryState(), phase, false);
+                }
+            } else if (tc < endTime) {
+                emitSample(tc, yc, phase, false);
+            }
+            double ke = kinetic(yc);
+            maxKinetic = Math.max(maxKinetic, ke);
+            double dx = yc[0] - c0[0];
+            double dy = yc[1] - c0[1];
+            double dz = yc[2] - c0[2];
+            extent = Math.max(extent, Math.sqrt(dx * dx + dy * dy + dz * dz));
+            lastGood = toState(tc, yc, phase);
+        }
+    }
+
+    /** Step-end handler in contact: residuals, fit check and projection back onto d = r. */
+    private final class Projection implements ODEStepEndHandler {
+        @Override
+        public Action stepEndOccurred(ODEStateAndDerivative state, boolean forward) {
+            double[] ys = state.getPrimaryState();
+            double ts = state.getTime();
+            dyn.phase = phase;
+            dyn.evaluate(ts, ys);
+            maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
+            ContactGeometry geo = dyn.geo;
+            double res = Math.abs(geo.distance - r);
+            maxDistanceError = Math.max(maxDistanceError, res);
+            double slipRes = 0;
+            if (phase == Phase.ROLLING) {
+                double ex = ys[Dynamics.V] - dyn.vel[0];
+                double ey = ys[Dynamics.V + 1] - dyn.vel[1];
+                double ez = ys[Dynamics.V + 2] - dyn.vel[2];
+                slipRes = Math.sqrt(ex * ex + ey * ey + ez * ez);
+                maxRollingSlip = Math.max(maxRollingSlip, slipRes);
+            }
+            if (r * geo.curvature1 >= 1.0) {
+                geometryStop = String.format(Locale.ROOT,
+                    "ball of radius %s m no longer fits surface %s at the contact point: r*kappa = %s >= 1",
+                    r, surface.name(), r * geo.curvature1);
+                return Action.STOP;
+            }
+            double qn = Math.sqrt(ys[Dynamics.Q] * ys[Dynamics.Q] + ys[Dynamics.Q + 1] * ys[Dynamics.Q + 1]
+                + ys[Dynamics.Q + 2] * ys[Dynamics.Q + 2] + ys[Dynamics.Q + 3] * ys[Dynamics.Q + 3]);
+            if (res > set.projectionThreshold() * r || slipRes > set.projectionThreshold() * speedScale
+                || Math.abs(qn - 1) > 1e-12) {
+                double[] p = ys.clone();
+                double dr = r - geo.distance;
+                for (int i = 0; i < 3; i++) {
+                    p[Dynamics.C + i] += dr * geo.normal[i];
+                }
+                for (int i = 0; i < 4; i++) {
+                    p[Dynamics.Q + i] /= qn;
+                }
+                surface.query(ts, centre(p), geo);
+                double[] n = geo.normal;
+                if (phase == Phase.ROLLING) {
+                    double[] w = {p[Dynamics.W], p[Dynamics.W + 1], p[Dynamics.W + 2]};
+                    double[] v = new double[3];
+                    Dynamics.cross(w, n, v);
+                    for (int i = 0; i < 3; i++) {
+                        p[Dynamics.V + i] = r * v[i];
+                    }
+                } else {
+                    double vn = p[Dynamics.V] * n[0] + p[Dynamics.V + 1] * n[1] + p[Dynamics.V + 2] * n[2];
+                    for (int i = 0; i < 3; i++) {
+                        p[Dynamics.V + i] -= vn * n[i];
+                    }
+                }
+                pendingReset = p;
+                return Action.RESET_STATE;
+            }
+            return Action.CONTINUE;
+        }
+
+        @Override
+        public ODEState resetState(ODEStateAndDerivative state) {
+            double[] p = pendingReset;
+            pendingReset = null;
+            return new ODEState(state.getTime(), p);
+        }
+    }
+}

@@ -1,0 +1,24 @@
+package org.trundle.core;
+
+/**
+ * Kinds of logged run events. Each phase change has one of these as its cause.
+ */
+public enum EventKind {
+    /** The contact point crossed the patch edge. */
+    EXIT,
+    /** Rolling could no longer be held: the needed tangential force exceeded the grip. */
+    SLIP,
+    /** The slip speed fell to zero and the grip could hold rolling. */
+    STICK,
+    /** The normal force fell to zero: the ball left the surface. */
+    LIFT_OFF,
+    /** The ball met the surface from flight. */
+    IMPACT,
+    /** The ball came to rest in static equilibrium. */
+    REST;
+
+    /** @return the lower-case name used in files ({@code lift_off}) */
+    public String label() {
+        return name().toLowerCase(java.util.Locale.ROOT);
+    }
+}

@@ -1,0 +1,52 @@
+package org.trundle.core;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The outcome of one run: why it ended (and a message for typed stops), the end state, the event
+ * log, the per-phase summary, the energy budget, the largest constraint residuals and contact
+ * force, and the work done (right-hand-side evaluations, accepted steps).
+ *
+ * <p>Residuals: {@link #maxDistanceError()} is the largest {@code |d(c) − r|} (m) seen at the end of
+ * an accepted step in contact, before projection; {@link #maxRollingSlip()} is the largest
+ * difference (m/s) between the velocity integrated from Newton's law and the no-slip velocity
+ * {@code r ω × n} while rolling (the rolling motion itself follows {@code ċ = r ω × n} exactly).
+ *
+ * <p>Immutable.
+ *
+ * @param endReason why the run ended
+ * @param message details for typed stops, empty otherwise
+ * @param endState the end state
+ * @param events the event log, in time order
+ * @param phases the phases visited, in time order
+ * @param energy the energy budget
+ * @param maxDistanceError largest distance residual (m)
+ * @param maxRollingSlip largest slip residual while rolling (m/s)
+ * @param maxNormalForce largest normal force (N) at step ends and events
+ * @param evaluations right-hand-side evaluations (including event-function evaluations)
+ * @param steps accepted integration steps
+ */
+public record RunResult(EndReason endReason, String message, BallState endState, List<RunEvent> events,
+                        List<PhaseSpan> phases, EnergyBudget energy, double maxDistanceError,
+                        double maxRollingSlip, double maxNormalForce, long evaluations, long steps) {
+
+    /** Defensive copies of the lists. */
+    public RunResult {
+        events = List.copyOf(events);
+        phases = List.copyOf(phases);
+    }
+
+    /** @return the exit event, when the ball left the patch */
+    public Optional<RunEvent> exit() {
+        return events.stream().filter(e -> e.kind() == EventKind.EXIT).findFirst();
+    }
+
+    /**
+     * @param kind event kind
+     * @return the events of that kind
+     */
+    public List<RunEvent> eventsOf(EventKind kind) {
+        return events.stream().filter(e -> e.kind() == kind).toList();
+    }
+}

@@ -1,0 +1,23 @@
+package org.trundle.core;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+/**
+ * One output sample of a run: the state, and in contact the normal force (N), the tangential
+ * friction force on the ball (N, world frame) and the contact point (m). In flight the forces are
+ * zero and {@link #contactPoint()} is null. {@code event} is true for the samples written at the
+ * exact instant of an event.
+ *
+ * @param state the state
+ * @param normalForce normal force F_n (N)
+ * @param frictionForce tangential contact force on the ball (N)
+ * @param contactPoint contact point p = c − r n (m), or null in flight
+ * @param event whether this sample is an event instant
+ */
+public record Sample(BallState state, double normalForce, Vector3D frictionForce, Vector3D contactPoint,
+                     boolean event) {
+    /** @return time (s) */
+    public double time() {
+        return state.time();
+    }
+}

@@ -1,0 +1,75 @@
+package org.trundle.core;
+
+/**
+ * A rigid contact surface patch (the extension point for shapes).
+ *
+ * <p>For a query point {@code x} near the patch (the ball centre) an implementation writes into
+ * the run's {@link ContactGeometry} workspace: the closest point {@code p}, the unit normal
+ * {@code n} toward the ball, the signed distance {@code d = (x − p)·n}, the Hessian of the distance
+ * field {@code H = ∇²d(x)}, the principal curvatures at {@code p} (positive where concave toward
+ * the ball) and the signed patch margin (zero on the patch edge). The contact point of a ball of
+ * radius {@code r} touching the surface is {@code p = c − r n}.
+ *
+ * <p>Contract:
+ * <ul>
+ *   <li>Implementations are immutable and thread-safe; any per-run cache (a Newton seed) lives in
+ *       the workspace's {@link ContactGeometry#hint} or {@link ContactGeometry#scratch}.</li>
+ *   <li>{@link #query} allocates nothing on the hot path and never returns non-finite values for a
+ *       point within the surface's valid region; outside it, it throws
+ *       {@link SurfaceDomainException}.</li>
+ *   <li>{@code n} must equal the gradient of {@code d} and {@code H} its Hessian: the solver's
+ *       constraint accelerations use {@code ṅ = H v}.</li>
+ * </ul>
+ * Sign conventions follow the design notes: {@code H = ∇n = ∇²d}; the inside of a tube of radius
+ * {@code R} has principal curvature {@code +1/R}; a ball of radius {@code r} fits where
+ * {@code r κ < 1}.
+ */
+public interface Surface {
+
+    /**
+     * Computes the contact geometry seen from point {@code (x, y, z)} at time {@code t}.
+     *
+     * @param t time (s); static surfaces ignore it
+     * @param x query point, length-3 array (m), not modified
+     * @param out workspace to fill (owned by the calling run)
+     * @throws SurfaceDomainException when the point has no well-defined closest point
+     */
+    void query(double t, double[] x, ContactGeometry out);
+
+    /** @return a short human-readable name with the main parameters, used in messages */
+    String name();
+
+    /**
+     * @return whether the patch has edges (then {@link ContactGeometry#patchMargin} is finite and
+     *     leaving the patch is an event)
+     */
+    default boolean hasEdges() {
+        return false;
+    }
+
+    /**
+     * @param edge edge index as written to {@link ContactGeometry#edge}
+     * @return the edge's name (for instance {@code "from"} or {@code "to"} for an axial bound)
+     */
+    default String edgeName(int edge) {
+        return "edge" + edge;
+    }
+
+    /**
+     * Largest principal curvature (1/m) anywhere on the patch, for the fit check
+     * {@code r κ_max < 1} at the start of a run; {@link Double#NaN} when it cannot be known in
+     * advance (the solver then checks during the run, at each step).
+     *
+     * @return the largest concave curvature, 0 for a patch that is nowhere concave
+     */
+    default double maxConcaveCurvature() {
+        return Double.NaN;
+    }
+
+    /**
+     * @return a fresh per-run scratch object for {@link ContactGeometry#scratch}, or null
+     */
+    default Object newScratch() {
+        return null;
+    }
+}

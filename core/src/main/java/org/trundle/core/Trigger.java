@@ -1,0 +1,15 @@
+package org.trundle.core;
+
+/** The switching conditions the engine watches, one detector each. */
+enum Trigger {
+    /** Normal force falls to zero (contact phases), N. */
+    LIFT_OFF,
+    /** Grip minus needed tangential force falls to zero (rolling), N. */
+    SLIP,
+    /** Slip speed falls to the stick threshold (sliding), m/s. */
+    STICK,
+    /** Patch margin falls to zero (contact phases), m. */
+    EXIT,
+    /** Distance minus radius falls to zero, approaching, inside the patch (flight), m. */
+    IMPACT
+}
