@@ -39,6 +39,16 @@ final class CombinedLaw implements ContactLaw {
     }
 
     @Override
+    public double rollingHoldLimit(ContactContext c) {
+        return a.rollingHoldLimit(c) + b.rollingHoldLimit(c);
+    }
+
+    @Override
+    public double pivotHoldLimit(ContactContext c) {
+        return a.pivotHoldLimit(c) + b.pivotHoldLimit(c);
+    }
+
+    @Override
     public OptionalDouble restitution() {
         return restitution;
     }

@@ -18,6 +18,8 @@ public final class ContactContext {
     private double normalForce;
     private boolean impulse;
     private Phase phase = Phase.ROLLING;
+    private double smoothingSpin = 1e-3;
+    private double stickSpin = 1e-9;
     private final double[] slip = new double[3];
     private final double[] relativeSpin = new double[3];
     final double[] torque = new double[3];
@@ -53,6 +55,40 @@ public final class ContactContext {
      */
     public void prepare(Ball b, ContactGeometry g, double fn, Phase p, double[] s, double[] relSpin) {
         set(b, g, fn, p, s, relSpin, false);
+    }
+
+    /**
+     * Spin (rad/s) below which set-valued couples (rolling and pivoting resistance) are
+     * regularised: a couple law uses {@code w / max(|w|, smoothingSpin())} in place of the unit
+     * vector {@code ŵ}, so that inside the band the couple is proportional to the spin and can never
+     * reverse the motion it opposes. Set by the solver from
+     * {@link SolverSettings#smoothingSpinFraction()} times the speed scale over the radius.
+     *
+     * @return smoothing spin (rad/s, &gt; 0)
+     */
+    public double smoothingSpin() {
+        return smoothingSpin;
+    }
+
+    void setSmoothingSpin(double w) {
+        this.smoothingSpin = w;
+    }
+
+    /**
+     * The stick threshold expressed as a spin, {@code ε/r} (rad/s), with {@code ε} the sliding
+     * phase's stick speed ({@link SolverSettings#stickSpeedFraction()}). A couple whose sticking
+     * means the ball has stopped (rolling resistance on a static surface: zero rolling spin with no
+     * slip is zero speed) regularises with this much narrower band: the solver's rest test fires
+     * before the band is reached, so the band never makes the run stiff.
+     *
+     * @return stick spin (rad/s, &gt; 0)
+     */
+    public double stickSpin() {
+        return stickSpin;
+    }
+
+    void setStickSpin(double w) {
+        this.stickSpin = w;
     }
 
     /** @return the ball */

@@ -51,6 +51,29 @@ public interface ContactLaw {
     default void addCouples(ContactContext c) {
     }
 
+    /**
+     * Largest couple (N·m) about a tangent axis that the contact can hold against a ball at rest
+     * (zero rolling spin); used by the rest test. Rolling resistance of length {@code δ}:
+     * {@code δ F_n}.
+     *
+     * @param c the contact
+     * @return holding couple (N·m, ≥ 0)
+     */
+    default double rollingHoldLimit(ContactContext c) {
+        return 0.0;
+    }
+
+    /**
+     * Largest couple (N·m) about the normal that the contact can hold against a ball at rest;
+     * used by the rest test. Pivoting resistance of length {@code δ_p}: {@code δ_p F_n}.
+     *
+     * @param c the contact
+     * @return holding couple (N·m, ≥ 0)
+     */
+    default double pivotHoldLimit(ContactContext c) {
+        return 0.0;
+    }
+
     /** @return the normal coefficient of restitution in [0, 1], or empty when this law does not set it */
     default OptionalDouble restitution() {
         return OptionalDouble.empty();

@@ -22,8 +22,9 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
  *
  * <p>Sliding (§4): {@code F_n} from the normal constraint with the actual {@code v}; friction
  * {@code −f ŝ} with {@code f} from the law, {@code ŝ} the slip direction; below the stick
- * threshold {@code ε} the direction is blended continuously toward the direction {@code d₀} fixed
- * when sliding began. Flight: gravity and applied loads only.
+ * threshold {@code ε} the direction is held at {@code d₀}: at the onset of sliding the
+ * direction opposite the force rolling needed, afterwards the slip direction at the end of the last
+ * accepted step, so that the motion is smooth through the band. Flight: gravity and applied loads only.
  */
 final class Dynamics implements OrdinaryDifferentialEquation {
     static final int C = 0;
@@ -125,7 +126,8 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         double pOther = 0;
         double[] ax = tmp;
         switch (phase) {
-            case ROLLING: {
+            case ROLLING:
+            case REST: {
                 surface.query(t, c, geo);
                 double[] n = geo.normal;
                 // v = r w x n
@@ -191,18 +193,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
                         dir[i] = slip[i] / sp;
                     }
                 } else {
-                    double blend = stickEps - sp;
-                    for (int i = 0; i < 3; i++) {
-                        dir[i] = slip[i] + blend * slideDir0[i];
-                    }
-                    double dn = dot(dir, n);
-                    for (int i = 0; i < 3; i++) {
-                        dir[i] -= dn * n[i];
-                    }
-                    double len = norm(dir);
-                    if (len > 0) {
-                        scale(dir, 1.0 / len);
-                    }
+                    // inside the stick band the friction keeps the direction d0 it had on entering
+                    // (kept up to date at each step end by the engine), so that the motion stays
+                    // smooth through the band and the stick root is located on a smooth stretch
+                    System.arraycopy(slideDir0, 0, dir, 0, 3);
                 }
                 ctx.set(ball, geo, fn, Phase.SLIDING, slip, w, false);
                 double f = law.slidingFriction(ctx);
@@ -244,7 +238,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         double ix = tau[0];
         double iy = tau[1];
         double iz = tau[2];
-        if (phase.inContact()) {
+        if (phase != Phase.FLIGHT) {
             ix -= r * (n[1] * force[2] - n[2] * force[1]);
             iy -= r * (n[2] * force[0] - n[0] * force[2]);
             iz -= r * (n[0] * force[1] - n[1] * force[0]);
@@ -275,6 +269,51 @@ final class Dynamics implements OrdinaryDifferentialEquation {
                     + " at t = " + t + " s in phase " + phase.label());
             }
         }
+    }
+
+    /**
+     * Static-equilibrium test for a ball (nearly) at rest on the surface: with {@code a = 0},
+     * {@code α = 0}, the contact must supply {@code F = −(m g + F_app)} and the couple
+     * {@code τ_c = r n × F_t − τ_app}; rest holds when {@code F_n > 0}, {@code |F_t|} is within the
+     * grip and the tangential and normal parts of {@code τ_c} are within the law's holding limits
+     * (each with a tolerance of {@code slack} times {@code m|g|} or {@code m|g|r}).
+     */
+    boolean canRest(double t, double[] y, double slack) {
+        System.arraycopy(y, C, c, 0, 3);
+        System.arraycopy(y, Q, q, 0, 4);
+        System.arraycopy(y, W, w, 0, 3);
+        System.arraycopy(y, V, vel, 0, 3);
+        zero(fApp);
+        zero(tApp);
+        surface.query(t, c, geo);
+        double[] n = geo.normal;
+        load.apply(t, c, vel, q, w, fApp, tApp);
+        double[] f = tmp;
+        for (int i = 0; i < 3; i++) {
+            f[i] = -(m * g[i] + fApp[i]);
+        }
+        double fn = dot(f, n);
+        if (!(fn > 0)) {
+            return false;
+        }
+        for (int i = 0; i < 3; i++) {
+            f[i] -= fn * n[i];
+        }
+        zero(slip);
+        zero(hv);
+        ctx.set(ball, geo, fn, Phase.ROLLING, slip, hv, false);
+        double scaleF = slack * m * Math.max(norm(g), 1e-300) + slack * norm(fApp);
+        if (norm(f) > law.gripLimit(ctx) + scaleF) {
+            return false;
+        }
+        cross(n, f, tau);
+        for (int i = 0; i < 3; i++) {
+            tau[i] = r * tau[i] - tApp[i];
+        }
+        double tn = dot(tau, n);
+        double tt = Math.sqrt(Math.max(0.0, dot(tau, tau) - tn * tn));
+        double scaleT = scaleF * r + slack * norm(tApp);
+        return tt <= law.rollingHoldLimit(ctx) + scaleT && Math.abs(tn) <= law.pivotHoldLimit(ctx) + scaleT;
     }
 
     /** Thrown when the evaluation budget is used up. */

@@ -37,6 +37,7 @@ final class Engine {
     private double stickEps;
     private double settleSpeed;
     private double impactSlack;
+    private double restSpeed;
     private double restitution;
     private double[] absTol;
     private double[] relTol;
@@ -103,7 +104,10 @@ final class Engine {
         stickEps = set.stickSpeedFraction() * speedScale;
         settleSpeed = set.settleSpeed() > 0 ? set.settleSpeed() : Math.max(0.01 * Math.sqrt(gn * r), 1e-6);
         impactSlack = 1e-9 * r;
+        restSpeed = set.restSpeedFraction() * speedScale;
         dyn.stickEps = stickEps;
+        dyn.ctx.setSmoothingSpin(set.smoothingSpinFraction() * speedScale / r);
+        dyn.ctx.setStickSpin(stickEps / r);
         double tol = set.tolerance();
         double eScale = m * speedScale * speedScale + m * gn * r;
         absTol = new double[Dynamics.DIM];
@@ -224,6 +228,7 @@ final class Engine {
         if (phase.inContact()) {
             integ.addStepEndHandler(new Projection());
             integ.addEventDetector(new SwitchDetector(this, Trigger.LIFT_OFF, set));
+            integ.addEventDetector(new SwitchDetector(this, Trigger.REST, set));
             if (surface.hasEdges()) {
                 integ.addEventDetector(new SwitchDetector(this, Trigger.EXIT, set));
             }
@@ -258,11 +263,57 @@ final class Engine {
             case EXIT:
                 surface.query(ts, centre(ys), dyn.geo);
                 return dyn.geo.patchMargin;
+            case REST: {
+                dyn.evaluate(ts, ys);
+                double wx = ys[Dynamics.W];
+                double wy = ys[Dynamics.W + 1];
+                double wz = ys[Dynamics.W + 2];
+                return Dynamics.norm(dyn.vel) + r * Math.sqrt(wx * wx + wy * wy + wz * wz) - restSpeed;
+            }
             case IMPACT:
             default:
                 surface.query(ts, centre(ys), dyn.geo);
                 return dyn.geo.distance - r + impactSlack;
         }
+    }
+
+    /**
+     * Check interval of the stick detector (s). The slip speed {@code |s|} falls to zero with a kink
+     * and bounces back, so a step may pass both roots of {@code |s| − ε} between two checks; while
+     * {@code |s|} decreases, the next check is set at half the time {@code (|s| − ε)/|d|s|/dt|} the
+     * slip needs to reach the band at its current rate, so checks close in geometrically on the
+     * root and never step over it.
+     */
+    double stickCheckInterval(ODEStateAndDerivative s) {
+        double[] ys = s.getPrimaryState();
+        double[] yd = s.getPrimaryDerivative();
+        double ts = s.getTime();
+        dyn.evaluate(ts, ys);
+        double sp = dyn.slipSpeed;
+        double gap = sp - stickEps;
+        if (!(gap > 0)) {
+            return set.maxCheckInterval();
+        }
+        double[] n = dyn.geo.normal;
+        double[] h = dyn.geo.hessian;
+        double[] v = {ys[Dynamics.V], ys[Dynamics.V + 1], ys[Dynamics.V + 2]};
+        double[] hv = new double[3];
+        Dynamics.mulSym(h, v, hv);
+        double[] w = {ys[Dynamics.W], ys[Dynamics.W + 1], ys[Dynamics.W + 2]};
+        double[] wd = {yd[Dynamics.W], yd[Dynamics.W + 1], yd[Dynamics.W + 2]};
+        double[] a = new double[3];
+        double[] b = new double[3];
+        Dynamics.cross(wd, n, a);
+        Dynamics.cross(w, hv, b);
+        double rate = 0;
+        for (int i = 0; i < 3; i++) {
+            double sdot = yd[Dynamics.V + i] - r * a[i] - r * b[i];
+            rate += dyn.slip[i] * sdot / sp;
+        }
+        if (!(rate < 0)) {
+            return set.maxCheckInterval();
+        }
+        return Math.min(set.maxCheckInterval(), Math.max(0.5 * gap / -rate, set.eventTimeTolerance()));
     }
 
     /** Reaction to a located root of a trigger's event function. */
@@ -278,6 +329,9 @@ final class Engine {
             if (dyn.geo.patchMargin < 0 || vn >= 0) {
                 return Action.CONTINUE;
             }
+        }
+        if (trig == Trigger.REST && !dyn.canRest(s.getTime(), s.getPrimaryState(), 1e-9)) {
+            return Action.CONTINUE;
         }
         fired = trig;
         return Action.STOP;
@@ -327,6 +381,14 @@ final class Engine {
                 changePhase(Phase.FLIGHT);
                 log(EventKind.EXIT, before, null, Vector3D.ZERO, edge);
                 return null;
+            }
+            case REST: {
+                if (phase == Phase.ROLLING) {
+                    setDerivedVelocity();
+                }
+                changePhase(Phase.REST);
+                log(EventKind.REST, before, null, Vector3D.ZERO);
+                return EndReason.REST;
             }
             case IMPACT:
             default: {
@@ -625,7 +687,7 @@ final class Engine {
         double vx = ys[Dynamics.V];
         double vy = ys[Dynamics.V + 1];
         double vz = ys[Dynamics.V + 2];
-        if (p == Phase.ROLLING) {
+        if (p == Phase.ROLLING || p == Phase.REST) {
             Phase keep = dyn.phase;
             dyn.phase = Phase.ROLLING;
             dyn.evaluate(ts, ys);
@@ -657,11 +719,12 @@ final class Engine {
         BallState s = toState(ts, ys, p);
         Vector3D fr = new Vector3D(dyn.friction[0], dyn.friction[1], dyn.friction[2]);
         Vector3D cp = null;
-        if (p.inContact()) {
+        boolean touching = p != Phase.FLIGHT;
+        if (touching) {
             double[] n = dyn.geo.normal;
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
         }
-        observer.sample(new Sample(s, p.inContact() ? dyn.normalForce : 0.0, fr, cp, isEvent));
+        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, isEvent));
     }
 
     /** Step observer: samples, last good state, scales. */
@@ -685,6 +748,16 @@ final class Engine {
                 }
             } else if (tc < endTime) {
                 emitSample(tc, yc, phase, false);
+            }
+            if (phase == Phase.SLIDING) {
+                dyn.phase = Phase.SLIDING;
+                dyn.evaluate(tc, yc);
+                double sp = dyn.slipSpeed;
+                if (sp > stickEps) {
+                    for (int i = 0; i < 3; i++) {
+                        dyn.slideDir0[i] = dyn.slip[i] / sp;
+                    }
+                }
             }
             double ke = kinetic(yc);
             maxKinetic = Math.max(maxKinetic, ke);

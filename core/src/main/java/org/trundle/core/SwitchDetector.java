@@ -19,7 +19,9 @@ final class SwitchDetector extends AbstractODEDetector<SwitchDetector> {
     private final Trigger trigger;
 
     SwitchDetector(Engine engine, Trigger trigger, SolverSettings set) {
-        this(engine, trigger, AdaptableInterval.of(set.maxCheckInterval()), 100,
+        this(engine, trigger, trigger == Trigger.STICK
+                ? (state, forward) -> engine.stickCheckInterval(state)
+                : AdaptableInterval.of(set.maxCheckInterval()), 100,
             new BracketingNthOrderBrentSolver(0.0, set.eventTimeTolerance(), 0.0, 5), null);
     }
 

@@ -10,6 +10,8 @@ enum Trigger {
     STICK,
     /** Patch margin falls to zero (contact phases), m. */
     EXIT,
+    /** Speed |v| + r|ω| falls to the rest threshold (contact phases), m/s. */
+    REST,
     /** Distance minus radius falls to zero, approaching, inside the patch (flight), m. */
     IMPACT
 }
