@@ -157,6 +157,16 @@ final class Engine {
                 reason = EndReason.DURATION;
                 break;
             }
+            if (phase.inContact() && restsNow()) {
+                BallState before = toState(t, y, phase);
+                if (phase == Phase.ROLLING) {
+                    setDerivedVelocity();
+                }
+                changePhase(Phase.REST);
+                log(EventKind.REST, before, null, Vector3D.ZERO);
+                reason = EndReason.REST;
+                break;
+            }
             fired = null;
             geometryStop = null;
             ODEStateAndDerivative end;
@@ -244,6 +254,15 @@ final class Engine {
             integ.addEventDetector(new SwitchDetector(this, Trigger.IMPACT, set));
         }
         return integ.integrate(dyn, new ODEState(t, y.clone()), endTime);
+    }
+
+    /** Whether the ball, at the start of a contact segment, is already slow enough and held at rest. */
+    private boolean restsNow() {
+        dyn.phase = phase;
+        dyn.evaluate(t, y);
+        double w = Math.sqrt(y[Dynamics.W] * y[Dynamics.W] + y[Dynamics.W + 1] * y[Dynamics.W + 1]
+            + y[Dynamics.W + 2] * y[Dynamics.W + 2]);
+        return Dynamics.norm(dyn.vel) + r * w <= restSpeed && dyn.canRest(t, y, 1e-9);
     }
 
     /** Event function value of a trigger at a state. */
@@ -339,10 +358,15 @@ final class Engine {
 
     /** Applies the switch of a fired trigger at (t, y); returns an end reason or null to go on. */
     private EndReason applySwitch(Trigger trig) {
+        if (trig == Trigger.IMPACT) {
+            rewindToContact();
+        }
         BallState before = toState(t, y, phase);
         switch (trig) {
             case LIFT_OFF: {
-                setDerivedVelocity();
+                if (phase == Phase.ROLLING) {
+                    setDerivedVelocity();
+                }
                 changePhase(Phase.FLIGHT);
                 log(EventKind.LIFT_OFF, before, null, Vector3D.ZERO);
                 return null;
@@ -553,6 +577,30 @@ final class Engine {
         applyImpulse(j);
         y[Dynamics.LOSS + LossKind.SLIDING_FRICTION.ordinal()] += before - kinetic(y);
         return new Vector3D(j[0], j[1], j[2]);
+    }
+
+    /**
+     * The impact detector fires at a penetration of {@code impactSlack} (so that its function is
+     * strictly positive when a flight starts on the surface); this moves the flight state back
+     * along its own motion, {@code δt = (r − d)/|v_n|}, to the instant of contact {@code d = r}.
+     */
+    private void rewindToContact() {
+        surface.query(t, centre(y), dyn.geo);
+        double[] n = dyn.geo.normal;
+        double vn = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
+        double pen = r - dyn.geo.distance;
+        if (!(vn < 0) || !(pen > 0)) {
+            return;
+        }
+        double dt = pen / -vn;
+        double[] yd = new double[Dynamics.DIM];
+        dyn.phase = Phase.FLIGHT;
+        dyn.evaluate(t, y, yd);
+        for (int i = 0; i < 3; i++) {
+            y[Dynamics.C + i] += -y[Dynamics.V + i] * dt + 0.5 * yd[Dynamics.V + i] * dt * dt;
+            y[Dynamics.V + i] -= yd[Dynamics.V + i] * dt;
+        }
+        t -= dt;
     }
 
     /** Impact at re-contact: restitution and friction impulses, then the settling hand-over. */
