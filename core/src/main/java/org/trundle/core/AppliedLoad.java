@@ -5,7 +5,7 @@ package org.trundle.core;
  * magnet, an air jet, Magnus lift). Zero by default ({@link #NONE}).
  *
  * <p>The arrays are the solver's workspaces: read {@code centre}, {@code velocity},
- * {@code orientation} (unit quaternion, scalar first, body to world) and {@code spin}; write the
+ * {@code orientation} (unit quaternion, scalar first, Hamilton convention, body to world: the conjugate of the components Hipparchus' {@code Rotation} stores) and {@code spin}; write the
  * force (N, world frame, applied at the centre) into {@code force} and the torque about the centre
  * (N·m) into {@code torque}, both zero on entry. Implementations must be deterministic, allocate
  * nothing if speed matters, and be thread-safe (a sweep shares them across threads).

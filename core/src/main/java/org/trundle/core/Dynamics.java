@@ -6,7 +6,7 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
  * The right-hand side of one phase, on primitive arrays, allocation-free.
  *
  * <p>State layout (the one mapper between domain state and arrays): centre c [0,3), velocity v
- * [3,6), quaternion q [6,10) (scalar first, body to world), spin ω [10,13), dissipated work by
+ * [3,6), quaternion q [6,10) (scalar first, Hamilton convention, body to world: {@code x_world = q x_body q*}, {@code q̇ = ½ (0, ω) q}; Hipparchus' {@code Rotation} holds the conjugate of these components), spin ω [10,13), dissipated work by
  * {@link LossKind} [13,17), applied-load work [17], centre path length [18].
  *
  * <p>Rolling (design notes §3): with {@code n}, {@code H} at the centre and the no-slip velocity

@@ -64,6 +64,15 @@ final class Engine {
     private double sampleT0;
     private BallState lastGood;
 
+    // event-function workspaces (no allocation per call)
+    private final double[] gx = new double[3];
+    private final double[] gv = new double[3];
+    private final double[] ghv = new double[3];
+    private final double[] gw = new double[3];
+    private final double[] gwd = new double[3];
+    private final double[] ga = new double[3];
+    private final double[] gb = new double[3];
+
     // set by handlers during a segment
     private Trigger fired;
     private String geometryStop;
@@ -93,9 +102,9 @@ final class Engine {
         put(y, Dynamics.C, start.centre());
         put(y, Dynamics.V, start.velocity());
         y[Dynamics.Q] = q.getQ0();
-        y[Dynamics.Q + 1] = q.getQ1();
-        y[Dynamics.Q + 2] = q.getQ2();
-        y[Dynamics.Q + 3] = q.getQ3();
+        y[Dynamics.Q + 1] = -q.getQ1();
+        y[Dynamics.Q + 2] = -q.getQ2();
+        y[Dynamics.Q + 3] = -q.getQ3();
         put(y, Dynamics.W, start.spin());
         c0 = start.centre().toArray();
         double gn = Dynamics.norm(g);
@@ -157,6 +166,12 @@ final class Engine {
                 reason = EndReason.DURATION;
                 break;
             }
+            if (dyn.evaluations >= set.maxEvaluations()) {
+                reason = EndReason.BUDGET;
+                message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+                dyn.budget = Long.MAX_VALUE;
+                break;
+            }
             if (phase.inContact() && restsNow()) {
                 BallState before = toState(t, y, phase);
                 if (phase == Phase.ROLLING) {
@@ -175,6 +190,7 @@ final class Engine {
             } catch (Dynamics.BudgetExhausted e) {
                 reason = EndReason.BUDGET;
                 message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+                dyn.budget = Long.MAX_VALUE;
                 restoreLastGood();
                 break;
             } catch (SurfaceDomainException e) {
@@ -196,7 +212,13 @@ final class Engine {
                 reason = EndReason.DURATION;
                 break;
             }
-            reason = applySwitch(fired);
+            try {
+                reason = applySwitch(fired);
+            } catch (Dynamics.BudgetExhausted e) {
+                reason = EndReason.BUDGET;
+                message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+                dyn.budget = Long.MAX_VALUE;
+            }
         }
         closeSpan();
         BallState endState = toState(t, y, phase);
@@ -224,9 +246,9 @@ final class Engine {
         put(y, Dynamics.W, lastGood.spin());
         Rotation q = lastGood.orientation();
         y[Dynamics.Q] = q.getQ0();
-        y[Dynamics.Q + 1] = q.getQ1();
-        y[Dynamics.Q + 2] = q.getQ2();
-        y[Dynamics.Q + 3] = q.getQ3();
+        y[Dynamics.Q + 1] = -q.getQ1();
+        y[Dynamics.Q + 2] = -q.getQ2();
+        y[Dynamics.Q + 3] = -q.getQ3();
         phase = lastGood.phase();
     }
 
@@ -280,7 +302,7 @@ final class Engine {
                 dyn.evaluate(ts, ys);
                 return dyn.slipSpeed - stickEps;
             case EXIT:
-                surface.query(ts, centre(ys), dyn.geo);
+                surface.query(ts, centreInto(ys, gx), dyn.geo);
                 return dyn.geo.patchMargin;
             case REST: {
                 dyn.evaluate(ts, ys);
@@ -291,7 +313,7 @@ final class Engine {
             }
             case IMPACT:
             default:
-                surface.query(ts, centre(ys), dyn.geo);
+                surface.query(ts, centreInto(ys, gx), dyn.geo);
                 return dyn.geo.distance - r + impactSlack;
         }
     }
@@ -315,18 +337,17 @@ final class Engine {
         }
         double[] n = dyn.geo.normal;
         double[] h = dyn.geo.hessian;
-        double[] v = {ys[Dynamics.V], ys[Dynamics.V + 1], ys[Dynamics.V + 2]};
-        double[] hv = new double[3];
-        Dynamics.mulSym(h, v, hv);
-        double[] w = {ys[Dynamics.W], ys[Dynamics.W + 1], ys[Dynamics.W + 2]};
-        double[] wd = {yd[Dynamics.W], yd[Dynamics.W + 1], yd[Dynamics.W + 2]};
-        double[] a = new double[3];
-        double[] b = new double[3];
-        Dynamics.cross(wd, n, a);
-        Dynamics.cross(w, hv, b);
+        for (int i = 0; i < 3; i++) {
+            gv[i] = ys[Dynamics.V + i];
+            gw[i] = ys[Dynamics.W + i];
+            gwd[i] = yd[Dynamics.W + i];
+        }
+        Dynamics.mulSym(h, gv, ghv);
+        Dynamics.cross(gwd, n, ga);
+        Dynamics.cross(gw, ghv, gb);
         double rate = 0;
         for (int i = 0; i < 3; i++) {
-            double sdot = yd[Dynamics.V + i] - r * a[i] - r * b[i];
+            double sdot = yd[Dynamics.V + i] - r * ga[i] - r * gb[i];
             rate += dyn.slip[i] * sdot / sp;
         }
         if (!(rate < 0)) {
@@ -720,6 +741,13 @@ final class Engine {
         return 0.5 * m * v2 + 0.5 * inertia * w2;
     }
 
+    private static double[] centreInto(double[] ys, double[] out) {
+        out[0] = ys[Dynamics.C];
+        out[1] = ys[Dynamics.C + 1];
+        out[2] = ys[Dynamics.C + 2];
+        return out;
+    }
+
     private static double[] centre(double[] ys) {
         return new double[] {ys[Dynamics.C], ys[Dynamics.C + 1], ys[Dynamics.C + 2]};
     }
@@ -744,7 +772,8 @@ final class Engine {
             vy = dyn.vel[1];
             vz = dyn.vel[2];
         }
-        Rotation q = new Rotation(ys[Dynamics.Q], ys[Dynamics.Q + 1], ys[Dynamics.Q + 2], ys[Dynamics.Q + 3], true);
+        // the state holds the Hamilton quaternion (body to world); Hipparchus stores its conjugate
+        Rotation q = new Rotation(ys[Dynamics.Q], -ys[Dynamics.Q + 1], -ys[Dynamics.Q + 2], -ys[Dynamics.Q + 3], true);
         return BallState.of(ts, new Vector3D(ys[Dynamics.C], ys[Dynamics.C + 1], ys[Dynamics.C + 2]),
             new Vector3D(vx, vy, vz), q, new Vector3D(ys[Dynamics.W], ys[Dynamics.W + 1], ys[Dynamics.W + 2]), p);
     }

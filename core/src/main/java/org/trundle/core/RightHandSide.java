@@ -8,7 +8,7 @@ import org.hipparchus.geometry.euclidean.threed.Rotation;
  * per call.
  *
  * <p>State array layout ({@link #dimension()} = 19): centre (m) [0,3), velocity (m/s) [3,6),
- * orientation quaternion, scalar first [6,10), spin (rad/s) [10,13), dissipated work by
+ * orientation quaternion, scalar first, Hamilton convention body to world (the conjugate of the components Hipparchus' {@code Rotation} stores) [6,10), spin (rad/s) [10,13), dissipated work by
  * {@link LossKind} (J) [13,17), applied-load work (J) [17], centre path length (m) [18]. In the
  * rolling phase the centre's derivative is the no-slip velocity {@code r ω × n(c)}.
  *
@@ -64,9 +64,9 @@ public final class RightHandSide {
         y[5] = s.velocity().getZ();
         Rotation q = s.orientation();
         y[6] = q.getQ0();
-        y[7] = q.getQ1();
-        y[8] = q.getQ2();
-        y[9] = q.getQ3();
+        y[7] = -q.getQ1();
+        y[8] = -q.getQ2();
+        y[9] = -q.getQ3();
         y[10] = s.spin().getX();
         y[11] = s.spin().getY();
         y[12] = s.spin().getZ();

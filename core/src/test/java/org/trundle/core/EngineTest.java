@@ -1,0 +1,110 @@
+package org.trundle.core;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.OptionalDouble;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.RotationConvention;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.junit.jupiter.api.Test;
+
+/** Core-only checks of the phase machine on a test floor, with test-only laws. */
+class EngineTest {
+    static final double G = 9.81;
+    static final ContactLaw GRIP = () -> "unbounded grip";
+
+    static final class Bouncy implements ContactLaw {
+        private final double e;
+
+        Bouncy(double e) {
+            this.e = e;
+        }
+
+        @Override
+        public OptionalDouble restitution() {
+            return OptionalDouble.of(e);
+        }
+
+        @Override
+        public String name() {
+            return "bouncy(e=" + e + ")";
+        }
+    }
+
+    private static Simulation floor(ContactLaw law, double halfWidth) {
+        return Simulation.builder().ball(Ball.solid(0.01, 0.02)).surface(new FloorForTests(halfWidth)).law(law)
+            .gravity(new Vector3D(0, 0, -G)).build();
+    }
+
+    /** Free flight is a parabola and the spin is constant (common practice). */
+    @Test
+    void flightIsAParabola() {
+        Simulation sim = floor(GRIP, Double.POSITIVE_INFINITY);
+        Vector3D w = new Vector3D(3, -2, 5);
+        BallState s0 = BallState.flying(new Vector3D(0, 0, 1.0), new Vector3D(0.5, 0.2, 1.0), w);
+        RunResult res = sim.run(s0, 0.3);
+        assertEquals(EndReason.DURATION, res.endReason());
+        BallState e = res.endState();
+        assertEquals(0.15, e.centre().getX(), 1e-12);
+        assertEquals(1.0 + 0.3 - 0.5 * G * 0.09, e.centre().getZ(), 1e-12);
+        assertEquals(1.0 - G * 0.3, e.velocity().getZ(), 1e-12);
+        assertTrue(e.spin().subtract(w).getNorm() < 1e-12);
+        // the orientation turned by |w| t about w
+        Rotation expect = new Rotation(w, w.getNorm() * 0.3, RotationConvention.VECTOR_OPERATOR);
+        assertTrue(Rotation.distance(expect, e.orientation()) < 1e-9);
+    }
+
+    /** A drop from height h lands at sqrt(2h/g); with e = 0 and unbounded grip it stays (rest). */
+    @Test
+    void plasticLandingComesToRest() {
+        Simulation sim = floor(GRIP, Double.POSITIVE_INFINITY);
+        RunResult res = sim.run(BallState.flying(new Vector3D(0, 0, 0.01 + 0.2), Vector3D.ZERO, Vector3D.ZERO), 1.0);
+        RunEvent impact = res.eventsOf(EventKind.IMPACT).get(0);
+        assertEquals(Math.sqrt(2 * 0.2 / G), impact.time(), 1e-12);
+        assertEquals(0.02 * Math.sqrt(2 * G * 0.2), impact.impulse().getZ(), 1e-12);
+        assertEquals(EndReason.REST, res.endReason());
+        assertEquals(0.02 * G * 0.2, res.energy().impactLoss(), 1e-12);
+    }
+
+    /** Rolling off the edge of the patch is an exit naming the edge. */
+    @Test
+    void exitNamesTheEdge() {
+        Simulation sim = floor(GRIP, 0.1);
+        RunResult res = sim.run(sim.rollingStart(new Vector3D(0, 0, 0.01), new Vector3D(-0.5, 0, 0)), 1.0);
+        assertEquals(EndReason.EXIT, res.endReason());
+        RunEvent exit = res.exit().orElseThrow();
+        assertEquals("left", exit.edge());
+        assertEquals(0.2, exit.time(), 1e-12);
+        // continue in flight instead: the ball falls off the edge
+        Simulation on = sim.withSettings(SolverSettings.defaults().withStopAtExit(false));
+        RunResult fly = on.run(on.rollingStart(new Vector3D(0, 0, 0.01), new Vector3D(-0.5, 0, 0)), 0.5);
+        assertEquals(EndReason.DURATION, fly.endReason());
+        assertEquals(Phase.FLIGHT, fly.endState().phase());
+        assertEquals(0.01 - 0.5 * G * 0.09, fly.endState().centre().getZ(), 1e-10);
+    }
+
+    /** The settle hand-over: a bouncing ball ends in contact; restitution must be in [0, 1]. */
+    @Test
+    void restitutionRange() {
+        assertThrows(IllegalArgumentException.class, () -> floor(new Bouncy(1.2), 1.0));
+        RunResult res = floor(new Bouncy(0.6), 1.0).run(
+            BallState.flying(new Vector3D(0, 0, 0.05), Vector3D.ZERO, Vector3D.ZERO), 2.0);
+        assertEquals(EndReason.REST, res.endReason());
+        assertTrue(res.eventsOf(EventKind.IMPACT).size() > 3);
+        assertTrue(res.energy().relativeResidual() < 1e-10);
+    }
+
+    @Test
+    void settingsRejectBadValues() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+            () -> SolverSettings.defaults().withMaxCheckInterval(0));
+        assertTrue(e.getMessage().contains("maxCheckInterval"));
+        e = assertThrows(IllegalArgumentException.class, () -> SolverSettings.defaults().withMaxEvaluations(-1));
+        assertTrue(e.getMessage().contains("maxEvaluations") && e.getMessage().contains("-1"));
+        e = assertThrows(IllegalArgumentException.class, () -> Simulation.builder().build());
+        assertTrue(e.getMessage().contains("ball"));
+    }
+}
