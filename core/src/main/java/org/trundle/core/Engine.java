@@ -62,7 +62,9 @@ final class Engine {
     private long steps;
     private int sampleIndex;
     private double sampleT0;
-    private BallState lastGood;
+    private double[] lastGoodY;
+    private double lastGoodT;
+    private Phase lastGoodPhase;
 
     // event-function workspaces (no allocation per call)
     private final double[] gx = new double[3];
@@ -142,7 +144,9 @@ final class Engine {
         phase = startPhase(start.phase());
         BallState s0 = toState(t, y, phase);
         double e0 = sim.energy(s0);
-        lastGood = s0;
+        lastGoodY = y.clone();
+        lastGoodT = t;
+        lastGoodPhase = phase;
         maxKinetic = s0.kineticEnergy(sim.ball());
         observer.start(s0);
         spanStart = t;
@@ -199,7 +203,7 @@ final class Engine {
                 restoreLastGood();
                 break;
             } catch (Dynamics.NumericalFailure | MathRuntimeException e) {
-                throw new SimulationException("run failed: " + e.getMessage(), lastGood, e);
+                throw new SimulationException("run failed: " + e.getMessage(), lastGoodState(), e);
             }
             t = end.getTime();
             y = end.getPrimaryState();
@@ -240,16 +244,14 @@ final class Engine {
     }
 
     private void restoreLastGood() {
-        t = lastGood.time();
-        put(y, Dynamics.C, lastGood.centre());
-        put(y, Dynamics.V, lastGood.velocity());
-        put(y, Dynamics.W, lastGood.spin());
-        Rotation q = lastGood.orientation();
-        y[Dynamics.Q] = q.getQ0();
-        y[Dynamics.Q + 1] = -q.getQ1();
-        y[Dynamics.Q + 2] = -q.getQ2();
-        y[Dynamics.Q + 3] = -q.getQ3();
-        phase = lastGood.phase();
+        t = lastGoodT;
+        y = lastGoodY.clone();
+        phase = lastGoodPhase;
+    }
+
+    private BallState lastGoodState() {
+        dyn.budget = Long.MAX_VALUE;
+        return toState(lastGoodT, lastGoodY, lastGoodPhase);
     }
 
     private ODEStateAndDerivative integrateSegment() {
@@ -789,6 +791,9 @@ final class Engine {
     }
 
     private void emitSample(double ts, double[] ys, Phase p, boolean isEvent) {
+        if (observer == RunObserver.NONE) {
+            return;
+        }
         Phase keep = dyn.phase;
         dyn.phase = p;
         dyn.evaluate(ts, ys);
@@ -842,7 +847,9 @@ final class Engine {
             double dy = yc[1] - c0[1];
             double dz = yc[2] - c0[2];
             extent = Math.max(extent, Math.sqrt(dx * dx + dy * dy + dz * dz));
-            lastGood = toState(tc, yc, phase);
+            lastGoodY = yc;
+            lastGoodT = tc;
+            lastGoodPhase = phase;
         }
     }
 
