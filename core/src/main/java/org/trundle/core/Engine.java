@@ -801,12 +801,14 @@ final class Engine {
         BallState s = toState(ts, ys, p);
         Vector3D fr = new Vector3D(dyn.friction[0], dyn.friction[1], dyn.friction[2]);
         Vector3D cp = null;
+        Vector3D onBall = null;
         boolean touching = p != Phase.FLIGHT;
         if (touching) {
             double[] n = dyn.geo.normal;
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
+            onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         }
-        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, isEvent));
+        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent));
     }
 
     /** Step observer: samples, last good state, scales. */

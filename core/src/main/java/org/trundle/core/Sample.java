@@ -5,17 +5,20 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 /**
  * One output sample of a run: the state, and in contact the normal force (N), the tangential
  * friction force on the ball (N, world frame) and the contact point (m). In flight the forces are
- * zero and {@link #contactPoint()} is null. {@code event} is true for the samples written at the
- * exact instant of an event.
+ * zero and {@link #contactPoint()} and {@link #contactOnBall()} are null. {@code event} is true for
+ * the samples written at the exact instant of an event. {@code contactOnBall} is the contact point
+ * in the ball's body frame relative to its centre, {@code q*(−r n)q} (m), so a sequence of samples
+ * traces the contact path on the ball (wear track) as well as on the surface.
  *
  * @param state the state
  * @param normalForce normal force F_n (N)
  * @param frictionForce tangential contact force on the ball (N)
  * @param contactPoint contact point p = c − r n (m), or null in flight
+ * @param contactOnBall contact point in the body frame relative to the centre (m), or null in flight
  * @param event whether this sample is an event instant
  */
 public record Sample(BallState state, double normalForce, Vector3D frictionForce, Vector3D contactPoint,
-                     boolean event) {
+                     Vector3D contactOnBall, boolean event) {
     /** @return time (s) */
     public double time() {
         return state.time();
