@@ -69,6 +69,24 @@ class EngineTest {
         assertEquals(0.02 * G * 0.2, res.energy().impactLoss(), 1e-12);
     }
 
+    /**
+     * Rolling in a straight line, the contact point traces a great circle on the ball: the angle
+     * it has swept equals the distance rolled over the radius (rolling without slip, common practice).
+     */
+    @Test
+    void contactPathOnTheBall() {
+        Simulation sim = floor(GRIP, Double.POSITIVE_INFINITY)
+            .withSettings(SolverSettings.defaults().withSampleInterval(0.01));
+        java.util.List<Sample> samples = new java.util.ArrayList<>();
+        sim.run(sim.rollingStart(new Vector3D(0, 0, 0.01), new Vector3D(0.05, 0, 0)), 0.5, samples::add);
+        Vector3D first = samples.get(0).contactOnBall();
+        for (Sample s : samples) {
+            double angle = Vector3D.angle(first, s.contactOnBall());
+            assertEquals(0.05 * s.time() / 0.01, angle, 1e-8);
+            assertEquals(0.01, s.contactOnBall().getNorm(), 1e-12);
+        }
+    }
+
     /** Rolling off the edge of the patch is an exit naming the edge. */
     @Test
     void exitNamesTheEdge() {
