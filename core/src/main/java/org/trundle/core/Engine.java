@@ -75,6 +75,14 @@ final class Engine {
     private final double[] ga = new double[3];
     private final double[] gb = new double[3];
 
+    // event values of the last few states asked about
+    private static final int CACHE = 4;
+    private final double[][] cacheY = new double[CACHE][Dynamics.DIM];
+    private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
+    private final Phase[] cachePhase = new Phase[CACHE];
+    private final double[][] cacheValues = new double[CACHE][6];
+    private int cacheNext;
+
     // set by handlers during a segment
     private Trigger fired;
     private String geometryStop;
@@ -293,31 +301,61 @@ final class Engine {
     double g(Trigger trig, ODEStateAndDerivative s) {
         double[] ys = s.getPrimaryState();
         double ts = s.getTime();
+        int slot = -1;
+        for (int i = 0; i < CACHE; i++) {
+            if (cachePhase[i] == phase && cacheTime[i] == ts && java.util.Arrays.equals(ys, cacheY[i])) {
+                slot = i;
+                break;
+            }
+        }
+        if (slot < 0) {
+            slot = cacheNext;
+            cacheNext = (cacheNext + 1) % CACHE;
+            evaluateEventValues(ts, ys, slot);
+        }
+        double[] v = cacheValues[slot];
         switch (trig) {
             case LIFT_OFF:
-                dyn.evaluate(ts, ys);
-                return dyn.normalForce;
+                return v[0];
             case SLIP:
-                dyn.evaluate(ts, ys);
-                return dyn.grip - dyn.neededTangential;
+                return v[1];
             case STICK:
-                dyn.evaluate(ts, ys);
-                return dyn.slipSpeed - stickEps;
+                return v[2] - stickEps;
             case EXIT:
-                surface.query(ts, centreInto(ys, gx), dyn.geo);
-                return dyn.geo.patchMargin;
-            case REST: {
-                dyn.evaluate(ts, ys);
-                double wx = ys[Dynamics.W];
-                double wy = ys[Dynamics.W + 1];
-                double wz = ys[Dynamics.W + 2];
-                return Dynamics.norm(dyn.vel) + r * Math.sqrt(wx * wx + wy * wy + wz * wz) - restSpeed;
-            }
+                return v[4];
+            case REST:
+                return v[3] - restSpeed;
             case IMPACT:
             default:
-                surface.query(ts, centreInto(ys, gx), dyn.geo);
-                return dyn.geo.distance - r + impactSlack;
+                return v[5] - r + impactSlack;
         }
+    }
+
+    /**
+     * Evaluates every event function of the current phase at once, into one slot of a small cache:
+     * Hipparchus asks each detector in turn about the same few states of a step (its check points
+     * and end), so one evaluation per state serves all detectors.
+     */
+    private void evaluateEventValues(double ts, double[] ys, int slot) {
+        double[] v = cacheValues[slot];
+        dyn.phase = phase;
+        if (phase.inContact()) {
+            dyn.evaluate(ts, ys);
+            v[0] = dyn.normalForce;
+            v[1] = dyn.grip - dyn.neededTangential;
+            v[2] = dyn.slipSpeed;
+            double wx = ys[Dynamics.W];
+            double wy = ys[Dynamics.W + 1];
+            double wz = ys[Dynamics.W + 2];
+            v[3] = Dynamics.norm(dyn.vel) + r * Math.sqrt(wx * wx + wy * wy + wz * wz);
+        } else {
+            surface.query(ts, centreInto(ys, gx), dyn.geo);
+        }
+        v[4] = dyn.geo.patchMargin;
+        v[5] = dyn.geo.distance;
+        System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
+        cacheTime[slot] = ts;
+        cachePhase[slot] = phase;
     }
 
     /**
