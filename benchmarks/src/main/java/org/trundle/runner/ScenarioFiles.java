@@ -67,6 +67,7 @@ final class ScenarioFiles {
             if (cut >= 0) {
                 m = m.substring(0, cut);
             }
+            m = m.replaceAll("\\[Source: .*?; line: ", "[line: ");
             String where = loc == null ? "" : " at line " + loc.getLineNr() + ", column " + loc.getColumnNr();
             throw new ScenarioException("malformed JSON" + where + ": " + m.trim());
         }
