@@ -46,7 +46,7 @@ final class DemoCommand implements Callable<Integer> {
         String text = ScenarioFiles.demoText();
         Scenario sc = Scenario.parse(ScenarioFiles.parse(text));
         OutputFolder.checkDemo(out, force);
-        RunOutputs.Outcome o = RunOutputs.execute(sc, out, true);
+        RunOutputs.Report o = RunOutputs.execute(sc, out, true);
         Files.writeString(out.resolve("scenario.json"), text, StandardCharsets.UTF_8);
         PrintWriter w = spec.commandLine().getOut();
         w.println("Trundle demo (all data invented): does the ball come back out of the return tube?");
@@ -55,7 +55,7 @@ final class DemoCommand implements Callable<Integer> {
         }
         RunOutputs.print(w, sc, o, out);
         w.println("          " + out.resolve("scenario.json") + " (the demo scenario; edit it and use: trundle run)");
-        return o.result() == null ? Main.FAILED : 0;
+        return o.exitCode();
     }
 
     /**

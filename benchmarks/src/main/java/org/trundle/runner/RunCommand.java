@@ -63,8 +63,11 @@ final class RunCommand implements Callable<Integer> {
         JsonNode doc = override(ScenarioFiles.read(scenario), duration, sampleInterval);
         Scenario sc = Scenario.parse(doc);
         OutputFolder.check(out, force);
-        RunOutputs.Outcome o = RunOutputs.execute(sc, out, false);
+        RunOutputs.Report o = RunOutputs.execute(sc, out, false);
+        if (doc.has("sweep")) {
+            spec.commandLine().getOut().println("Note:     the sweep section is ignored by run (use: trundle sweep)");
+        }
         RunOutputs.print(spec.commandLine().getOut(), sc, o, out);
-        return o.result() == null ? Main.FAILED : 0;
+        return o.exitCode();
     }
 }

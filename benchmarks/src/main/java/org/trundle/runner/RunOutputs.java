@@ -21,8 +21,18 @@ import org.trundle.core.SimulationException;
  * ({@link RunPlot}); then prints a short text summary.
  */
 final class RunOutputs {
-    /** What a run produced. */
-    record Outcome(RunResult result, String failure, RunRecorder recorder) {
+    /**
+     * What a run produced.
+     *
+     * @param result the result, or null when the library stopped the run with an exception
+     * @param failure why it failed, or null
+     * @param recorder the recorded samples and events
+     */
+    record Report(RunResult result, String failure, RunRecorder recorder) {
+        /** @return 0, or {@link Main#FAILED} when the run failed (exception or geometry stop) */
+        int exitCode() {
+            return result == null || result.endReason() == EndReason.GEOMETRY ? Main.FAILED : 0;
+        }
     }
 
     private RunOutputs() {
@@ -44,7 +54,7 @@ final class RunOutputs {
      * @return the run's outcome
      * @throws IOException when an output cannot be written
      */
-    static Outcome execute(Scenario sc, Path dir, boolean demo) throws IOException {
+    static Report execute(Scenario sc, Path dir, boolean demo) throws IOException {
         Simulation sim = sc.simulation();
         Vector3D up = up(sc);
         RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo));
@@ -73,7 +83,7 @@ final class RunOutputs {
         }
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
-        return new Outcome(result, failure, rec);
+        return new Report(result, failure, rec);
     }
 
     /** The first sentence of the description (or "Trundle run"), for the picture's title. */
@@ -111,7 +121,7 @@ final class RunOutputs {
      * @param o the outcome
      * @param dir the output folder
      */
-    static void print(PrintWriter out, Scenario sc, Outcome o, Path dir) {
+    static void print(PrintWriter out, Scenario sc, Report o, Path dir) {
         if (!sc.description().isEmpty()) {
             out.println("Scenario: " + sc.description());
         }

@@ -102,7 +102,10 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
             }
         }
         String title = "Regime map: " + String.join(" x ", space.names()) + " (" + space.size() + " runs)";
-        map.write(out.resolve("regime-map.png"), title, sw.random());
+        boolean drawn = space.names().size() <= 2;
+        if (drawn) {
+            map.write(out.resolve("regime-map.png"), title, sw.random());
+        }
         PrintWriter w = spec.commandLine().getOut();
         Scenario base = Scenario.parse(doc);
         if (!base.description().isEmpty()) {
@@ -113,7 +116,8 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         StringBuilder b = new StringBuilder();
         counts.forEach((k, v) -> b.append(b.length() == 0 ? "" : ", ").append(k).append(' ').append(v));
         w.println("Outcomes: " + b);
-        w.println("Files:    " + out.resolve("sweep.csv") + ", " + out.resolve("regime-map.png"));
+        w.println("Files:    " + out.resolve("sweep.csv") + (drawn ? ", " + out.resolve("regime-map.png")
+            : " (the regime map is drawn for one or two parameters only)"));
         w.flush();
         return 0;
     }

@@ -85,4 +85,16 @@ class SweepCommandTest {
         assertTrue(rows.get(2).startsWith("1,-0.1,duration,duration,,0.5,"), rows.get(2));
         assertTrue(rows.get(3).startsWith("2,-0.2,duration,duration,,0.5,"), rows.get(3));
     }
+
+    @Test
+    void threeParametersGiveRowsWithoutAMap() throws IOException {
+        Path f = Cli.write(dir, "three.json", sweepOf("{\"start.speed\": [0.9, 1.0], \"start.elevation_deg\": [-15],"
+            + " \"contact.static_friction\": [0.4]}"));
+        Path out = dir.resolve("three");
+        Cli.Result r = Cli.run("sweep", f.toString(), "--out", out.toString(), "--no-progress");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("the regime map is drawn for one or two parameters only"), r.out());
+        assertEquals(3, Files.readAllLines(out.resolve("sweep.csv")).size());
+        assertTrue(Files.notExists(out.resolve("regime-map.png")));
+    }
 }
