@@ -20,9 +20,9 @@ import picocli.CommandLine.Option;
  * comes back out, when and how fast.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-    description = {"Runs the built-in demo (invented data): an 8 mm steel ball fed at an angle into the top of a",
-        "30 mm bore vertical return tube. Does it come back out, when, how fast? Writes the usual run outputs",
-        "plus scenario.json (the demo's scenario, a starting point for your own) into --out."})
+    description = {"Runs the built-in demo (invented data): an 8 mm steel ball fed at an angle into the top of a 30 mm"
+        + " bore vertical return tube. Does it come back out, when, how fast? Writes the usual run outputs plus"
+        + " scenario.json (the demo's scenario, a starting point for your own) into --out."})
 final class DemoCommand implements Callable<Integer> {
     /** The demo's default output folder. */
     static final String DEFAULT_OUT = "trundle-demo";

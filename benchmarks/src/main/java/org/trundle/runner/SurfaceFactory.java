@@ -18,6 +18,14 @@ import org.trundle.surfaces.Side;
  * {@code axis}, {@code radius}, {@code side}, {@code from}, {@code to}). All lengths in metres;
  * {@code from}/{@code to} are axial distances from {@code origin} along {@code axis}, unbounded
  * when left out.
+ *
+ * <p>Keys reserved for the types still to be wired (from the scenario-runner issue): {@code cone}
+ * ({@code apex}, {@code axis}, {@code half_angle} in degrees, {@code side}, {@code from}, {@code to});
+ * {@code sphere} ({@code center}, {@code radius}, {@code side}, plus cap bounds); {@code torus}
+ * ({@code center}, {@code axis}, {@code major_radius}, {@code minor_radius}, {@code side}, plus
+ * angular bounds); {@code revolution} ({@code origin}, {@code axis}, {@code profile}: a list of
+ * {@code [axial, radius]} pairs, {@code side}); {@code spline_tube} ({@code centerline}: a list of
+ * points, {@code radius}: a number or one per point).
  */
 final class SurfaceFactory {
     /** One surface type: reads its keys from the section and builds the surface. */

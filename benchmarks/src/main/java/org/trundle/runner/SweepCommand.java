@@ -22,8 +22,8 @@ import picocli.CommandLine.Parameters;
 
 /** {@code trundle sweep SCENARIO.json --out DIR}: the runs of a scenario's sweep section. */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
-    description = {"Runs the scenario once per point of its sweep section (in parallel) and writes sweep.csv",
-        "(one row per run, same rows on any thread count) and regime-map.png into --out."})
+    description = {"Runs the scenario once per point of its sweep section, in parallel, and writes sweep.csv (one row"
+        + " per run, the same rows on any thread count) and regime-map.png into --out."})
 final class SweepCommand implements Callable<Integer>, Main.ErrStream {
     @Parameters(index = "0", paramLabel = "SCENARIO.json", description = "scenario file with a sweep section (JSON; SI)")
     Path scenario;
