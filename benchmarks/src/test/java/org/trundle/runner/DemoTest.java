@@ -78,6 +78,22 @@ class DemoTest {
             assertEquals(exit.before().spin().toArray()[i], ev.get("spin").get(i).asDouble(), 0.0);
         }
         assertEquals(direct.energy().initial(), summary.get("energy").get("initial").asDouble(), 0.0);
+        for (String key : List.of("end_reason", "end_time", "end_state", "events", "energy", "max_distance_error",
+            "max_rolling_slip", "max_normal_force", "phases")) {
+            assertTrue(summary.has(key), "summary.json has " + key);
+        }
+        for (String key : List.of("position", "velocity", "spin")) {
+            assertTrue(summary.get("end_state").has(key), "end_state has " + key);
+        }
+        for (String key : List.of("initial", "final", "friction_loss", "rolling_resistance_loss",
+            "pivoting_resistance_loss", "impact_loss")) {
+            assertTrue(summary.get("energy").has(key), "energy has " + key);
+        }
+        JsonNode phase = summary.get("phases").get(0);
+        assertEquals("rolling", phase.get("phase").asText());
+        assertEquals(0.0, phase.get("start").asDouble());
+        assertEquals(exit.time(), phase.get("end").asDouble(), 0.0);
+        assertEquals(direct.phases().get(0).centrePath(), phase.get("centre_path").asDouble(), 0.0);
         assertEquals(direct.maxNormalForce(), summary.get("max_normal_force").asDouble(), 0.0);
 
         // Closed form (M. Gualtieri, T. Tokieda et al., "Golfer's dilemma", Am. J. Phys. 74 (2006)
