@@ -85,7 +85,8 @@ final class Palette {
         s.setChartBackgroundColor(Color.WHITE);
         s.setPlotBackgroundColor(Color.WHITE);
         s.setPlotBorderVisible(true);
-        s.setLegendPosition(Styler.LegendPosition.InsideNE);
+        s.setLegendPosition(Styler.LegendPosition.OutsideS);
+        s.setLegendLayout(Styler.LegendLayout.Horizontal);
         s.setLegendBackgroundColor(new Color(255, 255, 255, 220));
         s.setChartTitleBoxVisible(false);
         s.setPlotGridLinesColor(new Color(0xdd, 0xdd, 0xdd));

@@ -62,6 +62,7 @@ final class RegimeMap {
         boolean two = names.size() > 1;
         XYChart c = Palette.chart(1000, 760, title, Units.label(names.get(0)), two ? Units.label(names.get(1)) : "end time (s)");
         c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideE);
+        c.getStyler().setLegendLayout(Styler.LegendLayout.Vertical);
         c.getStyler().setMarkerSize(7);
         int cells = byOutcome.values().stream().mapToInt(List::size).sum();
         boolean tiles = two && !random && cells <= MAX_TILES;

@@ -56,7 +56,7 @@ final class RunPlot {
             rec.height.toArray(), rec.phases);
         XYChart speed = phaseChart("Speed of the centre", "time t (s)", "speed |v| (m/s)", t, rec.speed.toArray(),
             rec.phases);
-        addEdgeLevels(height, surface, up, t);
+        addEdgeLevels(height, surface, up, t, rec.height.toArray());
         markEvents(height, rec.events, e -> e.before().centre().dotProduct(up));
         markEvents(speed, rec.events, e -> e.before().velocity().getNorm());
         XYChart forces = Palette.chart(W, H, "Contact forces", "time t (s)", "force (N)");
@@ -197,8 +197,11 @@ final class RunPlot {
         }
     }
 
-    /** Dashed levels of a cylinder's rims in the height panel, when its axis is along gravity. */
-    private static void addEdgeLevels(XYChart c, Surface surface, Vector3D up, double[] t) {
+    /**
+     * Dashed levels of a cylinder's rims in the height panel, when its axis is along gravity and the
+     * rim lies within two height ranges of the path (a far rim would flatten the curve).
+     */
+    private static void addEdgeLevels(XYChart c, Surface surface, Vector3D up, double[] t, double[] h) {
         if (!(surface instanceof Cylinder) || t.length < 2) {
             return;
         }
@@ -206,13 +209,19 @@ final class RunPlot {
         if (Math.abs(Math.abs(cyl.axis().dotProduct(up)) - 1) > 1e-9) {
             return;
         }
+        double hmin = java.util.Arrays.stream(h).min().orElse(0);
+        double hmax = java.util.Arrays.stream(h).max().orElse(0);
+        double span = Math.max(hmax - hmin, 1e-3);
         double[] bounds = {cyl.from(), cyl.to()};
         String[] names = {"from", "to"};
         for (int i = 0; i < 2; i++) {
             if (Double.isFinite(bounds[i])) {
-                double h = cyl.origin().add(bounds[i], cyl.axis()).dotProduct(up);
+                double level = cyl.origin().add(bounds[i], cyl.axis()).dotProduct(up);
+                if (level < hmin - 2 * span || level > hmax + 2 * span) {
+                    continue;
+                }
                 XYSeries s = c.addSeries("edge \"" + names[i] + "\"", new double[] {t[0], t[t.length - 1]},
-                    new double[] {h, h});
+                    new double[] {level, level});
                 s.setMarker(SeriesMarkers.NONE);
                 s.setLineColor(new Color(0x80, 0x80, 0x80));
                 s.setLineStyle(SeriesLines.DASH_DASH);
