@@ -57,6 +57,8 @@ class RunCommandTest {
         assertEquals(t1, ev.get(0).get("time").asDouble(), 1e-10);
         assertEquals(-v1, ev.get(0).get("velocity").get(2).asDouble(), 1e-9);
         assertEquals(t2, ev.get(1).get("time").asDouble(), 1e-10);
+        System.out.println("impact times " + ev.get(0).get("time").asDouble() + ", " + ev.get(1).get("time").asDouble()
+            + " s; free fall " + t1 + ", " + t2 + " s");
         assertEquals(-0.5 * v1, ev.get(1).get("velocity").get(2).asDouble(), 1e-9);
         assertEquals(0.2 * t1, ev.get(0).get("position").get(0).asDouble(), 1e-10);
         double impactLoss = s.get("energy").get("impact_loss").asDouble();

@@ -229,6 +229,8 @@ class SweepTest {
         double bias = 1e-9;
         assertTrue(b.low() <= vStar + bias && vStar - bias <= b.high(),
             "bracket [" + b.low() + ", " + b.high() + "] vs v* = " + vStar);
+        System.out.println("bisection bracket [" + b.low() + ", " + b.high() + "] m/s, v* = " + vStar + " m/s, runs "
+            + b.runs());
         assertEquals(2 + (int) Math.ceil(Math.log(1.3 / tol) / Math.log(2)), b.runs());
         assertTrue(b.highRun().result().orElseThrow().exit().isPresent());
         assertFalse(b.lowRun().result().orElseThrow().exit().isPresent());
