@@ -1,38 +1,108 @@
 package org.trundle.runner;
 
-import java.util.Locale;
+import java.io.PrintStream;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
 
-import org.hipparchus.geometry.euclidean.threed.Vector3D;
-import org.trundle.contact.PureRolling;
-import org.trundle.core.Ball;
-import org.trundle.core.RunEvent;
-import org.trundle.core.RunResult;
-import org.trundle.core.Simulation;
-import org.trundle.surfaces.Cylinder;
-import org.trundle.surfaces.Side;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
 
 /**
- * Command-line entry point of the executable jar. For now it runs the built-in demo: an invented
- * parts-feeder case, an 8 mm steel ball rolling on the inside of a 30 mm bore vertical return tube.
+ * Command-line entry point of the executable jar {@code trundle.jar}: the scenario runner.
+ *
+ * <pre>
+ * java -jar trundle.jar run SCENARIO.json --out DIR
+ * java -jar trundle.jar sweep SCENARIO.json --out DIR [--threads N]
+ * java -jar trundle.jar demo [--out DIR]
+ * </pre>
+ *
+ * Exit codes: 0 done; 1 the run failed numerically or an output could not be written; 2 bad input
+ * (scenario or command line), reported as one line on standard error.
  */
-public final class Main {
-    private Main() {
+@Command(name = "trundle", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+    subcommands = {RunCommand.class, SweepCommand.class, DemoCommand.class, CommandLine.HelpCommand.class},
+    description = {"Simulates a rigid ball rolling, sliding, flying and leaving a rigid surface, from a JSON scenario.",
+        "All values SI: m, kg, s, N, rad/s; angles in degrees where the key ends in _deg."},
+    footer = {"", "Exit codes: 0 done, 1 run failed or output not written, 2 bad scenario or command line."})
+public final class Main implements Runnable {
+    /** Exit code for bad input. */
+    static final int BAD_INPUT = 2;
+    /** Exit code for a failed run or an output error. */
+    static final int FAILED = 1;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    /** Created by picocli. */
+    public Main() {
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
     }
 
     /**
-     * @param args command line (ignored for now)
+     * @param args command line
      */
     public static void main(String[] args) {
-        // invented demo data: 8 mm steel ball (2.1 g), 30 mm bore tube 0.3 m long, top end at z = 0
-        Ball ball = Ball.solid(0.004, 0.0021);
-        Cylinder tube = new Cylinder(Vector3D.ZERO, Vector3D.PLUS_K, 0.015, Side.INSIDE, -0.3, 0.0);
-        Simulation sim = Simulation.builder().ball(ball).surface(tube).law(new PureRolling())
-            .gravity(new Vector3D(0, 0, -9.81)).build();
-        RunResult res = sim.run(sim.rollingStart(new Vector3D(0.011, 0, -0.001), new Vector3D(0, 0.8, -0.3)), 3.0);
-        System.out.printf(Locale.ROOT, "end: %s at t = %.6f s%n", res.endReason().label(), res.endState().time());
-        for (RunEvent e : res.events()) {
-            System.out.println("event: " + e);
+        int code = execute(System.out, System.err, args);
+        System.exit(code);
+    }
+
+    /**
+     * Runs a command line with the given streams.
+     *
+     * @param out standard output
+     * @param err standard error (messages, the progress bar)
+     * @param args command line
+     * @return the exit code
+     */
+    static int execute(PrintStream out, PrintStream err, String... args) {
+        CommandLine cl = new CommandLine(new Main());
+        PrintWriter o = new PrintWriter(new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8), true);
+        PrintWriter e = new PrintWriter(new java.io.OutputStreamWriter(err, StandardCharsets.UTF_8), true);
+        cl.setOut(o);
+        cl.setErr(e);
+        for (CommandLine sub : cl.getSubcommands().values()) {
+            Object user = sub.getCommand();
+            if (user instanceof ErrStream) {
+                ((ErrStream) user).errStream(err);
+            }
         }
-        System.out.println("energy: " + res.energy());
+        cl.setParameterExceptionHandler((ex, a) -> {
+            String name = ex.getCommandLine().getCommandName();
+            e.println("trundle: error: " + ex.getMessage() + " (see: trundle " + (name.equals("trundle") ? "" : name + " ")
+                + "--help)");
+            return BAD_INPUT;
+        });
+        cl.setExecutionExceptionHandler((ex, c, parsed) -> {
+            if (ex instanceof ScenarioException) {
+                e.println("trundle: error: " + ex.getMessage());
+                return BAD_INPUT;
+            }
+            String m = ex.getMessage();
+            e.println("trundle: failed: " + ex.getClass().getSimpleName() + (m == null ? "" : ": "
+                + m.replace('\n', ' ')));
+            return FAILED;
+        });
+        int code = cl.execute(args);
+        o.flush();
+        e.flush();
+        return code;
+    }
+
+    /** A command that draws on standard error (the progress bar). */
+    interface ErrStream {
+        void errStream(PrintStream err);
+    }
+
+    /** Version text from the jar's manifest, or "development". */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = Main.class.getPackage().getImplementationVersion();
+            return new String[] {"trundle " + (v == null ? "(development build)" : v)};
+        }
     }
 }
