@@ -832,6 +832,8 @@ final class Engine {
         if (observer == RunObserver.NONE) {
             return;
         }
+        // output work is not counted: the evaluation count must not depend on the observer
+        long counted = dyn.evaluations;
         Phase keep = dyn.phase;
         dyn.phase = p;
         dyn.evaluate(ts, ys);
@@ -846,6 +848,7 @@ final class Engine {
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
             onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         }
+        dyn.evaluations = counted;
         observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent));
     }
 
