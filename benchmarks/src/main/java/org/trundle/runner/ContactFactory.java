@@ -3,7 +3,9 @@ package org.trundle.runner;
 import java.util.List;
 
 import org.trundle.contact.Coulomb;
+import org.trundle.contact.PivotingResistance;
 import org.trundle.contact.PureRolling;
+import org.trundle.contact.RollingResistance;
 import org.trundle.core.ContactLaw;
 
 /**
@@ -17,8 +19,8 @@ import org.trundle.core.ContactLaw;
  *       {@code rolling_resistance}, {@code pivoting_resistance}.</li>
  * </ul>
  * {@code restitution} e is in [0, 1], default 0. {@code rolling_resistance} and
- * {@code pivoting_resistance} are the couples' lengths (m, ≥ 0, default 0); this version has no
- * law for them, so a non-zero value is refused with a message saying so.
+ * {@code pivoting_resistance} are the couples' lengths (m, ≥ 0, default 0): a non-zero value adds
+ * {@link RollingResistance} or {@link PivotingResistance} to the law.
  */
 final class ContactFactory {
     private ContactFactory() {
@@ -57,15 +59,11 @@ final class ContactFactory {
             }
             base = new Coulomb(mus, muk, e);
         }
-        // Wiring point for the resistance laws: when their classes exist, combine them here with
-        // base.and(new ...(rolling)) and base.and(new ...(pivoting)).
         if (rolling > 0) {
-            throw new ScenarioException(s.where("rolling_resistance") + " = " + rolling
-                + " m: the rolling-resistance law is not available in this version of Trundle; set it to 0");
+            base = base.and(new RollingResistance(rolling));
         }
         if (pivoting > 0) {
-            throw new ScenarioException(s.where("pivoting_resistance") + " = " + pivoting
-                + " m: the pivoting-resistance law is not available in this version of Trundle; set it to 0");
+            base = base.and(new PivotingResistance(pivoting));
         }
         return base;
     }

@@ -123,8 +123,6 @@ class BadInputTest {
         "bounds            | \"from\": -0.25            | \"from\": 0.1               | surface.from must be below surface.to, got from = 0.1 m, to = 0.0 m",
         "zero axis         | \"axis\": [0, 0, 1]        | \"axis\": [0, 0, 0]         | surface.axis must be a non-zero direction, got [0, 0, 0]",
         "mu_k > mu_s       | \"kinetic_friction\": 0.3  | \"kinetic_friction\": 0.6   | contact.kinetic_friction = 0.6 exceeds contact.static_friction = 0.4; Coulomb friction needs mu_k <= mu_s",
-        "rolling resist.   | \"rolling_resistance\": 0.0 | \"rolling_resistance\": 1e-5 | contact.rolling_resistance = 1.0E-5 m: the rolling-resistance law is not available in this version of Trundle; set it to 0",
-        "pivoting resist.  | \"pivoting_resistance\": 0.0 | \"pivoting_resistance\": 2e-5 | contact.pivoting_resistance = 2.0E-5 m: the pivoting-resistance law is not available in this version of Trundle; set it to 0",
     })
     void outOfRangeIsNamed(String what, String from, String to, String message) {
         assertRejected(Cli.demoWith(from.strip(), to.strip()), message.strip());

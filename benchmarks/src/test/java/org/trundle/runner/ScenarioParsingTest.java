@@ -89,6 +89,28 @@ class ScenarioParsingTest {
         assertEquals(0, s.start().spin().dotProduct(n), 1e-12, "no spin about the normal");
     }
 
+    /**
+     * Rolling and pivoting resistance lengths add their couples: a ball rolling at 0.3 m/s on a
+     * level plane with δ = 2e-4 m, r = 0.01 m stops at rest after v0² (1+k) r/(2 δ g) (derived in
+     * PlaneFrictionTest).
+     */
+    @Test
+    void resistanceLengthsAddTheirLaws() {
+        Scenario s = parse("{\"ball\": {\"radius\": 0.01, \"mass\": 0.03},"
+            + " \"surface\": {\"type\": \"plane\", \"origin\": [0, 0, 0], \"normal\": [0, 0, 1]},"
+            + " \"contact\": {\"law\": \"coulomb\", \"static_friction\": 0.5, \"kinetic_friction\": 0.4,"
+            + " \"rolling_resistance\": 2e-4, \"pivoting_resistance\": 1e-5},"
+            + " \"start\": {\"position\": [0, 0, 0.01], \"velocity\": [0.3, 0, 0], \"spin\": \"rolling\"},"
+            + " \"run\": {\"duration\": 10}}");
+        Simulation sim = s.simulation();
+        assertTrue(sim.law().name().contains("rolling resistance(delta=2.0E-4 m)"), sim.law().name());
+        assertTrue(sim.law().name().contains("pivoting resistance(delta_p=1.0E-5 m)"), sim.law().name());
+        org.trundle.core.RunResult res = sim.run(s.start(), 10);
+        assertEquals(org.trundle.core.EndReason.REST, res.endReason());
+        double xStop = 0.09 * 1.4 * 0.01 / (2 * 2e-4 * 9.81);
+        assertEquals(xStop, res.endState().centre().getX(), 1e-8 * xStop);
+    }
+
     @Test
     void everyOtherKeyIsRead() {
         String json = "{\"description\": \"keys\","
