@@ -21,7 +21,7 @@ import org.trundle.core.SolverSettings;
  *
  * <p>Usage: {@code java -cp trundle.jar org.trundle.bench.WorkPrecision [out.md]}; writes a
  * Markdown table to the file (or to standard output without an argument). Wall times are the
- * best of three runs, indicative only.
+ * best of three runs after a warm-up pass of the whole table, indicative only.
  */
 public final class WorkPrecision {
     /** Height periods per run. */
@@ -35,6 +35,17 @@ public final class WorkPrecision {
      * @throws IOException when the file cannot be written
      */
     public static void main(String[] args) throws IOException {
+        table(); // warm-up pass (JIT), discarded
+        String md = table();
+        if (args.length > 0) {
+            Files.writeString(Path.of(args[0]), md, StandardCharsets.UTF_8);
+        } else {
+            PrintStream out = new PrintStream(System.out, true, StandardCharsets.UTF_8);
+            out.print(md);
+        }
+    }
+
+    private static String table() {
         StringBuilder md = new StringBuilder();
         md.append(String.format(Locale.ROOT, "| tolerance | library freq. error | library RHS evals | library steps"
             + " | library ms | baseline freq. error | baseline RHS evals | baseline ms |%n"));
@@ -65,11 +76,6 @@ public final class WorkPrecision {
             md.append(String.format(Locale.ROOT, "| 1e-%d | %.2e | %d | %d | %.2f | %.2e | %d | %.2f |%n", e,
                 Math.abs(fLib), res.evaluations(), res.steps(), libMs, Math.abs(fBase), base.evaluations(), baseMs));
         }
-        if (args.length > 0) {
-            Files.writeString(Path.of(args[0]), md.toString(), StandardCharsets.UTF_8);
-        } else {
-            PrintStream out = new PrintStream(System.out, true, StandardCharsets.UTF_8);
-            out.print(md);
-        }
+        return md.toString();
     }
 }
