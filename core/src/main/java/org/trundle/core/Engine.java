@@ -71,7 +71,11 @@ final class Engine {
     private long steps;
     private int sampleIndex;
     private double sampleT0;
-    private BallState lastGood;
+    // the state at the end of the last accepted step, kept as an array (copied, not evaluated or
+    // boxed per step); a BallState is built from it only when a run fails
+    private final double[] lastGoodY = new double[Dynamics.DIM];
+    private double lastGoodT;
+    private Phase lastGoodPhase;
 
     // set by handlers during a segment
     private Trigger fired;
@@ -139,7 +143,7 @@ final class Engine {
         phase = startPhase(start.phase());
         BallState s0 = toState(t, y, phase);
         double e0 = sim.energy(s0);
-        lastGood = s0;
+        markGood(t, y, phase);
         maxKinetic = s0.kineticEnergy(sim.ball());
         observer.start(s0);
         spanStart = t;
@@ -169,6 +173,8 @@ final class Engine {
             try {
                 end = integrateSegment();
             } catch (Dynamics.BudgetExhausted e) {
+                // lift the budget so that the end-of-run bookkeeping (end state, samples) can evaluate
+                dyn.budget = Long.MAX_VALUE;
                 reason = EndReason.BUDGET;
                 message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
                 restoreLastGood();
@@ -179,7 +185,9 @@ final class Engine {
                 restoreLastGood();
                 break;
             } catch (Dynamics.NumericalFailure | MathRuntimeException e) {
-                throw new SimulationException("run failed: " + e.getMessage(), lastGood, e);
+                dyn.budget = Long.MAX_VALUE;
+                throw new SimulationException("run failed: " + e.getMessage(),
+                    toState(lastGoodT, lastGoodY, lastGoodPhase), e);
             }
             t = end.getTime();
             y = end.getPrimaryState();
@@ -214,16 +222,15 @@ final class Engine {
     }
 
     private void restoreLastGood() {
-        t = lastGood.time();
-        put(y, Dynamics.C, lastGood.centre());
-        put(y, Dynamics.V, lastGood.velocity());
-        put(y, Dynamics.W, lastGood.spin());
-        Rotation q = lastGood.orientation();
-        y[Dynamics.Q] = q.getQ0();
-        y[Dynamics.Q + 1] = q.getQ1();
-        y[Dynamics.Q + 2] = q.getQ2();
-        y[Dynamics.Q + 3] = q.getQ3();
-        phase = lastGood.phase();
+        t = lastGoodT;
+        y = lastGoodY.clone();
+        phase = lastGoodPhase;
+    }
+
+    private void markGood(double ts, double[] ys, Phase p) {
+        System.arraycopy(ys, 0, lastGoodY, 0, Dynamics.DIM);
+        lastGoodT = ts;
+        lastGoodPhase = p;
     }
 
     private ODEStateAndDerivative integrateSegment() {
@@ -670,10 +677,20 @@ final class Engine {
         }
     }
 
-    private BallState emitSample(double ts, double[] ys, Phase p, boolean isEvent) {
+    private void emitSample(double ts, double[] ys, Phase p, boolean isEvent) {
+        if (observer == RunObserver.NONE) {
+            return; // nobody listens: build no sample (this is the default of Simulation.run)
+        }
         Phase keep = dyn.phase;
         dyn.phase = p;
+        // output evaluations are neither counted nor budgeted, so that the integration, the
+        // evaluation count and a budget stop do not depend on whether anyone observes the run
+        long count = dyn.evaluations;
+        long budget = dyn.budget;
+        dyn.budget = Long.MAX_VALUE;
         dyn.evaluate(ts, ys);
+        dyn.evaluations = count;
+        dyn.budget = budget;
         dyn.phase = keep;
         // dyn.vel now holds the phase's velocity (the no-slip one while rolling, the state's otherwise)
         BallState s = stateFromVelocity(ts, ys, p, dyn.vel[0], dyn.vel[1], dyn.vel[2]);
@@ -684,7 +701,6 @@ final class Engine {
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
         }
         observer.sample(new Sample(s, p.inContact() ? dyn.normalForce : 0.0, fr, cp, isEvent));
-        return s;
     }
 
     /** Step observer: samples, last good state, scales. */
@@ -701,7 +717,6 @@ final class Engine {
             double[] yc = cur.getPrimaryState();
             double tc = cur.getTime();
             double interval = set.sampleInterval();
-            BallState atEnd = null;
             if (interval > 0) {
                 while (true) {
                     double ts = sampleT0 + (sampleIndex + 1) * interval;
@@ -713,7 +728,7 @@ final class Engine {
                     emitSample(ts, si.getPrimaryState(), phase, false);
                 }
             } else if (tc < endTime) {
-                atEnd = emitSample(tc, yc, phase, false);
+                emitSample(tc, yc, phase, false);
             }
             double ke = kinetic(yc);
             maxKinetic = Math.max(maxKinetic, ke);
@@ -721,7 +736,7 @@ final class Engine {
             double dy = yc[1] - c0[1];
             double dz = yc[2] - c0[2];
             extent = Math.max(extent, Math.sqrt(dx * dx + dy * dy + dz * dz));
-            lastGood = atEnd != null ? atEnd : toState(tc, yc, phase);
+            markGood(tc, yc, phase);
         }
     }
 
