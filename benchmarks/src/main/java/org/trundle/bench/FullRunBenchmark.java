@@ -12,6 +12,7 @@ import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
+import org.trundle.bench.baseline.CostProbe;
 import org.trundle.bench.baseline.VerticalTubeRolling;
 import org.trundle.core.BallState;
 import org.trundle.core.EndReason;
@@ -31,6 +32,9 @@ import org.trundle.core.SolverSettings;
  * ({@code libraryEvaluations}, counting every kernel call of the run: integrator stages,
  * event functions, output samples, projections) and the simulated seconds
  * ({@code librarySimulatedSeconds}).
+ *
+ * <p>Two further baseline variants ({@link CostProbe}) add one cost of the library at a time, the
+ * longer state and one event detector at the default check interval, to decompose the ratio.
  *
  * <p>The trial setup runs both once and refuses to measure unless they reached the same accuracy:
  * end states agree to 1e-9 (centre relative to the orbit radius, velocity relative to the start
@@ -145,6 +149,32 @@ public class FullRunBenchmark {
         w.baselineEvaluations += base.evaluations();
         w.baselineSimulatedSeconds += s.duration;
         return end;
+    }
+
+    /**
+     * The baseline with the library's state length (19 components, the 6 extra ones idle): the
+     * integrator's own array work for a longer state.
+     *
+     * @param s scenario
+     * @return the end state (sunk by JMH)
+     */
+    @Benchmark
+    public double[] baselineWith19Components(Scenario s) {
+        return CostProbe.integrate(s.tube.baseline(), s.baseStart, s.duration, s.tolerance, 19, 0.0);
+    }
+
+    /**
+     * The baseline with one never-firing event detector checked at the library's default
+     * interval ({@code SolverSettings.maxCheckInterval()}, 1 ms): the cost of Hipparchus' event
+     * checks (one interpolated state per check) independent of what the event function computes.
+     *
+     * @param s scenario
+     * @return the end state (sunk by JMH)
+     */
+    @Benchmark
+    public double[] baselineWithOneDetector(Scenario s) {
+        return CostProbe.integrate(s.tube.baseline(), s.baseStart, s.duration, s.tolerance, VerticalTubeRolling.DIM,
+            SolverSettings.defaults().maxCheckInterval());
     }
 
     /**

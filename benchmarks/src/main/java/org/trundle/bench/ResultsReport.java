@@ -76,6 +76,15 @@ public final class ResultsReport {
             out.printf(Locale.ROOT, "| baseline right-hand-side evaluations per second | %.3g |%n",
                 secondary(base, "baselineEvaluations"));
         }
+        JsonNode pad = byKey.get("FullRunBenchmark.baselineWith19Components");
+        JsonNode det = byKey.get("FullRunBenchmark.baselineWithOneDetector");
+        if (base != null && pad != null && det != null) {
+            double b = score(base);
+            out.printf(Locale.ROOT, "| decomposition: baseline with the library's 19-component state / baseline | %.2f |%n",
+                b / score(pad));
+            out.printf(Locale.ROOT, "| decomposition: baseline with one event detector checked every 1 ms / baseline"
+                + " | %.2f |%n", b / score(det));
+        }
         JsonNode kLib = byKey.get("KernelBenchmark.libraryKernel law=PURE_ROLLING");
         JsonNode kHand = byKey.get("KernelBenchmark.handDerivedKernel");
         if (kLib != null && kHand != null) {

@@ -102,6 +102,11 @@ public final class VerticalTubeRolling implements OrdinaryDifferentialEquation {
         return DIM;
     }
 
+    /** @return ball radius r (m) */
+    public double ballRadius() {
+        return r;
+    }
+
     /** @return right-hand-side evaluations since construction */
     public long evaluations() {
         return evaluations;
