@@ -24,15 +24,15 @@ import com.fasterxml.jackson.databind.ObjectMapper;
  * a dated Markdown page labelled with the machine (processors, CPU model, JDK, load average).
  *
  * <p>Usage: {@code java -cp trundle.jar org.trundle.bench.ResultsReport jmh.json work-precision.md
- * memory.txt command > RESULTS.md}.
+ * memory.txt command [start-load] > RESULTS.md}.
  */
 public final class ResultsReport {
     private ResultsReport() {
     }
 
     /**
-     * @param args JMH JSON file, work–precision Markdown file, memory-check output file, and the
-     *     command line that produced them
+     * @param args JMH JSON file, work–precision Markdown file, memory-check output file, the
+     *     command line that produced them, and optionally the load average when the suite started
      * @throws IOException when a file cannot be read
      */
     public static void main(String[] args) throws IOException {
@@ -48,6 +48,9 @@ public final class ResultsReport {
             ZonedDateTime.now(ZoneOffset.UTC).format(DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'")),
             Runtime.getRuntime().availableProcessors(), cpuModel(), System.getProperty("java.version"),
             System.getProperty("java.vm.name"), loadAverage());
+        if (args.length > 4) {
+            out.println("Load average when the suite started: " + args[4] + " (1 / 5 / 15 min).");
+        }
         out.println("Absolute times are indicative only (the machine may be shared); the ratios are the claim.");
         out.println();
         out.println("Command: `" + args[3] + "`");
