@@ -32,6 +32,16 @@ final class Engine {
     private final double inertia;
     private final double[] g;
     private final Dynamics dyn;
+    private final double[] centreWork = new double[3];
+
+    /**
+     * Drift of the quaternion norm {@code ||q| − 1|} above which the step-end handler restarts the
+     * integrator only to normalise it. The norm does not enter the equations of motion (the spin
+     * is integrated on its own and every output state is normalised), so a tight threshold
+     * (1e-12 formerly) restarted the integration on most steps at the default tolerance for no
+     * gain in accuracy; the quaternion is still normalised whenever a projection happens anyway.
+     */
+    private static final double QUATERNION_DRIFT = 1e-9;
 
     private double speedScale;
     private double stickEps;
@@ -200,6 +210,8 @@ final class Engine {
             try {
                 end = integrateSegment();
             } catch (Dynamics.BudgetExhausted e) {
+                // lift the budget so that the end-of-run bookkeeping (end state, samples) can evaluate
+                dyn.budget = Long.MAX_VALUE;
                 reason = EndReason.BUDGET;
                 message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
                 dyn.budget = Long.MAX_VALUE;
@@ -403,7 +415,7 @@ final class Engine {
         }
         if (trig == Trigger.IMPACT) {
             double[] ys = s.getPrimaryState();
-            surface.query(s.getTime(), centre(ys), dyn.geo);
+            surface.query(s.getTime(), centreOf(ys), dyn.geo);
             double vn = ys[Dynamics.V] * dyn.geo.normal[0] + ys[Dynamics.V + 1] * dyn.geo.normal[1]
                 + ys[Dynamics.V + 2] * dyn.geo.normal[2];
             if (dyn.geo.patchMargin < 0 || vn >= 0) {
@@ -454,7 +466,7 @@ final class Engine {
                 return null;
             }
             case EXIT: {
-                surface.query(t, centre(y), dyn.geo);
+                surface.query(t, centreOf(y), dyn.geo);
                 String edge = surface.edgeName(dyn.geo.edge);
                 if (phase == Phase.ROLLING) {
                     setDerivedVelocity();
@@ -517,7 +529,7 @@ final class Engine {
     // ---------------------------------------------------------------- start
 
     private Phase startPhase(Phase requested) {
-        surface.query(t, centre(y), dyn.geo);
+        surface.query(t, centreOf(y), dyn.geo);
         double gap = dyn.geo.distance - r;
         double tolLen = set.contactTolerance() * r;
         if (requested == Phase.FLIGHT) {
@@ -630,7 +642,7 @@ final class Engine {
 
     /** Removes the contact-point slip by the impulse {@code J = −k m s/(1+k)}; books the loss. */
     private Vector3D stickImpulse() {
-        surface.query(t, centre(y), dyn.geo);
+        surface.query(t, centreOf(y), dyn.geo);
         double[] s = slipOf(y);
         double f = -k * m / (1 + k);
         double[] j = {f * s[0], f * s[1], f * s[2]};
@@ -646,7 +658,7 @@ final class Engine {
      * along its own motion, {@code δt = (r − d)/|v_n|}, to the instant of contact {@code d = r}.
      */
     private void rewindToContact() {
-        surface.query(t, centre(y), dyn.geo);
+        surface.query(t, centreOf(y), dyn.geo);
         double[] n = dyn.geo.normal;
         double vn = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
         double pen = r - dyn.geo.distance;
@@ -666,7 +678,7 @@ final class Engine {
 
     /** Impact at re-contact: restitution and friction impulses, then the settling hand-over. */
     private Vector3D impact() {
-        surface.query(t, centre(y), dyn.geo);
+        surface.query(t, centreOf(y), dyn.geo);
         double[] n = dyn.geo.normal.clone();
         double vn = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
         double[] s = slipOf(y);
@@ -746,7 +758,7 @@ final class Engine {
 
     /** Sets the velocity slot of y to the no-slip velocity r ω × n. */
     private void setDerivedVelocity() {
-        surface.query(t, centre(y), dyn.geo);
+        surface.query(t, centreOf(y), dyn.geo);
         double[] w = {y[Dynamics.W], y[Dynamics.W + 1], y[Dynamics.W + 2]};
         double[] v = new double[3];
         Dynamics.cross(w, dyn.geo.normal, v);
@@ -757,13 +769,13 @@ final class Engine {
 
     /** Moves the centre to distance r along the normal and removes the normal velocity. */
     private void projectOntoSurface() {
-        surface.query(t, centre(y), dyn.geo);
+        surface.query(t, centreOf(y), dyn.geo);
         double dr = r - dyn.geo.distance;
         double[] n = dyn.geo.normal;
         for (int i = 0; i < 3; i++) {
             y[Dynamics.C + i] += dr * n[i];
         }
-        surface.query(t, centre(y), dyn.geo);
+        surface.query(t, centreOf(y), dyn.geo);
         n = dyn.geo.normal;
         double vn = y[Dynamics.V] * n[0] + y[Dynamics.V + 1] * n[1] + y[Dynamics.V + 2] * n[2];
         if (phase == null || phase.inContact()) {
@@ -788,8 +800,12 @@ final class Engine {
         return out;
     }
 
-    private static double[] centre(double[] ys) {
-        return new double[] {ys[Dynamics.C], ys[Dynamics.C + 1], ys[Dynamics.C + 2]};
+    /**
+     * The centre of a state array, copied into the run's workspace (no allocation). The result is
+     * only valid until the next call.
+     */
+    private double[] centreOf(double[] ys) {
+        return centreInto(ys, centreWork);
     }
 
     private static void put(double[] a, int at, Vector3D v) {
@@ -812,6 +828,10 @@ final class Engine {
             vy = dyn.vel[1];
             vz = dyn.vel[2];
         }
+        return stateFromVelocity(ts, ys, p, vx, vy, vz);
+    }
+
+    private static BallState stateFromVelocity(double ts, double[] ys, Phase p, double vx, double vy, double vz) {
         // the state holds the Hamilton quaternion (body to world); Hipparchus stores its conjugate
         Rotation q = new Rotation(ys[Dynamics.Q], -ys[Dynamics.Q + 1], -ys[Dynamics.Q + 2], -ys[Dynamics.Q + 3], true);
         return BallState.of(ts, new Vector3D(ys[Dynamics.C], ys[Dynamics.C + 1], ys[Dynamics.C + 2]),
@@ -832,13 +852,19 @@ final class Engine {
         if (observer == RunObserver.NONE) {
             return;
         }
-        // output work is not counted: the evaluation count must not depend on the observer
-        long counted = dyn.evaluations;
         Phase keep = dyn.phase;
         dyn.phase = p;
+        // output evaluations are neither counted nor budgeted, so that the integration, the
+        // evaluation count and a budget stop do not depend on whether anyone observes the run
+        long count = dyn.evaluations;
+        long budget = dyn.budget;
+        dyn.budget = Long.MAX_VALUE;
         dyn.evaluate(ts, ys);
+        dyn.evaluations = count;
+        dyn.budget = budget;
         dyn.phase = keep;
-        BallState s = toState(ts, ys, p);
+        // dyn.vel now holds the phase's velocity (the no-slip one while rolling, the state's otherwise)
+        BallState s = stateFromVelocity(ts, ys, p, dyn.vel[0], dyn.vel[1], dyn.vel[2]);
         Vector3D fr = new Vector3D(dyn.friction[0], dyn.friction[1], dyn.friction[2]);
         Vector3D cp = null;
         Vector3D onBall = null;
@@ -848,7 +874,6 @@ final class Engine {
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
             onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         }
-        dyn.evaluations = counted;
         observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent));
     }
 
@@ -856,8 +881,13 @@ final class Engine {
     private final class StepObserver implements ODEStepHandler {
         @Override
         public void handleStep(ODEStateInterpolator interpolator) {
-            steps++;
             ODEStateAndDerivative cur = interpolator.getCurrentState();
+            if (cur.getTime() == interpolator.getPreviousState().getTime()) {
+                // Hipparchus hands over a zero-length remainder after a step-end handler that
+                // returned CONTINUE; it is not a step, and sampling it would duplicate the sample
+                return;
+            }
+            steps++;
             double[] yc = cur.getPrimaryState();
             double tc = cur.getTime();
             double interval = set.sampleInterval();
@@ -925,7 +955,7 @@ final class Engine {
             double qn = Math.sqrt(ys[Dynamics.Q] * ys[Dynamics.Q] + ys[Dynamics.Q + 1] * ys[Dynamics.Q + 1]
                 + ys[Dynamics.Q + 2] * ys[Dynamics.Q + 2] + ys[Dynamics.Q + 3] * ys[Dynamics.Q + 3]);
             if (res > set.projectionThreshold() * r || slipRes > set.projectionThreshold() * speedScale
-                || Math.abs(qn - 1) > 1e-12) {
+                || Math.abs(qn - 1) > QUATERNION_DRIFT) {
                 double[] p = ys.clone();
                 double dr = r - geo.distance;
                 for (int i = 0; i < 3; i++) {
@@ -934,7 +964,7 @@ final class Engine {
                 for (int i = 0; i < 4; i++) {
                     p[Dynamics.Q + i] /= qn;
                 }
-                surface.query(ts, centre(p), geo);
+                surface.query(ts, centreOf(p), geo);
                 double[] n = geo.normal;
                 if (phase == Phase.ROLLING) {
                     double[] w = {p[Dynamics.W], p[Dynamics.W + 1], p[Dynamics.W + 2]};

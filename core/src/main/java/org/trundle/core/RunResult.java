@@ -24,7 +24,9 @@ import java.util.Optional;
  * @param maxDistanceError largest distance residual (m)
  * @param maxRollingSlip largest slip residual while rolling (m/s)
  * @param maxNormalForce largest normal force (N) at step ends and events
- * @param evaluations right-hand-side evaluations (including event-function evaluations)
+ * @param evaluations right-hand-side evaluations: integrator stages, event functions, projections and
+ *     switches (the evaluations made only to build output samples are not counted, so the count
+ *     does not depend on the observer)
  * @param steps accepted integration steps
  */
 public record RunResult(EndReason endReason, String message, BallState endState, List<RunEvent> events,
