@@ -90,8 +90,9 @@ final class Engine {
     private final double[][] cacheY = new double[CACHE][Dynamics.DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
-    private final double[][] cacheValues = new double[CACHE][6];
+    private final double[][] cacheValues = new double[CACHE][7];
     private int cacheNext;
+    private double cachedHessianNorm;
 
     // set by handlers during a segment
     private Trigger fired;
@@ -326,6 +327,7 @@ final class Engine {
             evaluateEventValues(ts, ys, slot);
         }
         double[] v = cacheValues[slot];
+        cachedHessianNorm = v[6];
         switch (trig) {
             case LIFT_OFF:
                 return v[0];
@@ -365,6 +367,11 @@ final class Engine {
         }
         v[4] = dyn.geo.patchMargin;
         v[5] = dyn.geo.distance;
+        double hn = 0;
+        for (int i = 0; i < 9; i++) {
+            hn += dyn.geo.hessian[i] * dyn.geo.hessian[i];
+        }
+        v[6] = Math.sqrt(hn);
         System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
         cacheTime[slot] = ts;
         cachePhase[slot] = phase;
@@ -406,6 +413,25 @@ final class Engine {
             return set.maxCheckInterval();
         }
         return Math.min(set.maxCheckInterval(), Math.max(0.5 * gap / -rate, set.eventTimeTolerance()));
+    }
+
+    /**
+     * Check interval of the exit detector (s): the contact point {@code p = c − r n} moves at
+     * {@code |ṗ| = |(I − r H) v| ≤ |v| (1 + r‖H‖)}, so it cannot reach the patch edge, {@code margin}
+     * away, sooner than {@code margin / (|v| (1 + r‖H‖))}; half of that (and never less than the
+     * configured interval) is a safe time to the next check.
+     */
+    double exitCheckInterval(ODEStateAndDerivative s) {
+        double[] ys = s.getPrimaryState();
+        double margin = g(Trigger.EXIT, s);
+        if (!(margin > 0)) {
+            return set.maxCheckInterval();
+        }
+        double hessianNorm = cachedHessianNorm;
+        double v = Math.sqrt(ys[Dynamics.V] * ys[Dynamics.V] + ys[Dynamics.V + 1] * ys[Dynamics.V + 1]
+            + ys[Dynamics.V + 2] * ys[Dynamics.V + 2]);
+        double reach = margin / (v * (1 + r * hessianNorm) + 1e-300);
+        return Math.max(set.maxCheckInterval(), 0.5 * reach);
     }
 
     /** Reaction to a located root of a trigger's event function. */

@@ -21,6 +21,8 @@ final class SwitchDetector extends AbstractODEDetector<SwitchDetector> {
     SwitchDetector(Engine engine, Trigger trigger, SolverSettings set) {
         this(engine, trigger, trigger == Trigger.STICK
                 ? (state, forward) -> engine.stickCheckInterval(state)
+                : trigger == Trigger.EXIT
+                ? (state, forward) -> engine.exitCheckInterval(state)
                 : AdaptableInterval.of(set.maxCheckInterval()), 100,
             new BracketingNthOrderBrentSolver(0.0, set.eventTimeTolerance(), 0.0, 5), null);
     }
