@@ -18,8 +18,10 @@ START_LOAD=$(cut -d" " -f1-3 /proc/loadavg 2>/dev/null || echo unknown)
 java -cp "$JAR" org.openjdk.jmh.Main $JMH_OPTS -prof gc -rf json -rff "$OUT/jmh.json" 'org\.trundle\.bench\..*' \
   | tee "$OUT/jmh.txt"
 java -cp "$JAR" org.trundle.bench.WorkPrecision "$OUT/work-precision.md"
+java -cp "$JAR" org.trundle.bench.SweepScaling | tee "$OUT/sweep.md"
 java -Xmx64m -cp "$JAR" org.trundle.bench.LongRunMemoryCheck "$LONG_RUN_STEPS" | tee "$OUT/memory.txt"
 java -cp "$JAR" org.trundle.bench.ResultsReport "$OUT/jmh.json" "$OUT/work-precision.md" "$OUT/memory.txt" \
   "benchmarks/run-benchmarks.sh (JMH_OPTS=\"$JMH_OPTS\", LONG_RUN_STEPS=$LONG_RUN_STEPS)" "$START_LOAD" \
   > benchmarks/RESULTS.md
+{ echo; echo "## Sweep"; echo; cat "$OUT/sweep.md"; } >> benchmarks/RESULTS.md
 echo "wrote benchmarks/RESULTS.md and $OUT/"
