@@ -1,0 +1,361 @@
+package org.trundle.surfaces;
+
+import java.util.Locale;
+
+import org.hipparchus.analysis.differentiation.DSFactory;
+import org.hipparchus.analysis.differentiation.DerivativeStructure;
+import org.trundle.core.Checks;
+import org.trundle.core.ContactGeometry;
+import org.trundle.core.Surface;
+import org.trundle.core.SurfaceDomainException;
+
+/**
+ * A custom surface given by one implicit function {@code f(x) = 0} (an {@link ImplicitFunction}
+ * written once by the user), with all contact geometry from automatic differentiation
+ * (Hipparchus {@link DerivativeStructure}, 3 variables, order 2: value, gradient {@code g = ∇f} and
+ * Hessian {@code F = ∇²f}).
+ *
+ * <p>Sides: {@link Side#INSIDE} puts the ball where {@code f < 0}, {@link Side#OUTSIDE} where
+ * {@code f > 0}; with {@code σ = −1} inside and {@code +1} outside the normal is
+ * {@code n = σ g/|g|}.
+ *
+ * <p>Closest point: Newton's method on the Lagrange conditions of
+ * {@code min |x − p|²} subject to {@code f(p) = 0},
+ * <pre>
+ *   p − x − λ g(p) = 0,   f(p) = 0,
+ *   [I − λF  −g] [Δp]     [x − p + λ g]
+ *   [  gᵀ     0] [Δλ]  =  [   −f      ]
+ * </pre>
+ * solved by eliminating {@code Δp} through the 3×3 matrix {@code A = I − λF}. The iteration is
+ * seeded from the previous closest point of the run ({@link ContactGeometry#hint}); without a seed
+ * it starts with projection steps {@code p ← p − f g/|g|²} from the query point. It stops when the
+ * step is below {@code 1e-13·L} ({@code L} the shape's length scale).
+ *
+ * <p>Geometry at the converged {@code p}: {@code d = (x − p)·n}; the Weingarten map
+ * {@code W = σ P F P/|g|} ({@code P = I − n nᵀ}; for the outside of a sphere of radius {@code R}
+ * this gives {@code W = P/R}); the distance Hessian at the query point {@code H = W (I + d W)⁻¹}
+ * (design notes §2; the Hessian of {@code f} itself is not it); the principal curvatures are minus
+ * the two tangential eigenvalues of {@code W} (concave toward the ball positive), from its trace and
+ * its second invariant since {@code W n = 0}.
+ *
+ * <p>The patch has no edges. Unlike the closed-form surfaces, a query allocates the
+ * automatic-differentiation numbers (a few {@code DerivativeStructure}s per Newton iteration); the
+ * surface itself is immutable and thread-safe (all per-run state is in the workspace).
+ */
+public final class ImplicitSurface implements Surface {
+    private static final int MAX_ITER = 60;
+
+    private final String label;
+    private final ImplicitFunction function;
+    private final Side side;
+    private final double lengthScale;
+    private final double maxConcave;
+    private final DSFactory factory;
+    private final int ix;
+    private final int iy;
+    private final int iz;
+    private final int ixx;
+    private final int ixy;
+    private final int ixz;
+    private final int iyy;
+    private final int iyz;
+    private final int izz;
+
+    /**
+     * @param label a short name of the shape for messages
+     * @param function the implicit function, zero on the surface
+     * @param side {@link Side#INSIDE}: ball where {@code f < 0}; {@link Side#OUTSIDE}: where {@code f > 0}
+     * @param lengthScale typical size of the shape (m), sets the Newton tolerance {@code 1e-13·L}
+     * @param maxConcaveCurvature largest concave principal curvature on the patch (1/m) for the fit
+     *     check, or {@link Double#NaN} when unknown (the solver then checks during the run)
+     */
+    public ImplicitSurface(String label, ImplicitFunction function, Side side, double lengthScale,
+                           double maxConcaveCurvature) {
+        if (label == null || function == null || side == null) {
+            throw new IllegalArgumentException("label, function and side must be given, got label = " + label
+                + ", function = " + function + ", side = " + side);
+        }
+        this.lengthScale = Checks.positive("lengthScale", lengthScale);
+        if (!(Double.isNaN(maxConcaveCurvature) || maxConcaveCurvature >= 0)) {
+            throw new IllegalArgumentException("maxConcaveCurvature must be NaN (unknown) or >= 0, got "
+                + maxConcaveCurvature);
+        }
+        this.label = label;
+        this.function = function;
+        this.side = side;
+        this.maxConcave = maxConcaveCurvature;
+        this.factory = new DSFactory(3, 2);
+        var c = factory.getCompiler();
+        ix = c.getPartialDerivativeIndex(1, 0, 0);
+        iy = c.getPartialDerivativeIndex(0, 1, 0);
+        iz = c.getPartialDerivativeIndex(0, 0, 1);
+        ixx = c.getPartialDerivativeIndex(2, 0, 0);
+        ixy = c.getPartialDerivativeIndex(1, 1, 0);
+        ixz = c.getPartialDerivativeIndex(1, 0, 1);
+        iyy = c.getPartialDerivativeIndex(0, 2, 0);
+        iyz = c.getPartialDerivativeIndex(0, 1, 1);
+        izz = c.getPartialDerivativeIndex(0, 0, 2);
+    }
+
+    /** Per-run workspace: f, gradient and Hessian at the current iterate. */
+    private static final class Work {
+        final double[] g = new double[3];
+        final double[] f2 = new double[9];
+        final double[] a = new double[9];
+        final double[] w = new double[9];
+        final double[] n = new double[3];
+        double f;
+    }
+
+    @Override
+    public Object newScratch() {
+        return new Work();
+    }
+
+    /** @return the implicit function */
+    public ImplicitFunction function() {
+        return function;
+    }
+
+    /** @return the side the ball is on */
+    public Side side() {
+        return side;
+    }
+
+    /** @return the shape's length scale (m) */
+    public double lengthScale() {
+        return lengthScale;
+    }
+
+    private void evaluate(double px, double py, double pz, Work w) {
+        DerivativeStructure r = function.value(factory.variable(0, px), factory.variable(1, py),
+            factory.variable(2, pz));
+        double[] all = r.getAllDerivatives();
+        w.f = all[0];
+        w.g[0] = all[ix];
+        w.g[1] = all[iy];
+        w.g[2] = all[iz];
+        double[] h = w.f2;
+        h[0] = all[ixx];
+        h[1] = all[ixy];
+        h[2] = all[ixz];
+        h[3] = all[ixy];
+        h[4] = all[iyy];
+        h[5] = all[iyz];
+        h[6] = all[ixz];
+        h[7] = all[iyz];
+        h[8] = all[izz];
+    }
+
+    @Override
+    public void query(double t, double[] x, ContactGeometry out) {
+        Work w = out.scratch instanceof Work ? (Work) out.scratch : null;
+        if (w == null) {
+            w = new Work();
+            out.scratch = w;
+        }
+        double tol = 1e-13 * lengthScale;
+        double px;
+        double py;
+        double pz;
+        if (out.hintValid) {
+            px = out.hint[0];
+            py = out.hint[1];
+            pz = out.hint[2];
+        } else {
+            px = x[0];
+            py = x[1];
+            pz = x[2];
+            for (int i = 0; i < MAX_ITER; i++) {
+                evaluate(px, py, pz, w);
+                double gg = dot(w.g, w.g);
+                if (!(gg > 0)) {
+                    throw fail("vanishing gradient of f", x, px, py, pz);
+                }
+                double k = w.f / gg;
+                px -= k * w.g[0];
+                py -= k * w.g[1];
+                pz -= k * w.g[2];
+                if (Math.abs(k) * Math.sqrt(gg) < 1e-6 * lengthScale) {
+                    break;
+                }
+            }
+        }
+        boolean converged = false;
+        for (int it = 0; it < MAX_ITER; it++) {
+            evaluate(px, py, pz, w);
+            double[] g = w.g;
+            double gg = dot(g, g);
+            if (!(gg > 0)) {
+                throw fail("vanishing gradient of f", x, px, py, pz);
+            }
+            double rx = x[0] - px;
+            double ry = x[1] - py;
+            double rz = x[2] - pz;
+            double lambda = -(rx * g[0] + ry * g[1] + rz * g[2]) / gg;
+            // residual r1 = p - x - lambda g ; solve A dp - g dl = -r1, g.dp = -f
+            double r1x = -rx - lambda * g[0];
+            double r1y = -ry - lambda * g[1];
+            double r1z = -rz - lambda * g[2];
+            double[] a = w.a;
+            for (int i = 0; i < 9; i++) {
+                a[i] = -lambda * w.f2[i];
+            }
+            a[0] += 1;
+            a[4] += 1;
+            a[8] += 1;
+            double[] inv = w.w;
+            double det = invert(a, inv);
+            if (!(Math.abs(det) > 1e-300)) {
+                throw fail("singular projection system (query point at a focal point)", x, px, py, pz);
+            }
+            // u = A^-1 g, v = A^-1 r1
+            double ux = inv[0] * g[0] + inv[1] * g[1] + inv[2] * g[2];
+            double uy = inv[3] * g[0] + inv[4] * g[1] + inv[5] * g[2];
+            double uz = inv[6] * g[0] + inv[7] * g[1] + inv[8] * g[2];
+            double vx = inv[0] * r1x + inv[1] * r1y + inv[2] * r1z;
+            double vy = inv[3] * r1x + inv[4] * r1y + inv[5] * r1z;
+            double vz = inv[6] * r1x + inv[7] * r1y + inv[8] * r1z;
+            double gu = g[0] * ux + g[1] * uy + g[2] * uz;
+            double gv = g[0] * vx + g[1] * vy + g[2] * vz;
+            double dl = (gv - w.f) / gu;
+            double dx = -vx + dl * ux;
+            double dy = -vy + dl * uy;
+            double dz = -vz + dl * uz;
+            double step = Math.sqrt(dx * dx + dy * dy + dz * dz);
+            if (!Double.isFinite(step)) {
+                throw fail("Newton projection produced a non-finite step", x, px, py, pz);
+            }
+            if (step <= tol) {
+                converged = true;
+                break;
+            }
+            px += dx;
+            py += dy;
+            pz += dz;
+        }
+        if (!converged) {
+            throw fail("Newton projection did not converge in " + MAX_ITER + " iterations", x, px, py, pz);
+        }
+        finish(x, px, py, pz, w, out);
+        out.hint[0] = px;
+        out.hint[1] = py;
+        out.hint[2] = pz;
+        out.hintValid = true;
+    }
+
+    private void finish(double[] x, double px, double py, double pz, Work w, ContactGeometry out) {
+        double[] g = w.g;
+        double gn = Math.sqrt(dot(g, g));
+        double sigma = side == Side.INSIDE ? -1.0 : 1.0;
+        double nx = sigma * g[0] / gn;
+        double ny = sigma * g[1] / gn;
+        double nz = sigma * g[2] / gn;
+        out.point[0] = px;
+        out.point[1] = py;
+        out.point[2] = pz;
+        out.normal[0] = nx;
+        out.normal[1] = ny;
+        out.normal[2] = nz;
+        double d = (x[0] - px) * nx + (x[1] - py) * ny + (x[2] - pz) * nz;
+        out.distance = d;
+        // W = sigma P F P / |g|
+        double[] n = w.n;
+        n[0] = nx;
+        n[1] = ny;
+        n[2] = nz;
+        double[] f2 = w.f2;
+        double[] pf = w.a;
+        // pf = P F
+        for (int j = 0; j < 3; j++) {
+            double nf = nx * f2[j] + ny * f2[3 + j] + nz * f2[6 + j];
+            for (int i = 0; i < 3; i++) {
+                pf[3 * i + j] = f2[3 * i + j] - n[i] * nf;
+            }
+        }
+        double[] wm = w.w;
+        double s = sigma / gn;
+        for (int i = 0; i < 3; i++) {
+            double fn = pf[3 * i] * nx + pf[3 * i + 1] * ny + pf[3 * i + 2] * nz;
+            for (int j = 0; j < 3; j++) {
+                wm[3 * i + j] = s * (pf[3 * i + j] - fn * n[j]);
+            }
+        }
+        for (int i = 0; i < 3; i++) {
+            for (int j = i + 1; j < 3; j++) {
+                double m = 0.5 * (wm[3 * i + j] + wm[3 * j + i]);
+                wm[3 * i + j] = m;
+                wm[3 * j + i] = m;
+            }
+        }
+        // principal curvatures: tangential eigenvalues of W are the roots of l^2 - T l + M = 0
+        double tr = wm[0] + wm[4] + wm[8];
+        double m2 = wm[0] * wm[4] - wm[1] * wm[3] + wm[0] * wm[8] - wm[2] * wm[6] + wm[4] * wm[8] - wm[5] * wm[7];
+        double disc = Math.sqrt(Math.max(0.0, 0.25 * tr * tr - m2));
+        out.curvature1 = -(0.5 * tr - disc);
+        out.curvature2 = -(0.5 * tr + disc);
+        // H = W (I + d W)^-1
+        double[] a = w.a;
+        for (int i = 0; i < 9; i++) {
+            a[i] = d * wm[i];
+        }
+        a[0] += 1;
+        a[4] += 1;
+        a[8] += 1;
+        double[] inv = w.f2;
+        double det = invert(a, inv);
+        if (!(det > 0)) {
+            throw fail("query point beyond a centre of curvature (det(I + dW) = " + det + ")", x, px, py, pz);
+        }
+        for (int i = 0; i < 3; i++) {
+            for (int j = i; j < 3; j++) {
+                double hij = wm[3 * i] * inv[j] + wm[3 * i + 1] * inv[3 + j] + wm[3 * i + 2] * inv[6 + j];
+                double hji = wm[3 * j] * inv[i] + wm[3 * j + 1] * inv[3 + i] + wm[3 * j + 2] * inv[6 + i];
+                double v = 0.5 * (hij + hji);
+                out.hessian[3 * i + j] = v;
+                out.hessian[3 * j + i] = v;
+            }
+        }
+        out.patchMargin = Double.POSITIVE_INFINITY;
+        out.edge = 0;
+    }
+
+    private SurfaceDomainException fail(String why, double[] x, double px, double py, double pz) {
+        return new SurfaceDomainException(String.format(Locale.ROOT,
+            "%s: %s for query point (%g, %g, %g) m (last iterate (%g, %g, %g) m)",
+            name(), why, x[0], x[1], x[2], px, py, pz));
+    }
+
+    private static double dot(double[] a, double[] b) {
+        return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+    }
+
+    /** Inverts a row-major 3×3 matrix by its adjugate; returns the determinant. */
+    static double invert(double[] m, double[] inv) {
+        double c00 = m[4] * m[8] - m[5] * m[7];
+        double c01 = m[5] * m[6] - m[3] * m[8];
+        double c02 = m[3] * m[7] - m[4] * m[6];
+        double det = m[0] * c00 + m[1] * c01 + m[2] * c02;
+        double id = 1.0 / det;
+        inv[0] = c00 * id;
+        inv[1] = (m[2] * m[7] - m[1] * m[8]) * id;
+        inv[2] = (m[1] * m[5] - m[2] * m[4]) * id;
+        inv[3] = c01 * id;
+        inv[4] = (m[0] * m[8] - m[2] * m[6]) * id;
+        inv[5] = (m[2] * m[3] - m[0] * m[5]) * id;
+        inv[6] = c02 * id;
+        inv[7] = (m[1] * m[6] - m[0] * m[7]) * id;
+        inv[8] = (m[0] * m[4] - m[1] * m[3]) * id;
+        return det;
+    }
+
+    @Override
+    public double maxConcaveCurvature() {
+        return maxConcave;
+    }
+
+    @Override
+    public String name() {
+        return String.format(Locale.ROOT, "implicit(%s, %s, L=%g m)", label, side.label(), lengthScale);
+    }
+}
