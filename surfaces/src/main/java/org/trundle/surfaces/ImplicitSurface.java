@@ -35,8 +35,8 @@ import org.trundle.core.SurfaceDomainException;
  * {@code W = σ P F P/|g|} ({@code P = I − n nᵀ}; for the outside of a sphere of radius {@code R}
  * this gives {@code W = P/R}); the distance Hessian at the query point {@code H = W (I + d W)⁻¹}
  * (design notes §2; the Hessian of {@code f} itself is not it); the principal curvatures are minus
- * the two tangential eigenvalues of {@code W} (concave toward the ball positive), from its trace and
- * its second invariant since {@code W n = 0}.
+ * the two tangential eigenvalues of {@code W} (concave toward the ball positive), from the
+ * symmetric 2×2 restriction of {@code W} to a tangent basis (well conditioned for equal roots).
  *
  * <p>The patch has no edges. Unlike the closed-form surfaces, a query allocates the
  * automatic-differentiation numbers (a few {@code DerivativeStructure}s per Newton iteration); the
@@ -288,12 +288,38 @@ public final class ImplicitSurface implements Surface {
                 wm[3 * j + i] = m;
             }
         }
-        // principal curvatures: tangential eigenvalues of W are the roots of l^2 - T l + M = 0
-        double tr = wm[0] + wm[4] + wm[8];
-        double m2 = wm[0] * wm[4] - wm[1] * wm[3] + wm[0] * wm[8] - wm[2] * wm[6] + wm[4] * wm[8] - wm[5] * wm[7];
-        double disc = Math.sqrt(Math.max(0.0, 0.25 * tr * tr - m2));
-        out.curvature1 = -(0.5 * tr - disc);
-        out.curvature2 = -(0.5 * tr + disc);
+        // principal curvatures: eigenvalues of W restricted to a tangent basis (t1, t2), as a
+        // symmetric 2x2 [[w11, w12], [w12, w22]] (well conditioned for equal roots)
+        double t1x;
+        double t1y;
+        double t1z;
+        if (Math.abs(nx) <= Math.abs(ny) && Math.abs(nx) <= Math.abs(nz)) {
+            t1x = 0;
+            t1y = nz;
+            t1z = -ny;
+        } else if (Math.abs(ny) <= Math.abs(nz)) {
+            t1x = -nz;
+            t1y = 0;
+            t1z = nx;
+        } else {
+            t1x = ny;
+            t1y = -nx;
+            t1z = 0;
+        }
+        double tn = Math.sqrt(t1x * t1x + t1y * t1y + t1z * t1z);
+        t1x /= tn;
+        t1y /= tn;
+        t1z /= tn;
+        double t2x = ny * t1z - nz * t1y;
+        double t2y = nz * t1x - nx * t1z;
+        double t2z = nx * t1y - ny * t1x;
+        double w11 = quad(wm, t1x, t1y, t1z, t1x, t1y, t1z);
+        double w12 = quad(wm, t1x, t1y, t1z, t2x, t2y, t2z);
+        double w22 = quad(wm, t2x, t2y, t2z, t2x, t2y, t2z);
+        double mean = 0.5 * (w11 + w22);
+        double rad = Math.hypot(0.5 * (w11 - w22), w12);
+        out.curvature1 = -(mean - rad);
+        out.curvature2 = -(mean + rad);
         // H = W (I + d W)^-1
         double[] a = w.a;
         for (int i = 0; i < 9; i++) {
@@ -324,6 +350,11 @@ public final class ImplicitSurface implements Surface {
         return new SurfaceDomainException(String.format(Locale.ROOT,
             "%s: %s for query point (%g, %g, %g) m (last iterate (%g, %g, %g) m)",
             name(), why, x[0], x[1], x[2], px, py, pz));
+    }
+
+    private static double quad(double[] m, double ax, double ay, double az, double bx, double by, double bz) {
+        return ax * (m[0] * bx + m[1] * by + m[2] * bz) + ay * (m[3] * bx + m[4] * by + m[5] * bz)
+            + az * (m[6] * bx + m[7] * by + m[8] * bz);
     }
 
     private static double dot(double[] a, double[] b) {
