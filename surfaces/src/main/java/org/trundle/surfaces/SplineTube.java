@@ -31,7 +31,8 @@ import org.trundle.core.SurfaceDomainException;
  * <pre>  H = σ [P + v vᵀ/G'] / ℓ,   P = I − e eᵀ,  v = P C' = C' + R' e</pre>
  * whose tangential eigenvalues {@code h₁ = σ/ℓ} (normal to {@code v}) and
  * {@code h₂ = σ (1 + |v|²/G')/ℓ} give the principal curvatures {@code κ = −h/(1 − d h)} (from
- * {@code H = W (I + d W)⁻¹}). No frame is needed for this; the patch margin is the distance of the
+ * {@code H = W (I + d W)⁻¹}). No frame is needed for this (the rotation-minimising frame serves only
+ * the angular bounds of an open tube, see the last constructor); the patch margin is the distance of the
  * foot from the nearer end, {@code min(u − u₀, u_N − u)·|C'(u)|} (m, to first order in the
  * distance from the end).
  *
@@ -44,6 +45,12 @@ public final class SplineTube implements Surface {
     public static final int EDGE_FROM = 0;
     /** Edge index of the last centreline point. */
     public static final int EDGE_TO = 1;
+    /** Edge index of the lower angular bound of an open tube (chute). */
+    public static final int EDGE_ANGLE_FROM = 2;
+    /** Edge index of the upper angular bound of an open tube (chute). */
+    public static final int EDGE_ANGLE_TO = 3;
+    /** Rotation-minimising frame samples per spline interval. */
+    private static final int FRAME_SAMPLES = 16;
     private static final int MAX_ITER = 50;
 
     private final CubicSpline cx;
@@ -55,10 +62,19 @@ public final class SplineTube implements Surface {
     private final Side side;
     private final double length;
     private final double maxConcave;
+    private final boolean angular;
+    private final double angleFrom;
+    private final double angleTo;
+    /** Rotation-minimising frame samples: parameter, point, unit tangent, reference normal. */
+    private final double[] fu;
+    private final double[] fx;
+    private final double[] ft;
+    private final double[] fr;
 
     /** Per-run scratch: centreline and radius values with derivatives. */
     private static final class Work {
         final double[] v = new double[12];
+        final double[] f = new double[3];
     }
 
     /**
@@ -80,6 +96,28 @@ public final class SplineTube implements Surface {
      * @param side which side the ball is on
      */
     public SplineTube(Vector3D[] points, double[] radii, Side side) {
+        this(points, radii, side, null, -Math.PI, Math.PI);
+    }
+
+    /**
+     * An open tube (a chute or half-pipe): only the wall whose angle about the centreline lies in
+     * {@code angleFrom ≤ θ ≤ angleTo} exists. The angle is measured in the plane normal to the
+     * centreline from the reference normal {@code r(u)} of a rotation-minimising frame, toward
+     * {@code t × r} ({@code t} the unit tangent). The frame starts at the first point from
+     * {@code reference} projected normal to the tangent, and is carried along the curve by the
+     * double-reflection method (W. Wang, B. Jüttler, D. Zheng, Y. Liu, "Computation of rotation
+     * minimizing frames", ACM Trans. Graphics 27 (2008) 2), not the Frenet frame, which flips at
+     * inflections. Margin to an angular edge: the arc length {@code R·Δθ} (m).
+     *
+     * @param points centreline points (m), at least 2, consecutive points distinct
+     * @param radii tube radius at each point (m), positive
+     * @param side which side the ball is on
+     * @param reference direction of {@code θ = 0} at the first point (not along the tangent), or null
+     *     for a closed tube
+     * @param angleFrom lower angular bound (rad), {@code ≥ −π}
+     * @param angleTo upper angular bound (rad), {@code ≤ π}, {@code > angleFrom}
+     */
+    public SplineTube(Vector3D[] points, double[] radii, Side side, Vector3D reference, double angleFrom, double angleTo) {
         if (points == null || points.length < 2) {
             throw new IllegalArgumentException("spline tube needs at least 2 centreline points, got "
                 + (points == null ? "null" : points.length));
@@ -147,6 +185,125 @@ public final class SplineTube implements Surface {
             }
         }
         this.maxConcave = constant ? kmax : Double.NaN;
+        if (!(angleFrom >= -Math.PI && angleFrom < angleTo && angleTo <= Math.PI)) {
+            throw new IllegalArgumentException("spline tube angular bounds must satisfy -pi <= angleFrom < angleTo <= pi, got angleFrom = "
+                + angleFrom + ", angleTo = " + angleTo);
+        }
+        this.angular = reference != null && (angleFrom > -Math.PI || angleTo < Math.PI);
+        this.angleFrom = angleFrom;
+        this.angleTo = angleTo;
+        int m = (n - 1) * FRAME_SAMPLES + 1;
+        fu = new double[m];
+        fx = new double[3 * m];
+        ft = new double[3 * m];
+        fr = new double[3 * m];
+        Vector3D ref = reference == null ? null : reference;
+        if (ref != null && !Double.isFinite(ref.getNorm())) {
+            throw new IllegalArgumentException("spline tube reference direction must be finite, got " + reference);
+        }
+        for (int j = 0; j < m; j++) {
+            int i = Math.min(j / FRAME_SAMPLES, n - 2);
+            int k = j - i * FRAME_SAMPLES;
+            double t = j == m - 1 ? u[n - 1] : u[i] + (u[i + 1] - u[i]) * k / FRAME_SAMPLES;
+            fu[j] = t;
+            eval(t, w);
+            double sp = Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);
+            fx[3 * j] = w[0];
+            fx[3 * j + 1] = w[3];
+            fx[3 * j + 2] = w[6];
+            ft[3 * j] = w[1] / sp;
+            ft[3 * j + 1] = w[4] / sp;
+            ft[3 * j + 2] = w[7] / sp;
+            if (j == 0) {
+                Vector3D t0 = new Vector3D(ft[0], ft[1], ft[2]);
+                Vector3D r0 = ref == null ? t0.orthogonal() : ref.subtract(ref.dotProduct(t0), t0);
+                if (!(r0.getNorm() > 1e-12 * (ref == null ? 1 : ref.getNorm()))) {
+                    throw new IllegalArgumentException("spline tube reference direction must not be along the first tangent, got "
+                        + reference);
+                }
+                r0 = r0.normalize();
+                fr[0] = r0.getX();
+                fr[1] = r0.getY();
+                fr[2] = r0.getZ();
+            } else {
+                reflect(fx, ft, fr, 3 * (j - 1), fx[3 * j], fx[3 * j + 1], fx[3 * j + 2], ft[3 * j], ft[3 * j + 1], ft[3 * j + 2],
+                    fr, 3 * j);
+            }
+        }
+    }
+
+    /**
+     * One double-reflection step of the rotation-minimising frame from sample {@code i} to the
+     * point {@code x1} with unit tangent {@code t1}; writes the new reference normal to
+     * {@code out[o..o+2]}.
+     */
+    private static void reflect(double[] px, double[] pt, double[] pr, int i, double x1, double y1, double z1,
+                                double t1x, double t1y, double t1z, double[] out, int o) {
+        double v1x = x1 - px[i];
+        double v1y = y1 - px[i + 1];
+        double v1z = z1 - px[i + 2];
+        double c1 = v1x * v1x + v1y * v1y + v1z * v1z;
+        double rx = pr[i];
+        double ry = pr[i + 1];
+        double rz = pr[i + 2];
+        double tx = pt[i];
+        double ty = pt[i + 1];
+        double tz = pt[i + 2];
+        if (c1 > 0) {
+            double fr1 = 2 * (v1x * rx + v1y * ry + v1z * rz) / c1;
+            rx -= fr1 * v1x;
+            ry -= fr1 * v1y;
+            rz -= fr1 * v1z;
+            double ft1 = 2 * (v1x * tx + v1y * ty + v1z * tz) / c1;
+            tx -= ft1 * v1x;
+            ty -= ft1 * v1y;
+            tz -= ft1 * v1z;
+        }
+        double v2x = t1x - tx;
+        double v2y = t1y - ty;
+        double v2z = t1z - tz;
+        double c2 = v2x * v2x + v2y * v2y + v2z * v2z;
+        if (c2 > 0) {
+            double f2 = 2 * (v2x * rx + v2y * ry + v2z * rz) / c2;
+            rx -= f2 * v2x;
+            ry -= f2 * v2y;
+            rz -= f2 * v2z;
+        }
+        // remove the tangential drift and renormalise (exact in exact arithmetic)
+        double dt = rx * t1x + ry * t1y + rz * t1z;
+        rx -= dt * t1x;
+        ry -= dt * t1y;
+        rz -= dt * t1z;
+        double nr = Math.sqrt(rx * rx + ry * ry + rz * rz);
+        out[o] = rx / nr;
+        out[o + 1] = ry / nr;
+        out[o + 2] = rz / nr;
+    }
+
+    /**
+     * The rotation-minimising frame's reference normal at parameter {@code u} (allocates; for tests
+     * and setup code).
+     *
+     * @param u chord-length parameter (m)
+     * @return the unit reference normal {@code r(u)}
+     */
+    public Vector3D frameNormal(double u) {
+        double[] w = new double[12];
+        double[] f = new double[3];
+        frame(u, w, f);
+        return new Vector3D(f[0], f[1], f[2]);
+    }
+
+    /** Frame normal at u (w must hold the centreline at u after the call). */
+    private void frame(double u, double[] w, double[] f) {
+        int j = java.util.Arrays.binarySearch(fu, u);
+        if (j < 0) {
+            j = -j - 2;
+        }
+        j = Math.max(0, Math.min(fu.length - 1, j));
+        eval(u, w);
+        double sp = Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);
+        reflect(fx, ft, fr, 3 * j, w[0], w[3], w[6], w[1] / sp, w[4] / sp, w[7] / sp, f, 0);
     }
 
     private static double[] constant(Vector3D[] points, double radius) {
@@ -294,6 +451,27 @@ public final class SplineTube implements Surface {
             out.patchMargin = hi;
             out.edge = EDGE_TO;
         }
+        if (angular) {
+            double[] fn = work.f;
+            frame(u, w, fn);
+            double tx = w[1] / speed;
+            double ty = w[4] / speed;
+            double tz = w[7] / speed;
+            double bx = ty * fn[2] - tz * fn[1];
+            double by = tz * fn[0] - tx * fn[2];
+            double bz = tx * fn[1] - ty * fn[0];
+            double theta = Math.atan2(ex * bx + ey * by + ez * bz, ex * fn[0] + ey * fn[1] + ez * fn[2]);
+            double a0 = r * (theta - angleFrom);
+            double a1 = r * (angleTo - theta);
+            if (a0 < out.patchMargin) {
+                out.patchMargin = a0;
+                out.edge = EDGE_ANGLE_FROM;
+            }
+            if (a1 < out.patchMargin) {
+                out.patchMargin = a1;
+                out.edge = EDGE_ANGLE_TO;
+            }
+        }
     }
 
     @Override
@@ -303,7 +481,16 @@ public final class SplineTube implements Surface {
 
     @Override
     public String edgeName(int edge) {
-        return edge == EDGE_FROM ? "from" : "to";
+        switch (edge) {
+            case EDGE_FROM:
+                return "from";
+            case EDGE_TO:
+                return "to";
+            case EDGE_ANGLE_FROM:
+                return "angleFrom";
+            default:
+                return "angleTo";
+        }
     }
 
     /**

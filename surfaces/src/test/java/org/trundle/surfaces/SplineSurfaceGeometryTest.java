@@ -136,4 +136,30 @@ class SplineSurfaceGeometryTest {
             }
         }
     }
+
+    @Test
+    void rotationMinimisingFrameStaysPlanarThroughAnInflection() {
+        // an invented S-shaped planar chute in the xy plane: the rotation-minimising frame started
+        // from -z stays -z (the Frenet normal would flip at the inflection)
+        Vector3D[] pts = new Vector3D[9];
+        for (int i = 0; i < pts.length; i++) {
+            double x = i * 0.1;
+            pts[i] = new Vector3D(x, 0.1 * Math.sin(2 * Math.PI * x / 0.8), 0);
+        }
+        SplineTube chute = new SplineTube(pts, new double[] {0.02, 0.02, 0.02, 0.02, 0.02, 0.02, 0.02, 0.02, 0.02},
+            Side.INSIDE, Vector3D.MINUS_K, -0.5 * Math.PI, 0.5 * Math.PI);
+        for (int i = 0; i <= 50; i++) {
+            double u = chute.length() * i / 50.0;
+            Vector3D r = chute.frameNormal(u);
+            assertEquals(-1.0, r.getZ(), 1e-12, "frame normal at u = " + u);
+        }
+        // the lower half of the tube (theta measured from straight down) is the wall: below the
+        // centreline the foot is mid-wall, margin R·π/2 to either rim; above it, outside the patch
+        ContactGeometry g = GeometryAssertions.query(chute, new double[] {0.4, 0.0, -0.01});
+        assertEquals(0.02 * 0.5 * Math.PI, g.patchMargin, 1e-9);
+        ContactGeometry h = GeometryAssertions.query(chute, new double[] {0.4, 0.0, 0.01});
+        assertEquals(-0.02 * 0.5 * Math.PI, h.patchMargin, 1e-9);
+        assertTrue(chute.edgeName(h.edge).startsWith("angle"), chute.edgeName(h.edge));
+        assertTrue(chute.hasEdges());
+    }
 }
