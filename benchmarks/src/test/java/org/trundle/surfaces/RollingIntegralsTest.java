@@ -49,7 +49,7 @@ class RollingIntegralsTest {
 
     static Stream<Arguments> cases() {
         return Stream.of("plane", "sphereIn", "sphereOut", "sphereZeroG", "coneIn", "coneOut", "torusIn", "torusOut",
-            "placedCylinder", "ellipticTube").flatMap(k -> IntStream.range(0, CASES).mapToObj(i -> Arguments.of(k, SEED, i)));
+            "placedCylinder", "ellipticTube", "revolutionCup", "helixTube", "openChute").flatMap(k -> IntStream.range(0, CASES).mapToObj(i -> Arguments.of(k, SEED, i)));
     }
 
     /** Everything one case needs. */
@@ -137,6 +137,38 @@ class RollingIntegralsTest {
                 s.surface = new Placed(new Cylinder(Vector3D.ZERO, Vector3D.PLUS_K, 0.05, Side.INSIDE), q, new Vector3D(0, 0, 0.05));
                 s.near = new Vector3D(rnd.nextDouble(-0.01, 0.01), 0, 0);
                 s.velocity = new Vector3D(rnd.nextDouble(-0.5, 0.5), rnd.nextDouble(-0.5, 0.5), 0);
+                break;
+            }
+            case "revolutionCup": {
+                // an invented flared cup, axis vertical
+                s.surface = new SurfaceOfRevolution(Vector3D.ZERO, Vector3D.PLUS_K, new double[] {0, 0.02, 0.05, 0.08, 0.1},
+                    new double[] {0.03, 0.032, 0.04, 0.055, 0.07}, Side.INSIDE);
+                s.near = er.scalarMultiply(0.04).add(0.05, Vector3D.PLUS_K);
+                s.velocity = ef.scalarMultiply(rnd.nextDouble(0.5, 0.9)).add(rnd.nextDouble(-0.1, 0.1), Vector3D.PLUS_K);
+                s.duration = 0.3;
+                break;
+            }
+            case "helixTube":
+            case "openChute": {
+                // an invented helical chute: radius 0.2 m, pitch 0.15 m, tube radius 0.02 m
+                Vector3D[] pts = new Vector3D[25];
+                for (int i = 0; i < pts.length; i++) {
+                    double th = i * Math.PI / 6;
+                    pts[i] = new Vector3D(0.2 * Math.cos(th), 0.2 * Math.sin(th), 0.15 * th / (2 * Math.PI));
+                }
+                double th = rnd.nextDouble(6.0, 8.0);
+                Vector3D c = new Vector3D(0.2 * Math.cos(th), 0.2 * Math.sin(th), 0.15 * th / (2 * Math.PI));
+                Vector3D tangent = new Vector3D(-0.2 * Math.sin(th), 0.2 * Math.cos(th), 0.15 / (2 * Math.PI)).normalize();
+                if (kind.equals("helixTube")) {
+                    s.surface = new SplineTube(pts, 0.02, Side.INSIDE);
+                } else {
+                    double[] radii = new double[pts.length];
+                    java.util.Arrays.fill(radii, 0.02);
+                    s.surface = new SplineTube(pts, radii, Side.INSIDE, Vector3D.MINUS_K, -0.5 * Math.PI, 0.5 * Math.PI);
+                }
+                s.near = c.add(0.02, new Vector3D(0, 0, -1).subtract(-tangent.getZ(), tangent).normalize());
+                s.velocity = tangent.scalarMultiply(-rnd.nextDouble(0.3, 0.8));
+                s.duration = 0.3;
                 break;
             }
             default: {
