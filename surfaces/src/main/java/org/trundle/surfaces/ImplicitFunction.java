@@ -5,8 +5,9 @@ import org.hipparchus.CalculusFieldElement;
 /**
  * A user's shape written once as an implicit function {@code f(x, y, z)} whose zero set is the
  * surface, generic over Hipparchus' {@link CalculusFieldElement} so that
- * {@link ImplicitSurface} can evaluate it with automatic differentiation
- * ({@link org.hipparchus.analysis.differentiation.DerivativeStructure} of order 2 in 3 variables).
+ * {@link ImplicitSurface} can evaluate it with automatic differentiation ({@link Jet2}, or any
+ * other field such as {@link org.hipparchus.analysis.differentiation.DerivativeStructure} or plain
+ * {@link org.hipparchus.util.Binary64} values in the user's own tests).
  *
  * <p>{@code f} must be twice continuously differentiable near the patch, with {@code ∇f ≠ 0} on
  * the surface; it need not be a distance. Use only operations of the field type (no conversion to

@@ -2,8 +2,6 @@ package org.trundle.surfaces;
 
 import java.util.Locale;
 
-import org.hipparchus.analysis.differentiation.DSFactory;
-import org.hipparchus.analysis.differentiation.DerivativeStructure;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
@@ -11,9 +9,10 @@ import org.trundle.core.SurfaceDomainException;
 
 /**
  * A custom surface given by one implicit function {@code f(x) = 0} (an {@link ImplicitFunction}
- * written once by the user), with all contact geometry from automatic differentiation
- * (Hipparchus {@link DerivativeStructure}, 3 variables, order 2: value, gradient {@code g = ∇f} and
- * Hessian {@code F = ∇²f}).
+ * written once by the user), with all contact geometry from automatic differentiation: the
+ * function is evaluated on {@link Jet2} numbers (a lean second-order structure in 3 variables, the
+ * same numbers as Hipparchus' {@code DerivativeStructure} of order 2) for the value, gradient
+ * {@code g = ∇f} and Hessian {@code F = ∇²f}.
  *
  * <p>Sides: {@link Side#INSIDE} puts the ball where {@code f < 0}, {@link Side#OUTSIDE} where
  * {@code f > 0}; with {@code σ = −1} inside and {@code +1} outside the normal is
@@ -38,9 +37,10 @@ import org.trundle.core.SurfaceDomainException;
  * the two tangential eigenvalues of {@code W} (concave toward the ball positive), from the
  * symmetric 2×2 restriction of {@code W} to a tangent basis (well conditioned for equal roots).
  *
- * <p>The patch has no edges. Unlike the closed-form surfaces, a query allocates the
- * automatic-differentiation numbers (a few {@code DerivativeStructure}s per Newton iteration); the
- * surface itself is immutable and thread-safe (all per-run state is in the workspace).
+ * <p>The patch has no edges. Unlike the closed-form surfaces, a query allocates the small
+ * automatic-differentiation numbers of each function evaluation (a few per Newton iteration,
+ * short-lived); the surface itself is immutable and thread-safe (all per-run state is in the
+ * workspace).
  */
 public final class ImplicitSurface implements Surface {
     private static final int MAX_ITER = 60;
@@ -50,16 +50,6 @@ public final class ImplicitSurface implements Surface {
     private final Side side;
     private final double lengthScale;
     private final double maxConcave;
-    private final DSFactory factory;
-    private final int ix;
-    private final int iy;
-    private final int iz;
-    private final int ixx;
-    private final int ixy;
-    private final int ixz;
-    private final int iyy;
-    private final int iyz;
-    private final int izz;
 
     /**
      * @param label a short name of the shape for messages
@@ -84,17 +74,6 @@ public final class ImplicitSurface implements Surface {
         this.function = function;
         this.side = side;
         this.maxConcave = maxConcaveCurvature;
-        this.factory = new DSFactory(3, 2);
-        var c = factory.getCompiler();
-        ix = c.getPartialDerivativeIndex(1, 0, 0);
-        iy = c.getPartialDerivativeIndex(0, 1, 0);
-        iz = c.getPartialDerivativeIndex(0, 0, 1);
-        ixx = c.getPartialDerivativeIndex(2, 0, 0);
-        ixy = c.getPartialDerivativeIndex(1, 1, 0);
-        ixz = c.getPartialDerivativeIndex(1, 0, 1);
-        iyy = c.getPartialDerivativeIndex(0, 2, 0);
-        iyz = c.getPartialDerivativeIndex(0, 1, 1);
-        izz = c.getPartialDerivativeIndex(0, 0, 2);
     }
 
     /** Per-run workspace: f, gradient and Hessian at the current iterate. */
@@ -128,23 +107,21 @@ public final class ImplicitSurface implements Surface {
     }
 
     private void evaluate(double px, double py, double pz, Work w) {
-        DerivativeStructure r = function.value(factory.variable(0, px), factory.variable(1, py),
-            factory.variable(2, pz));
-        double[] all = r.getAllDerivatives();
-        w.f = all[0];
-        w.g[0] = all[ix];
-        w.g[1] = all[iy];
-        w.g[2] = all[iz];
+        Jet2 r = function.value(Jet2.variable(0, px), Jet2.variable(1, py), Jet2.variable(2, pz));
+        w.f = r.v;
+        w.g[0] = r.g0;
+        w.g[1] = r.g1;
+        w.g[2] = r.g2;
         double[] h = w.f2;
-        h[0] = all[ixx];
-        h[1] = all[ixy];
-        h[2] = all[ixz];
-        h[3] = all[ixy];
-        h[4] = all[iyy];
-        h[5] = all[iyz];
-        h[6] = all[ixz];
-        h[7] = all[iyz];
-        h[8] = all[izz];
+        h[0] = r.h00;
+        h[1] = r.h01;
+        h[2] = r.h02;
+        h[3] = r.h01;
+        h[4] = r.h11;
+        h[5] = r.h12;
+        h[6] = r.h02;
+        h[7] = r.h12;
+        h[8] = r.h22;
     }
 
     @Override
