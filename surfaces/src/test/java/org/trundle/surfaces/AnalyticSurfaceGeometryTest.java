@@ -164,6 +164,15 @@ class AnalyticSurfaceGeometryTest {
         assertEquals(1 / 0.09, ring.maxConcaveCurvature(), 1e-12);
         assertThrows(SurfaceDomainException.class, () -> GeometryAssertions.query(ring, new double[] {0.1, 0, 0}));
         assertThrows(IllegalArgumentException.class, () -> new Torus(Vector3D.ZERO, Vector3D.PLUS_K, 0.1, 0.2, Side.INSIDE));
+        // a quarter-ring raceway, azimuth 0..90 degrees from +x about +z: at azimuth 30 degrees on
+        // the bottom of the tube the margin is the arc (R + b cos psi)·30° to the azimuthFrom edge
+        Torus quarter = new Torus(Vector3D.ZERO, Vector3D.PLUS_K, Vector3D.PLUS_I, 0.1, 0.01, Side.INSIDE,
+            0.0, 0.5 * Math.PI, -Math.PI, Math.PI);
+        double phi = Math.toRadians(30);
+        ContactGeometry q = GeometryAssertions.query(quarter, new double[] {0.1 * Math.cos(phi), 0.1 * Math.sin(phi), -0.005});
+        assertEquals(0.1 * phi, q.patchMargin, 1e-12);
+        assertEquals("azimuthFrom", quarter.edgeName(q.edge));
+        assertTrue(quarter.hasEdges());
     }
 
     @Test
