@@ -1,0 +1,48 @@
+package org.trundle.docs;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.hipparchus.CalculusFieldElement;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.junit.jupiter.api.Test;
+import org.trundle.contact.PureRolling;
+import org.trundle.core.Ball;
+import org.trundle.core.BallState;
+import org.trundle.core.EndReason;
+import org.trundle.core.RunResult;
+import org.trundle.core.Simulation;
+import org.trundle.core.SolverSettings;
+import org.trundle.core.Surface;
+import org.trundle.surfaces.ImplicitFunction;
+import org.trundle.surfaces.ImplicitSurface;
+import org.trundle.surfaces.Side;
+
+/** The README's custom-surface example (an invented elliptic tube), compiled and run. */
+class CustomSurfaceExampleTest {
+
+    @Test
+    void ellipticTubeExampleRuns() {
+        // --- README example start ---
+        // An elliptic tube (semi-axes 30 mm x 20 mm) about the z axis, written once as f(x, y, z) = 0.
+        ImplicitFunction ellipse = new ImplicitFunction() {
+            @Override
+            public <T extends CalculusFieldElement<T>> T value(T x, T y, T z) {
+                return x.divide(0.030).square().add(y.divide(0.020).square()).subtract(1.0);
+            }
+        };
+        // Ball inside (where f < 0); length scale 20 mm; largest concave curvature a/b² = 75 1/m.
+        Surface tube = new ImplicitSurface("elliptic tube 30 x 20 mm", ellipse, Side.INSIDE, 0.020, 0.030 / (0.020 * 0.020));
+        Simulation sim = Simulation.builder().ball(Ball.solid(0.005, 0.004)).surface(tube)
+            .law(new PureRolling()).gravity(new Vector3D(0, 0, -9.81))
+            .settings(SolverSettings.defaults().withSampleInterval(1e-3)).build();
+        BallState start = sim.rollingStart(new Vector3D(0.025, 0, 0), new Vector3D(0, 0.6, 0));
+        RunResult result = sim.run(start, 0.5);
+        // --- README example end ---
+        assertEquals(EndReason.DURATION, result.endReason(), result.message());
+        assertTrue(result.energy().relativeResidual() < 1e-8, result.energy().toString());
+        assertTrue(result.maxDistanceError() < 1e-9 * 0.005, "distance residual " + result.maxDistanceError());
+        System.out.println("elliptic tube example: energy " + result.energy().relativeResidual() + ", distance residual "
+            + result.maxDistanceError() + " m, end centre " + result.endState().centre());
+    }
+}
