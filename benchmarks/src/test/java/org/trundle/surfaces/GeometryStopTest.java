@@ -60,7 +60,13 @@ class GeometryStopTest {
         BallState s0 = sim.rollingStart(c, v.subtract(v.dotProduct(n), n));
         RunResult res = sim.run(s0, 1.0);
         assertEquals(EndReason.GEOMETRY, res.endReason(), res.message());
-        assertTrue(res.message().contains("no longer fits") && res.message().contains("splineTube(inside"), res.message());
+        // where the bore closes to the ball's radius the centre reaches the centreline as r*kappa
+        // reaches 1; whichever the solver meets first (the fit event, or the centreline while the
+        // ball leaves the narrowing wall), the run ends as a typed geometry stop naming the surface
+        assertTrue((res.message().contains("no longer fits") || res.message().contains("on the centreline"))
+            && res.message().contains("splineTube(inside"), res.message());
+        assertTrue(res.endState().centre().getX() > 0.25 && res.endState().centre().getX() < 0.3,
+            "stops in the narrowing: x = " + res.endState().centre().getX());
         System.out.println("taper stop at x = " + res.endState().centre().getX() + " m: " + res.message());
     }
 }

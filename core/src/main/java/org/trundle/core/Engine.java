@@ -90,12 +90,13 @@ final class Engine {
     private final double[][] cacheY = new double[CACHE][Dynamics.DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
-    private final double[][] cacheValues = new double[CACHE][7];
+    private final double[][] cacheValues = new double[CACHE][8];
     private int cacheNext;
     private double cachedHessianNorm;
 
     // set by handlers during a segment
     private Trigger fired;
+    private String geometryMessage;
     private String geometryStop;
     private double[] pendingReset;
 
@@ -239,10 +240,17 @@ final class Engine {
             }
             try {
                 reason = applySwitch(fired);
+                if (reason == EndReason.GEOMETRY) {
+                    message = geometryMessage;
+                }
             } catch (Dynamics.BudgetExhausted e) {
                 reason = EndReason.BUDGET;
                 message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
                 dyn.budget = Long.MAX_VALUE;
+            } catch (SurfaceDomainException e) {
+                reason = EndReason.GEOMETRY;
+                message = e.getMessage();
+                restoreLastGood();
             }
         }
         closeSpan();
@@ -284,6 +292,9 @@ final class Engine {
             integ.addStepEndHandler(new Projection());
             integ.addEventDetector(new SwitchDetector(this, Trigger.LIFT_OFF, set));
             integ.addEventDetector(new SwitchDetector(this, Trigger.REST, set));
+            if (Double.isNaN(surface.maxConcaveCurvature())) {
+                integ.addEventDetector(new SwitchDetector(this, Trigger.FIT, set));
+            }
             if (surface.hasEdges()) {
                 integ.addEventDetector(new SwitchDetector(this, Trigger.EXIT, set));
             }
@@ -296,6 +307,8 @@ final class Engine {
                 integ.addEventDetector(new SwitchDetector(this, Trigger.STICK, set));
             }
         } else {
+            // a flight may end far from where it began: let Newton-based surfaces start afresh
+            dyn.geo.resetHint();
             integ.addEventDetector(new SwitchDetector(this, Trigger.IMPACT, set));
         }
         return integ.integrate(dyn, new ODEState(t, y.clone()), endTime);
@@ -339,6 +352,8 @@ final class Engine {
                 return v[4];
             case REST:
                 return v[3] - restSpeed;
+            case FIT:
+                return v[7];
             case IMPACT:
             default:
                 return v[5] - r + impactSlack;
@@ -372,6 +387,7 @@ final class Engine {
             hn += dyn.geo.hessian[i] * dyn.geo.hessian[i];
         }
         v[6] = Math.sqrt(hn);
+        v[7] = 1.0 - r * dyn.geo.curvature1;
         System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
         cacheTime[slot] = ts;
         cachePhase[slot] = phase;
@@ -504,6 +520,13 @@ final class Engine {
                 changePhase(Phase.FLIGHT);
                 log(EventKind.EXIT, before, null, Vector3D.ZERO, edge);
                 return null;
+            }
+            case FIT: {
+                surface.query(t, centreOf(y), dyn.geo);
+                geometryMessage = String.format(Locale.ROOT,
+                    "ball of radius %s m no longer fits surface %s at the contact point: r*kappa = %s >= 1",
+                    r, surface.name(), r * dyn.geo.curvature1);
+                return EndReason.GEOMETRY;
             }
             case REST: {
                 if (phase == Phase.ROLLING) {

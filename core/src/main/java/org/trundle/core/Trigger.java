@@ -12,6 +12,8 @@ enum Trigger {
     EXIT,
     /** Speed |v| + r|ω| falls to the rest threshold (contact phases), m/s. */
     REST,
+    /** {@code 1 − r κ₁} falls to zero: the ball no longer fits where it touches (contact phases). */
+    FIT,
     /** Distance minus radius falls to zero, approaching, inside the patch (flight), m. */
     IMPACT
 }
