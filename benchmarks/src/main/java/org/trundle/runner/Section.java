@@ -181,6 +181,85 @@ final class Section {
     }
 
     /**
+     * A list of at least {@code min} vectors, e.g. the points of a spline centreline.
+     *
+     * @param key key of a list of [x, y, z] vectors
+     * @param unit unit for messages
+     * @param min smallest number of entries
+     * @return the vectors
+     */
+    Vector3D[] vectorList(String key, String unit, int min) {
+        JsonNode n = required(key, "a list of vectors [[x, y, z], ...]" + unitText(unit));
+        if (!n.isArray() || n.size() < min) {
+            throw new ScenarioException(where(key) + " must be a list of at least " + min + " vectors [x, y, z]"
+                + unitText(unit) + ", got " + kind(n));
+        }
+        Vector3D[] out = new Vector3D[n.size()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = toVector(where(key) + "[" + i + "]", n.get(i), unit);
+        }
+        return out;
+    }
+
+    /**
+     * A list of at least {@code min} pairs of numbers, e.g. a profile of [axial, radius] points.
+     *
+     * @param key key of a list of [a, b] pairs
+     * @param unit unit for messages
+     * @param min smallest number of entries
+     * @return the pairs, as {first values, second values}
+     */
+    double[][] pairList(String key, String unit, int min) {
+        JsonNode n = required(key, "a list of pairs [[a, b], ...]" + unitText(unit));
+        if (!n.isArray() || n.size() < min) {
+            throw new ScenarioException(where(key) + " must be a list of at least " + min + " pairs [a, b]"
+                + unitText(unit) + ", got " + kind(n));
+        }
+        double[][] out = new double[2][n.size()];
+        for (int i = 0; i < n.size(); i++) {
+            JsonNode e = n.get(i);
+            if (!e.isArray() || e.size() != 2 || !e.get(0).isNumber() || !e.get(1).isNumber()
+                || !Double.isFinite(e.get(0).doubleValue()) || !Double.isFinite(e.get(1).doubleValue())) {
+                throw new ScenarioException(where(key) + "[" + i + "] must be a pair of numbers [a, b]"
+                    + unitText(unit) + ", got " + kind(e));
+            }
+            out[0][i] = e.get(0).doubleValue();
+            out[1][i] = e.get(1).doubleValue();
+        }
+        return out;
+    }
+
+    /**
+     * A number or a list of {@code count} numbers.
+     *
+     * @param key key
+     * @param unit unit for messages
+     * @param count length of the list form
+     * @return the values, one per entry (a single number repeated)
+     */
+    double[] numberOrList(String key, String unit, int count) {
+        JsonNode n = required(key, "a number or a list of " + count + " numbers" + unitText(unit));
+        double[] out = new double[count];
+        if (n.isNumber()) {
+            java.util.Arrays.fill(out, toNumber(key, n, unit));
+            return out;
+        }
+        if (!n.isArray() || n.size() != count) {
+            throw new ScenarioException(where(key) + " must be a number or a list of " + count + " numbers"
+                + unitText(unit) + ", got " + kind(n));
+        }
+        for (int i = 0; i < count; i++) {
+            JsonNode c = n.get(i);
+            if (!c.isNumber() || !Double.isFinite(c.doubleValue())) {
+                throw new ScenarioException(where(key) + "[" + i + "] must be a number" + unitText(unit) + ", got "
+                    + kind(c));
+            }
+            out[i] = c.doubleValue();
+        }
+        return out;
+    }
+
+    /**
      * A non-zero direction vector, returned as given (not normalised).
      *
      * @param key key
