@@ -90,9 +90,10 @@ final class Engine {
     private final double[][] cacheY = new double[CACHE][Dynamics.DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
-    private final double[][] cacheValues = new double[CACHE][8];
+    private final double[][] cacheValues = new double[CACHE][11];
     private int cacheNext;
     private double cachedHessianNorm;
+    private double[] lastValues;
 
     // set by handlers during a segment
     private Trigger fired;
@@ -341,6 +342,7 @@ final class Engine {
         }
         double[] v = cacheValues[slot];
         cachedHessianNorm = v[6];
+        lastValues = v;
         switch (trig) {
             case LIFT_OFF:
                 return v[0];
@@ -388,6 +390,9 @@ final class Engine {
         }
         v[6] = Math.sqrt(hn);
         v[7] = 1.0 - r * dyn.geo.curvature1;
+        v[8] = dyn.geo.normal[0];
+        v[9] = dyn.geo.normal[1];
+        v[10] = dyn.geo.normal[2];
         System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
         cacheTime[slot] = ts;
         cachePhase[slot] = phase;
@@ -448,6 +453,25 @@ final class Engine {
             + ys[Dynamics.V + 2] * ys[Dynamics.V + 2]);
         double reach = margin / (v * (1 + r * hessianNorm) + 1e-300);
         return Math.max(set.maxCheckInterval(), 0.5 * reach);
+    }
+
+    /**
+     * Check interval of the rest detector (s): the speed measure {@code |v| + r|ω|} changes at most
+     * at {@code |a| + r|α|}, read from the state's derivative, so it cannot fall to the rest speed
+     * sooner than {@code (speed − restSpeed)/(|a| + r|α|)} while the accelerations stay at that
+     * level; half of that (never less than the configured interval) is the time to the next check.
+     */
+    double restCheckInterval(ODEStateAndDerivative s) {
+        double gap = g(Trigger.REST, s);
+        if (!(gap > 0)) {
+            return set.maxCheckInterval();
+        }
+        double[] yd = s.getPrimaryDerivative();
+        double a = Math.sqrt(yd[Dynamics.V] * yd[Dynamics.V] + yd[Dynamics.V + 1] * yd[Dynamics.V + 1]
+            + yd[Dynamics.V + 2] * yd[Dynamics.V + 2]);
+        double al = Math.sqrt(yd[Dynamics.W] * yd[Dynamics.W] + yd[Dynamics.W + 1] * yd[Dynamics.W + 1]
+            + yd[Dynamics.W + 2] * yd[Dynamics.W + 2]);
+        return Math.max(set.maxCheckInterval(), 0.5 * gap / (a + r * al + 1e-300));
     }
 
     /** Reaction to a located root of a trigger's event function. */
@@ -981,34 +1005,39 @@ final class Engine {
         public Action stepEndOccurred(ODEStateAndDerivative state, boolean forward) {
             double[] ys = state.getPrimaryState();
             double ts = state.getTime();
-            dyn.phase = phase;
-            dyn.evaluate(ts, ys);
-            maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
-            ContactGeometry geo = dyn.geo;
-            double res = Math.abs(geo.distance - r);
+            // the detectors have already evaluated this state: read their cached values
+            g(Trigger.LIFT_OFF, state);
+            double[] ev = lastValues;
+            maxNormalForce = Math.max(maxNormalForce, ev[0]);
+            double res = Math.abs(ev[5] - r);
             maxDistanceError = Math.max(maxDistanceError, res);
             double slipRes = 0;
             if (phase == Phase.ROLLING) {
-                double ex = ys[Dynamics.V] - dyn.vel[0];
-                double ey = ys[Dynamics.V + 1] - dyn.vel[1];
-                double ez = ys[Dynamics.V + 2] - dyn.vel[2];
+                // v - r w x n
+                double wx = ys[Dynamics.W];
+                double wy = ys[Dynamics.W + 1];
+                double wz = ys[Dynamics.W + 2];
+                double ex = ys[Dynamics.V] - r * (wy * ev[10] - wz * ev[9]);
+                double ey = ys[Dynamics.V + 1] - r * (wz * ev[8] - wx * ev[10]);
+                double ez = ys[Dynamics.V + 2] - r * (wx * ev[9] - wy * ev[8]);
                 slipRes = Math.sqrt(ex * ex + ey * ey + ez * ez);
                 maxRollingSlip = Math.max(maxRollingSlip, slipRes);
             }
-            if (r * geo.curvature1 >= 1.0) {
+            if (ev[7] <= 0) {
                 geometryStop = String.format(Locale.ROOT,
                     "ball of radius %s m no longer fits surface %s at the contact point: r*kappa = %s >= 1",
-                    r, surface.name(), r * geo.curvature1);
+                    r, surface.name(), 1 - ev[7]);
                 return Action.STOP;
             }
+            ContactGeometry geo = dyn.geo;
             double qn = Math.sqrt(ys[Dynamics.Q] * ys[Dynamics.Q] + ys[Dynamics.Q + 1] * ys[Dynamics.Q + 1]
                 + ys[Dynamics.Q + 2] * ys[Dynamics.Q + 2] + ys[Dynamics.Q + 3] * ys[Dynamics.Q + 3]);
             if (res > set.projectionThreshold() * r || slipRes > set.projectionThreshold() * speedScale
                 || Math.abs(qn - 1) > QUATERNION_DRIFT) {
                 double[] p = ys.clone();
-                double dr = r - geo.distance;
+                double dr = r - ev[5];
                 for (int i = 0; i < 3; i++) {
-                    p[Dynamics.C + i] += dr * geo.normal[i];
+                    p[Dynamics.C + i] += dr * ev[8 + i];
                 }
                 for (int i = 0; i < 4; i++) {
                     p[Dynamics.Q + i] /= qn;

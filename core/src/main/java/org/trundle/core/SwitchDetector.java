@@ -23,6 +23,8 @@ final class SwitchDetector extends AbstractODEDetector<SwitchDetector> {
                 ? (state, forward) -> engine.stickCheckInterval(state)
                 : trigger == Trigger.EXIT
                 ? (state, forward) -> engine.exitCheckInterval(state)
+                : trigger == Trigger.REST
+                ? (state, forward) -> engine.restCheckInterval(state)
                 : AdaptableInterval.of(set.maxCheckInterval()), 100,
             new BracketingNthOrderBrentSolver(0.0, set.eventTimeTolerance(), 0.0, 5), null);
     }
