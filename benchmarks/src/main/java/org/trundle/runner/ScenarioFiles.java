@@ -14,10 +14,12 @@ import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 
 /**
- * Reading scenario documents (JSON, strict: no duplicate keys, nothing after the document) and the
- * shared JSON mapper for outputs.
+ * Reading scenario documents (JSON, strict: no duplicate keys, nothing after the document; or YAML
+ * with the same keys, for files named {@code *.yaml} or {@code *.yml}) and the shared JSON mapper for
+ * outputs.
  */
 final class ScenarioFiles {
     /** The mapper: strict reading, indented writing. */
@@ -25,6 +27,11 @@ final class ScenarioFiles {
         .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
         .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
         .enable(SerializationFeature.INDENT_OUTPUT);
+
+    /** The YAML reader: the same keys and checks as JSON. */
+    static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory())
+        .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+        .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
 
     /** Resource path of the built-in demo scenario. */
     static final String DEMO_RESOURCE = "/org/trundle/runner/demo-return-tube.json";
@@ -46,7 +53,8 @@ final class ScenarioFiles {
         } catch (IOException e) {
             throw new ScenarioException("cannot read scenario file " + file + ": " + e.getMessage());
         }
-        return parse(text);
+        String name = file.getFileName() == null ? "" : file.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+        return name.endsWith(".yaml") || name.endsWith(".yml") ? parse(text, YAML, "YAML") : parse(text);
     }
 
     /**
@@ -54,10 +62,20 @@ final class ScenarioFiles {
      * @return the document
      */
     static JsonNode parse(String text) {
+        return parse(text, JSON, "JSON");
+    }
+
+    /**
+     * @param text document text
+     * @param mapper the reader for its format
+     * @param format the format's name for messages
+     * @return the document
+     */
+    static JsonNode parse(String text, ObjectMapper mapper, String format) {
         try {
-            JsonNode n = JSON.readTree(text);
+            JsonNode n = mapper.readTree(text);
             if (n == null || n.isMissingNode()) {
-                throw new ScenarioException("malformed JSON: the file is empty");
+                throw new ScenarioException("malformed " + format + ": the file is empty");
             }
             return n;
         } catch (JsonProcessingException e) {
@@ -69,7 +87,7 @@ final class ScenarioFiles {
             }
             m = m.replaceAll("\\[Source: .*?; line: ", "[line: ");
             String where = loc == null ? "" : " at line " + loc.getLineNr() + ", column " + loc.getColumnNr();
-            throw new ScenarioException("malformed JSON" + where + ": " + m.trim());
+            throw new ScenarioException("malformed " + format + where + ": " + m.trim());
         }
     }
 

@@ -78,6 +78,32 @@ class RunCommandTest {
         assertTrue(Files.size(out.resolve("run.png")) > 10_000);
     }
 
+    /** The same scenario written as YAML (same keys) gives the same summary; YAML errors carry line and column. */
+    @Test
+    void yamlScenarioWithTheSameKeys() throws IOException {
+        String yaml = "description: Invented check, a 20 mm ball dropped 0.1 m onto a floor\n"
+            + "ball: {radius: 0.01, mass: 0.03, inertia: 0.4}\n"
+            + "surface: {type: plane, origin: [0, 0, 0], normal: [0, 0, 1]}\n"
+            + "contact:\n  law: rolling\n  restitution: 0.5\n"
+            + "start: {position: [0, 0, 0.11], velocity: [0.2, 0, 0], spin: [0, 0, 0]}\n"
+            + "run: {duration: 1.0, sample_interval: 0.001}\n";
+        Path fy = Cli.write(dir, "drop.yaml", yaml);
+        Path fj = Cli.write(dir, "drop.json", DROP);
+        Cli.Result ry = Cli.run("run", fy.toString(), "--out", dir.resolve("y").toString(), "--duration", "0.3");
+        Cli.Result rj = Cli.run("run", fj.toString(), "--out", dir.resolve("j").toString(), "--duration", "0.3");
+        assertEquals(0, ry.code(), ry.err());
+        assertEquals(0, rj.code(), rj.err());
+        JsonNode sy = ScenarioFiles.JSON.readTree(dir.resolve("y").resolve("summary.json").toFile());
+        JsonNode sj = ScenarioFiles.JSON.readTree(dir.resolve("j").resolve("summary.json").toFile());
+        assertEquals(sj.get("events"), sy.get("events"));
+        assertEquals(sj.get("end_state"), sy.get("end_state"));
+        Path bad = Cli.write(dir, "bad.yml", "ball: {radius: 0.01\nmass: 2\n");
+        Cli.Result rb = Cli.run("run", bad.toString(), "--out", dir.resolve("b").toString());
+        assertEquals(2, rb.code());
+        assertTrue(rb.err().contains("malformed YAML at line 2, column 5"), rb.err());
+        assertEquals(1, rb.err().strip().lines().count(), "one line");
+    }
+
     @Test
     void helpNamesTheUnits() {
         Cli.Result root = Cli.run("--help");
