@@ -93,9 +93,12 @@ final class Engine {
         put(y, Dynamics.C, start.centre());
         put(y, Dynamics.V, start.velocity());
         y[Dynamics.Q] = q.getQ0();
-        y[Dynamics.Q + 1] = q.getQ1();
-        y[Dynamics.Q + 2] = q.getQ2();
-        y[Dynamics.Q + 3] = q.getQ3();
+        // Hipparchus' Rotation stores the conjugate of the Hamilton quaternion that rotates vectors
+        // (its applyTo(u) is q* u q), while the state array holds the Hamilton one (v = q u q*,
+        // integrated as dq/dt = (0, w) q / 2): negate the vector part both ways.
+        y[Dynamics.Q + 1] = -q.getQ1();
+        y[Dynamics.Q + 2] = -q.getQ2();
+        y[Dynamics.Q + 3] = -q.getQ3();
         put(y, Dynamics.W, start.spin());
         c0 = start.centre().toArray();
         double gn = Dynamics.norm(g);
@@ -224,9 +227,12 @@ final class Engine {
         put(y, Dynamics.W, lastGood.spin());
         Rotation q = lastGood.orientation();
         y[Dynamics.Q] = q.getQ0();
-        y[Dynamics.Q + 1] = q.getQ1();
-        y[Dynamics.Q + 2] = q.getQ2();
-        y[Dynamics.Q + 3] = q.getQ3();
+        // Hipparchus' Rotation stores the conjugate of the Hamilton quaternion that rotates vectors
+        // (its applyTo(u) is q* u q), while the state array holds the Hamilton one (v = q u q*,
+        // integrated as dq/dt = (0, w) q / 2): negate the vector part both ways.
+        y[Dynamics.Q + 1] = -q.getQ1();
+        y[Dynamics.Q + 2] = -q.getQ2();
+        y[Dynamics.Q + 3] = -q.getQ3();
         phase = lastGood.phase();
     }
 
@@ -744,7 +750,7 @@ final class Engine {
             vy = dyn.vel[1];
             vz = dyn.vel[2];
         }
-        Rotation q = new Rotation(ys[Dynamics.Q], ys[Dynamics.Q + 1], ys[Dynamics.Q + 2], ys[Dynamics.Q + 3], true);
+        Rotation q = new Rotation(ys[Dynamics.Q], -ys[Dynamics.Q + 1], -ys[Dynamics.Q + 2], -ys[Dynamics.Q + 3], true);
         return BallState.of(ts, new Vector3D(ys[Dynamics.C], ys[Dynamics.C + 1], ys[Dynamics.C + 2]),
             new Vector3D(vx, vy, vz), q, new Vector3D(ys[Dynamics.W], ys[Dynamics.W + 1], ys[Dynamics.W + 2]), p);
     }

@@ -64,9 +64,10 @@ public final class RightHandSide {
         y[5] = s.velocity().getZ();
         Rotation q = s.orientation();
         y[6] = q.getQ0();
-        y[7] = q.getQ1();
-        y[8] = q.getQ2();
-        y[9] = q.getQ3();
+        // Hamilton components: the vector part of Hipparchus' quaternion has the opposite sign
+        y[7] = -q.getQ1();
+        y[8] = -q.getQ2();
+        y[9] = -q.getQ3();
         y[10] = s.spin().getX();
         y[11] = s.spin().getY();
         y[12] = s.spin().getZ();
