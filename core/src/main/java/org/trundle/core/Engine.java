@@ -150,6 +150,7 @@ final class Engine {
 
         EndReason reason = null;
         String message = "";
+        try {
         while (reason == null) {
             if (events.size() >= set.maxEvents()) {
                 reason = EndReason.BUDGET;
@@ -201,6 +202,15 @@ final class Engine {
             }
             reason = applySwitch(fired);
         }
+        } catch (Dynamics.BudgetExhausted e) {
+            // exhausted outside the integrator: in a switch, the rest test or a start-of-segment check
+            reason = EndReason.BUDGET;
+            message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+            restoreLastGood();
+        }
+        // the closing bookkeeping below evaluates the right-hand side a few more times: lift the budget
+        // so that a run that exhausted it still returns its result (it used to throw BudgetExhausted)
+        dyn.budget = Long.MAX_VALUE;
         closeSpan();
         BallState endState = toState(t, y, phase);
         emitSample(t, y, phase, true);
