@@ -155,6 +155,38 @@ public final class Invariants {
         };
     }
 
+    /**
+     * The phase log is explained: consecutive phase spans differ, and each change of phase at time
+     * {@code t} has a logged event at {@code t} that leaves the earlier phase and enters the later
+     * one (the phase machine switches only at located events; design notes §1). Worst deviation:
+     * the number of unexplained changes.
+     *
+     * @return the invariant (bound 0)
+     */
+    public static Invariant phaseChangesHaveCauses() {
+        return c -> {
+            var res = c.simulation().run(c.start(), c.duration());
+            var spans = res.phases();
+            int bad = 0;
+            String first = "";
+            for (int i = 1; i < spans.size(); i++) {
+                var a = spans.get(i - 1);
+                var b = spans.get(i);
+                double at = b.start();
+                boolean caused = a.phase() != b.phase() && res.events().stream().anyMatch(ev -> ev.time() == at
+                    && ev.phaseAfter() == b.phase() && ev.before().phase() == a.phase());
+                if (!caused) {
+                    if (bad == 0) {
+                        first = a.phase().label() + " -> " + b.phase().label() + " at t=" + at + " s";
+                    }
+                    bad++;
+                }
+            }
+            return Verdict.measured("phase changes have causes", bad, 0, bad == 0 ? spans.size() + " spans"
+                : "first unexplained: " + first + "; events " + res.events());
+        };
+    }
+
     // ------------------------------------------------------------------ reversibility
 
     /**
