@@ -33,7 +33,9 @@ import org.trundle.surfaces.Side;
  * and 10⁻¹² to 10⁶ m/s, spins up to 10⁹ rad/s, {@code μ} at 0, 10⁻⁹ and 10⁶, restitution 0 and 1,
  * rolling- and pivoting-resistance lengths up to ten radii, zero, tiny and huge gravity, starts
  * exactly on a patch edge or just outside it, on a tube's axis, and NaN and infinite numbers in
- * every input. Every run has a budget (10⁵ right-hand-side evaluations, 2,000 events).
+ * every input. Every run has a budget (10⁵ right-hand-side evaluations, 2,000 events). Approaches
+ * to a cone apex join the menus when the project has a cone (one more surface kind in
+ * {@link #probe}).
  *
  * <p>Run 10⁵ cases: {@code java -cp benchmarks/target/trundle.jar org.trundle.bench.RobustnessCampaign 100000}
  * (optional second argument: the seed; third: print every non-valid case).
