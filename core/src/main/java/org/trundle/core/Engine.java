@@ -162,7 +162,11 @@ final class Engine {
         }
         dyn.budget = set.maxEvaluations();
 
-        phase = startPhase(start.phase());
+        try {
+            phase = startPhase(start.phase());
+        } catch (SurfaceDomainException e) {
+            throw new IllegalArgumentException("start state is not valid on this surface: " + e.getMessage(), e);
+        }
         BallState s0 = toState(t, y, phase);
         double e0 = sim.energy(s0);
         lastGoodY = y.clone();
@@ -181,6 +185,7 @@ final class Engine {
 
         EndReason reason = null;
         String message = "";
+        try {
         while (reason == null) {
             if (events.size() >= set.maxEvents()) {
                 reason = EndReason.BUDGET;
@@ -254,6 +259,15 @@ final class Engine {
                 restoreLastGood();
             }
         }
+        } catch (Dynamics.BudgetExhausted e) {
+            // exhausted outside the integrator: in a switch, the rest test or a start-of-segment check
+            reason = EndReason.BUDGET;
+            message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+            restoreLastGood();
+        }
+        // the closing bookkeeping below evaluates the right-hand side a few more times: lift the budget
+        // so that a run that exhausted it still returns its result (it used to throw BudgetExhausted)
+        dyn.budget = Long.MAX_VALUE;
         closeSpan();
         BallState endState = toState(t, y, phase);
         emitSample(t, y, phase, true);

@@ -167,7 +167,12 @@ public final class Simulation {
         Checks.finite("centre", centre);
         Checks.finite("velocity", velocity);
         Checks.finite("normalSpin", normalSpin);
-        ContactGeometry g = geometryAt(centre, 0.0);
+        ContactGeometry g;
+        try {
+            g = geometryAt(centre, 0.0);
+        } catch (SurfaceDomainException e) {
+            throw new IllegalArgumentException("centre " + centre + " has no contact normal: " + e.getMessage(), e);
+        }
         Vector3D n = new Vector3D(g.normal[0], g.normal[1], g.normal[2]);
         Vector3D spin = Vector3D.crossProduct(n, velocity).scalarMultiply(1.0 / ball.radius())
             .add(normalSpin, n);

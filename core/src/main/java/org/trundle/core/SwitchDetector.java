@@ -48,6 +48,12 @@ final class SwitchDetector extends AbstractODEDetector<SwitchDetector> {
         return engine.g(trigger, state);
     }
 
+    /** Names the trigger, so that an integrator error message about this detector says which switch it was. */
+    @Override
+    public String toString() {
+        return "switch detector for " + trigger.name().toLowerCase(java.util.Locale.ROOT);
+    }
+
     private static final class Handler implements ODEEventHandler {
         private final Engine engine;
         private final Trigger trigger;

@@ -1,0 +1,592 @@
+package org.trundle.core.check;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.SplittableRandom;
+import java.util.function.BiFunction;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.RotationConvention;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Ball;
+import org.trundle.core.BallState;
+import org.trundle.core.Checks;
+import org.trundle.core.ContactGeometry;
+import org.trundle.core.ContactLaw;
+import org.trundle.core.EndReason;
+import org.trundle.core.EventKind;
+import org.trundle.core.Phase;
+import org.trundle.core.RunEvent;
+import org.trundle.core.Sample;
+import org.trundle.core.Simulation;
+import org.trundle.core.SolverSettings;
+
+/**
+ * The kit's invariant checks. Each returns an {@link Invariant} whose verdict reports the worst
+ * deviation in a documented dimensionless unit against a bound the caller chooses from the
+ * numerics (the integrator's relative tolerance, default 1e-10, times the growth the check allows).
+ *
+ * <p>Scales: energies are judged against the run's {@code E_scale} ({@link
+ * org.trundle.core.EnergyBudget#scale()}); lengths against the ball radius {@code r}; speeds
+ * against the case's speed scale {@code V} ({@link PropertyCase#speedScale()}); spins against
+ * {@code V/r}.
+ */
+public final class Invariants {
+    private Invariants() {
+    }
+
+    // ------------------------------------------------------------------ energy
+
+    /**
+     * Energy conservation for non-dissipative laws (pure rolling, frictionless sliding): rolling
+     * without slip does no work, since the contact point is at rest (common practice; any text on
+     * non-holonomic rolling). Worst deviation: {@code max |E(t) − E(0)| / E_scale} over the samples
+     * up to the first impact (an impact with restitution below 1 dissipates by design).
+     *
+     * @param bound bound on the relative drift
+     * @return the invariant
+     */
+    public static Invariant energyConserved(double bound) {
+        Checks.positive("bound", bound);
+        return c -> {
+            Trajectory tr = Trajectory.run(c.simulation(), c.start(), c.duration());
+            double tImpact = firstTime(tr.result.events(), EventKind.IMPACT);
+            Simulation sim = c.simulation();
+            double scale = tr.result.energy().scale();
+            double e0 = sim.energy(c.start());
+            double worst = 0;
+            double at = 0;
+            for (Sample s : tr.samples) {
+                if (s.time() > tImpact) {
+                    break;
+                }
+                double dev = Math.abs(sim.energy(s.state()) - e0) / scale;
+                if (!(dev <= worst)) {
+                    worst = dev;
+                    at = s.time();
+                }
+            }
+            return Verdict.measured("energy conserved", worst, bound,
+                String.format(Locale.ROOT, "worst at t=%.6g s, end %s", at, tr.result.endReason().label()));
+        };
+    }
+
+    /**
+     * Energy never rises under a dissipative law (friction, rolling and pivoting resistance,
+     * inelastic impacts, all of which only remove energy): worst deviation
+     * {@code max over t of (E(t) − max_{t' ≤ t} E(t')) / E_scale}, zero when it never rises.
+     *
+     * @param bound bound on the relative rise (the integration tolerance's share)
+     * @return the invariant
+     */
+    public static Invariant energyNeverRises(double bound) {
+        Checks.positive("bound", bound);
+        return c -> {
+            Trajectory tr = Trajectory.run(c.simulation(), c.start(), c.duration());
+            Simulation sim = c.simulation();
+            double scale = tr.result.energy().scale();
+            double peak = sim.energy(c.start());
+            double worst = 0;
+            double at = 0;
+            for (Sample s : tr.samples) {
+                double e = sim.energy(s.state());
+                double rise = (e - peak) / scale;
+                if (!(rise <= worst)) {
+                    worst = rise;
+                    at = s.time();
+                }
+                peak = Math.max(peak, e);
+            }
+            return Verdict.measured("energy never rises", worst, bound,
+                String.format(Locale.ROOT, "worst at t=%.6g s, end %s", at, tr.result.endReason().label()));
+        };
+    }
+
+    /**
+     * The energy budget closes: {@code |E₁ − E₀ + losses − applied work| / E_scale}
+     * ({@link org.trundle.core.EnergyBudget#relativeResidual()}), and no loss is negative by more
+     * than the bound.
+     *
+     * @param bound bound on the relative residual
+     * @return the invariant
+     */
+    public static Invariant budgetCloses(double bound) {
+        Checks.positive("bound", bound);
+        return c -> {
+            var res = c.simulation().run(c.start(), c.duration());
+            var b = res.energy();
+            double neg = Math.max(0, -Math.min(Math.min(b.slidingFrictionLoss(), b.rollingResistanceLoss()),
+                Math.min(Math.min(b.pivotingResistanceLoss(), b.otherCoupleLoss()), b.impactLoss()))) / b.scale();
+            return Verdict.measured("energy budget closes", Math.max(b.relativeResidual(), neg), bound, b.toString());
+        };
+    }
+
+    // ------------------------------------------------------------------ constraints
+
+    /**
+     * The distance residual in contact stays small: {@link org.trundle.core.RunResult#maxDistanceError()}
+     * over the ball radius.
+     *
+     * @param bound bound on {@code max |d − r| / r}
+     * @return the invariant
+     */
+    public static Invariant distanceResidual(double bound) {
+        Checks.positive("bound", bound);
+        return c -> {
+            var res = c.simulation().run(c.start(), c.duration());
+            return Verdict.measured("distance residual", res.maxDistanceError() / c.simulation().ball().radius(),
+                bound, "end " + res.endReason().label());
+        };
+    }
+
+    /**
+     * The slip residual while rolling stays small: {@link org.trundle.core.RunResult#maxRollingSlip()}
+     * over the speed scale V.
+     *
+     * @param bound bound on {@code max |v − r ω × n| / V}
+     * @return the invariant
+     */
+    public static Invariant slipResidual(double bound) {
+        Checks.positive("bound", bound);
+        return c -> {
+            var res = c.simulation().run(c.start(), c.duration());
+            return Verdict.measured("rolling slip residual", res.maxRollingSlip() / c.speedScale(), bound,
+                "end " + res.endReason().label());
+        };
+    }
+
+    /**
+     * The phase log is explained: consecutive phase spans differ, and each change of phase at time
+     * {@code t} has a logged event at {@code t} that leaves the earlier phase and enters the later
+     * one (the phase machine switches only at located events; design notes §1). Worst deviation:
+     * the number of unexplained changes.
+     *
+     * @return the invariant (bound 0)
+     */
+    public static Invariant phaseChangesHaveCauses() {
+        return c -> {
+            var res = c.simulation().run(c.start(), c.duration());
+            var spans = res.phases();
+            int bad = 0;
+            String first = "";
+            for (int i = 1; i < spans.size(); i++) {
+                var a = spans.get(i - 1);
+                var b = spans.get(i);
+                double at = b.start();
+                boolean caused = a.phase() != b.phase() && res.events().stream().anyMatch(ev -> ev.time() == at
+                    && ev.phaseAfter() == b.phase() && ev.before().phase() == a.phase());
+                if (!caused) {
+                    if (bad == 0) {
+                        first = a.phase().label() + " -> " + b.phase().label() + " at t=" + at + " s";
+                    }
+                    bad++;
+                }
+            }
+            return Verdict.measured("phase changes have causes", bad, 0, bad == 0 ? spans.size() + " spans"
+                : "first unexplained: " + first + "; events " + res.events());
+        };
+    }
+
+    // ------------------------------------------------------------------ reversibility
+
+    /**
+     * Time reversibility of pure rolling. The rolling equations are invariant under
+     * {@code t → −t, v → −v, ω → −ω} (the no-slip constraint and Newton–Euler are; a law without
+     * dissipation adds nothing odd in time), so running forward for {@code T}, reversing velocity
+     * and spin and running {@code T} again must return to the start (orientation included) with
+     * velocity and spin reversed.
+     *
+     * <p>Duration from the shape: on non-integrable shapes errors grow exponentially, so
+     * {@code T = min(case duration, turns·τ)} with {@code τ = 1/(‖H‖ V)} the time the centre needs
+     * to turn by one radian on the offset surface ({@code ‖H‖} the Frobenius norm of the distance
+     * Hessian at the start centre; on a plane {@code τ} is infinite and the case duration is used).
+     * Applies to rolling starts whose forward run has no event and ends at its duration.
+     *
+     * <p>Worst deviation: the largest of {@code |c_back − c₀|/r}, {@code |v_back + v₀|/V},
+     * {@code r|ω_back + ω₀|/V} and the orientation angle between {@code q_back} and {@code q₀}
+     * (rad).
+     *
+     * @param turns number of characteristic times, positive
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     */
+    public static Invariant timeReversible(double turns, double bound) {
+        Checks.positive("turns", turns);
+        Checks.positive("bound", bound);
+        String name = "time reversible";
+        return c -> {
+            BallState s0 = c.start();
+            if (s0.phase() != Phase.ROLLING) {
+                return Verdict.notApplicable(name, "start is " + s0.phase().label() + ", not rolling");
+            }
+            Simulation sim = c.simulation();
+            double r = sim.ball().radius();
+            double v = c.speedScale();
+            ContactGeometry g = sim.geometryAt(s0.centre(), s0.time());
+            double h = 0;
+            for (double x : g.hessian) {
+                h += x * x;
+            }
+            h = Math.sqrt(h);
+            double tau = h > 0 ? 1.0 / (h * v) : Double.POSITIVE_INFINITY;
+            double t = Math.min(c.duration(), turns * tau);
+            var fwd = sim.run(s0, t);
+            if (fwd.endReason() != EndReason.DURATION || !fwd.events().isEmpty()) {
+                return Verdict.notApplicable(name, "forward run ended " + fwd.endReason().label() + " with "
+                    + fwd.events().size() + " events");
+            }
+            BallState e = fwd.endState();
+            BallState back0 = BallState.of(s0.time(), e.centre(), e.velocity().negate(), e.orientation(),
+                e.spin().negate(), Phase.ROLLING);
+            var back = sim.run(back0, e.time() - s0.time());
+            BallState b = back.endState();
+            if (back.endReason() != EndReason.DURATION || !back.events().isEmpty()) {
+                return Verdict.measured(name, Double.POSITIVE_INFINITY, bound, "reversed run ended "
+                    + back.endReason().label() + " with events " + back.events());
+            }
+            double dc = b.centre().distance(s0.centre()) / r;
+            double dv = b.velocity().add(s0.velocity()).getNorm() / v;
+            double dw = r * b.spin().add(s0.spin()).getNorm() / v;
+            double dq = Rotation.distance(b.orientation(), s0.orientation());
+            double worst = Math.max(Math.max(dc, dv), Math.max(dw, dq));
+            return Verdict.measured(name, worst, bound, String.format(Locale.ROOT,
+                "T=%.4g s (%.3g characteristic times): centre %.2e r, velocity %.2e V, spin %.2e V/r, orientation %.2e rad",
+                t, Double.isFinite(tau) ? t / tau : 0.0, dc, dv, dw, dq));
+        };
+    }
+
+    // ------------------------------------------------------------------ frame invariance
+
+    /**
+     * Frame invariance with a rigid motion drawn from the case's seed and index (a uniformly
+     * random axis, an angle in [0, 2π), a translation of up to 0.1 m).
+     *
+     * @param bound bound on the worst deviation (see {@link #frameInvariant(Rotation, Vector3D, double)})
+     * @return the invariant
+     */
+    public static Invariant frameInvariant(double bound) {
+        return c -> {
+            SplittableRandom rnd = Draws.forCase(c.seed() ^ 0x5DEECE66DL, c.index());
+            Rotation rot = new Rotation(Draws.unitVector(rnd), 2 * Math.PI * rnd.nextDouble(),
+                RotationConvention.VECTOR_OPERATOR);
+            Vector3D b = Draws.inBall(rnd, Vector3D.ZERO, 0.1);
+            return frameInvariant(rot, b, bound).check(c);
+        };
+    }
+
+    /**
+     * Frame invariance: moving the surface, the gravity and the start together by the rigid motion
+     * {@code x ↦ R x + b} moves the trajectory the same way (Newton–Euler and the contact
+     * conditions are Euclidean-invariant: common practice). Both runs are sampled at 16 equal
+     * intervals; worst deviation over the samples and the end state: the largest of
+     * {@code |R c + b − c'|/r}, {@code |R v − v'|/V}, {@code r|R ω − ω'|/V} and the orientation
+     * angle (rad); a different end reason or event sequence is a failure (infinite deviation).
+     * The two runs' step choices differ at the tolerance (the relative part of the error norm is
+     * per component, so not rotation-invariant), and on integrable shapes such differences grow
+     * linearly with the angle turned, so the verdict's deviation is the worst one divided by the
+     * number of characteristic times {@code max(1, T ‖H‖ V)} (see
+     * {@link #timeReversible(double, double)}); the detail gives the raw value.
+     *
+     * @param rotation R
+     * @param translation b (m)
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     */
+    public static Invariant frameInvariant(Rotation rotation, Vector3D translation, double bound) {
+        Checks.positive("bound", bound);
+        Checks.finite("translation", translation);
+        String name = "frame invariant";
+        return c -> {
+            Simulation sim = sampled(c.simulation(), c.simulation().settings().withSampleInterval(c.duration() / 16));
+            Simulation moved = sim.toBuilder()
+                .surface(new RigidlyMovedSurface(sim.surface(), rotation, translation))
+                .gravity(rotation.applyTo(sim.gravity())).build();
+            BallState s0 = c.start();
+            BallState m0 = BallState.of(s0.time(), rotation.applyTo(s0.centre()).add(translation),
+                rotation.applyTo(s0.velocity()), rotation.applyTo(s0.orientation()), rotation.applyTo(s0.spin()),
+                s0.phase());
+            Trajectory a = Trajectory.run(sim, s0, c.duration());
+            Trajectory b = Trajectory.run(moved, m0, c.duration());
+            String mismatch = compareLogs(a, b);
+            if (mismatch != null) {
+                return Verdict.measured(name, Double.POSITIVE_INFINITY, bound, mismatch);
+            }
+            double r = sim.ball().radius();
+            double v = c.speedScale();
+            double worst = 0;
+            double at = 0;
+            List<Sample> ra = a.regular();
+            List<Sample> rb = b.regular();
+            int n = Math.min(ra.size(), rb.size());
+            for (int i = 0; i <= n; i++) {
+                BallState x = i < n ? ra.get(i).state() : a.result.endState();
+                BallState y = i < n ? rb.get(i).state() : b.result.endState();
+                double dev = Math.max(Math.max(
+                    rotation.applyTo(x.centre()).add(translation).distance(y.centre()) / r,
+                    rotation.applyTo(x.velocity()).distance(y.velocity()) / v),
+                    Math.max(r * rotation.applyTo(x.spin()).distance(y.spin()) / v,
+                        Rotation.distance(rotation.applyTo(x.orientation()), y.orientation())));
+                if (!(dev <= worst)) {
+                    worst = dev;
+                    at = x.time();
+                }
+            }
+            double turns = turns(c);
+            return Verdict.measured(name, worst / turns, bound, String.format(Locale.ROOT,
+                "raw worst %.3e at t=%.6g s over %d samples, %.3g characteristic times, end %s", worst, at, n + 1,
+                turns, a.result.endReason().label()));
+        };
+    }
+
+    // ------------------------------------------------------------------ scaling
+
+    /**
+     * Dimensional scaling: a {@link ScalableLaw} is rebuilt with its lengths times {@code λ}; any
+     * other law is used as it is, which is right for laws without a length parameter (pure
+     * rolling, Coulomb).
+     *
+     * @param lambda length factor λ, positive
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     * @see #scaling(double, BiFunction, double)
+     */
+    public static Invariant scaling(double lambda, double bound) {
+        return scaling(lambda, (law, l) -> law instanceof ScalableLaw ? ((ScalableLaw) law).scaled(l) : law, bound);
+    }
+
+    /**
+     * Dimensional scaling: with gravity and masses unchanged, multiplying every length by
+     * {@code λ} (ball radius, surface, start centre, any length of the law) and every time by
+     * {@code √λ} (so velocities by {@code √λ} and spins by {@code 1/√λ}) leaves the equations of
+     * motion invariant (accelerations {@code v²/R} and {@code g} are unchanged; a standard
+     * dimensional-analysis argument, e.g. Froude similarity — common practice). The scaled run
+     * must retrace the scaled trajectory. The solver's own settings are scale-covariant (its
+     * tolerances are relative to {@code r} and {@code V}; the check scales the absolute times
+     * {@code maxCheckInterval}, {@code eventTimeTolerance} and a non-zero {@code settleSpeed}),
+     * except for its floors ({@code V ≥ 1e-3 m/s}, settle speed ≥ 1e-6 m/s): keep cases above
+     * them.
+     *
+     * <p>Worst deviation over 16 equally spaced samples and the end state: the largest of
+     * {@code |c'/λ − c|/r}, {@code |v'/√λ − v|/V}, {@code r|√λ ω' − ω|/V}, divided (as in
+     * {@link #frameInvariant(Rotation, Vector3D, double)}) by the number of characteristic times; a
+     * different end reason or event sequence is a failure.
+     *
+     * @param lambda length factor λ, positive
+     * @param scaleLaw gives the law with its lengths multiplied by λ (identity for laws without
+     *     lengths)
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     */
+    public static Invariant scaling(double lambda, BiFunction<ContactLaw, Double, ContactLaw> scaleLaw, double bound) {
+        Checks.positive("lambda", lambda);
+        Checks.positive("bound", bound);
+        String name = "scaling x" + lambda;
+        double st = Math.sqrt(lambda);
+        return c -> {
+            Simulation sim = sampled(c.simulation(), c.simulation().settings().withSampleInterval(c.duration() / 16));
+            SolverSettings s = sim.settings();
+            SolverSettings ss = s.withSampleInterval(s.sampleInterval() * st)
+                .withMaxCheckInterval(s.maxCheckInterval() * st)
+                .withEventTimeTolerance(s.eventTimeTolerance() * st)
+                .withSettleSpeed(s.settleSpeed() * st);
+            Ball b = sim.ball();
+            Simulation big = sim.toBuilder().ball(Ball.of(b.radius() * lambda, b.mass(), b.inertiaFactor()))
+                .surface(new ScaledSurface(sim.surface(), lambda)).law(scaleLaw.apply(sim.law(), lambda))
+                .settings(ss).build();
+            BallState s0 = c.start();
+            BallState b0 = BallState.of(s0.time() * st, s0.centre().scalarMultiply(lambda),
+                s0.velocity().scalarMultiply(st), s0.orientation(), s0.spin().scalarMultiply(1 / st), s0.phase());
+            Trajectory x = Trajectory.run(sim, s0, c.duration());
+            Trajectory y = Trajectory.run(big, b0, c.duration() * st);
+            String mismatch = compareLogs(x, y);
+            if (mismatch != null) {
+                return Verdict.measured(name, Double.POSITIVE_INFINITY, bound, mismatch);
+            }
+            double r = b.radius();
+            double v = c.speedScale();
+            List<Sample> rx = x.regular();
+            List<Sample> ry = y.regular();
+            int n = Math.min(rx.size(), ry.size());
+            double worst = 0;
+            double at = 0;
+            for (int i = 0; i <= n; i++) {
+                BallState p = i < n ? rx.get(i).state() : x.result.endState();
+                BallState q = i < n ? ry.get(i).state() : y.result.endState();
+                double dev = Math.max(Math.max(
+                    q.centre().scalarMultiply(1 / lambda).distance(p.centre()) / r,
+                    q.velocity().scalarMultiply(1 / st).distance(p.velocity()) / v),
+                    r * q.spin().scalarMultiply(st).distance(p.spin()) / v);
+                if (!(dev <= worst)) {
+                    worst = dev;
+                    at = p.time();
+                }
+            }
+            double turns = turns(c);
+            return Verdict.measured(name, worst / turns, bound, String.format(Locale.ROOT,
+                "raw worst %.3e at t=%.6g s over %d samples, %.3g characteristic times, end %s", worst, at, n + 1,
+                turns, x.result.endReason().label()));
+        };
+    }
+
+    // ------------------------------------------------------------------ rolling integrals
+
+    /**
+     * On a plane the spin about the normal, {@code ω·n}, is conserved by every law without a
+     * couple about the normal (pure rolling, Coulomb friction in rolling, sliding and impacts,
+     * rolling resistance): every contact force acts at the contact point {@code c − r n}, so its
+     * torque {@code −r n × F} has no normal component, and {@code n} is constant (the first of the
+     * linear integrals of rolling on a plane: A. V. Borisov, I. S. Mamaev, A. A. Kilin, "Rolling of
+     * a ball on a surface. New integrals and hierarchy of dynamics", Regular and Chaotic Dynamics
+     * 7 (2002) 201–219). Worst deviation {@code r |ω·n − ω₀·n| / V} over all samples; not
+     * applicable when the surface's normal is not constant along the run.
+     *
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     */
+    public static Invariant planeNormalSpin(double bound) {
+        Checks.positive("bound", bound);
+        String name = "plane normal spin";
+        return c -> {
+            Simulation sim = c.simulation();
+            Trajectory tr = Trajectory.run(sim, c.start(), c.duration());
+            Vector3D n0 = normalAt(sim, c.start().centre());
+            Vector3D n1 = normalAt(sim, tr.result.endState().centre());
+            if (n0.distance(n1) > 1e-12) {
+                return Verdict.notApplicable(name, "normal not constant: " + n0 + " -> " + n1);
+            }
+            double w0 = c.start().spin().dotProduct(n0);
+            double scale = c.speedScale() / sim.ball().radius();
+            double worst = 0;
+            double at = 0;
+            for (Sample s : tr.samples) {
+                double dev = Math.abs(s.state().spin().dotProduct(n0) - w0) / scale;
+                if (!(dev <= worst)) {
+                    worst = dev;
+                    at = s.time();
+                }
+            }
+            return Verdict.measured(name, worst, bound, String.format(Locale.ROOT, "worst at t=%.6g s", at));
+        };
+    }
+
+    /**
+     * The rolling integrals of a ball rolling on a circular cylinder whose axis is parallel to
+     * gravity (or with zero gravity), on either side: the orbital rate {@code Ω = φ'} about the axis
+     * and {@code ω·e_ρ + σ Ω (z − z₀)/r} are conserved, with {@code e_ρ} the outward radial unit
+     * vector, {@code z} the axial coordinate and {@code σ = n·e_ρ} ({@code −1} inside, {@code +1}
+     * outside). Derivation (no slip, Newton–Euler): the tangential force's azimuthal part
+     * vanishes, so {@code Ω} is constant; {@code d(ω·e_ρ)/dt = Ω ω·e_φ = −σ Ω ż/r}. For the inside
+     * this is the integral {@code ω_r − Ω z/r} of M. Gualtieri, T. Tokieda et al., "Golfer's
+     * dilemma", Am. J. Phys. 74 (2006) 497–501 (cf. the Routh integrals in Borisov, Mamaev, Kilin,
+     * Regular and Chaotic Dynamics 7 (2002) 201). Checked over the initial rolling stretch of the
+     * run; worst deviation: the larger of {@code ρ|Ω − Ω₀|/V} and {@code r|I − I₀|/V}. Not applicable
+     * when gravity is not along the axis or the start is not rolling.
+     *
+     * @param axisPoint a point of the cylinder's axis (m)
+     * @param axis axis direction (any length, not zero)
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     */
+    public static Invariant cylinderIntegrals(Vector3D axisPoint, Vector3D axis, double bound) {
+        Checks.finite("axis point", axisPoint);
+        Vector3D a = Checks.direction("axis", axis);
+        Checks.positive("bound", bound);
+        String name = "cylinder rolling integrals";
+        return c -> {
+            Simulation sim = c.simulation();
+            Vector3D g = sim.gravity();
+            if (Vector3D.crossProduct(g, a).getNorm() > 1e-12 * g.getNorm()) {
+                return Verdict.notApplicable(name, "gravity " + g + " is not along the axis " + a);
+            }
+            if (c.start().phase() != Phase.ROLLING) {
+                return Verdict.notApplicable(name, "start is not rolling");
+            }
+            Trajectory tr = Trajectory.run(sim, c.start(), c.duration());
+            double r = sim.ball().radius();
+            double v = c.speedScale();
+            double z0 = c.start().centre().subtract(axisPoint).dotProduct(a);
+            double omega0 = Double.NaN;
+            double inv0 = Double.NaN;
+            double worst = 0;
+            double at = 0;
+            int used = 0;
+            for (Sample s : tr.samples) {
+                BallState st = s.state();
+                if (st.phase() != Phase.ROLLING) {
+                    break;
+                }
+                Vector3D w = st.centre().subtract(axisPoint);
+                double z = w.dotProduct(a);
+                Vector3D radial = w.subtract(z, a);
+                double rho = radial.getNorm();
+                Vector3D er = radial.scalarMultiply(1 / rho);
+                double sigma = Math.signum(normalAt(sim, st.centre()).dotProduct(er));
+                double omega = Vector3D.crossProduct(er, st.velocity()).dotProduct(a) / rho;
+                double inv = st.spin().dotProduct(er) + sigma * omega * (z - z0) / r;
+                if (used == 0) {
+                    omega0 = omega;
+                    inv0 = inv;
+                }
+                used++;
+                double dev = Math.max(rho * Math.abs(omega - omega0) / v, r * Math.abs(inv - inv0) / v);
+                if (!(dev <= worst)) {
+                    worst = dev;
+                    at = s.time();
+                }
+            }
+            if (used < 3) {
+                return Verdict.notApplicable(name, "rolling lasted only " + used + " samples");
+            }
+            return Verdict.measured(name, worst, bound, String.format(Locale.ROOT,
+                "worst at t=%.6g s over %d rolling samples", at, used));
+        };
+    }
+
+    // ------------------------------------------------------------------ helpers
+
+    /**
+     * Number of characteristic times in a case, {@code max(1, T ‖H‖ V)}: the radians the centre
+     * turns through on the offset surface, from the distance Hessian at the start centre.
+     */
+    static double turns(PropertyCase c) {
+        ContactGeometry g = c.simulation().geometryAt(c.start().centre(), c.start().time());
+        double h = 0;
+        for (double x : g.hessian) {
+            h += x * x;
+        }
+        return Math.max(1.0, c.duration() * Math.sqrt(h) * c.speedScale());
+    }
+
+    private static Simulation sampled(Simulation sim, SolverSettings s) {
+        return sim.withSettings(s);
+    }
+
+    private static Vector3D normalAt(Simulation sim, Vector3D x) {
+        ContactGeometry g = sim.geometryAt(x, 0.0);
+        return new Vector3D(g.normal[0], g.normal[1], g.normal[2]);
+    }
+
+    private static double firstTime(List<RunEvent> events, EventKind kind) {
+        for (RunEvent e : events) {
+            if (e.kind() == kind) {
+                return e.time();
+            }
+        }
+        return Double.POSITIVE_INFINITY;
+    }
+
+    /** Null when both runs ended the same way through the same event kinds; otherwise a description. */
+    private static String compareLogs(Trajectory a, Trajectory b) {
+        if (a.result.endReason() != b.result.endReason()) {
+            return "end reasons differ: " + a.result.endReason().label() + " vs " + b.result.endReason().label()
+                + " (" + a.result.message() + " / " + b.result.message() + ")";
+        }
+        List<RunEvent> ea = a.result.events();
+        List<RunEvent> eb = b.result.events();
+        boolean same = ea.size() == eb.size();
+        for (int i = 0; same && i < ea.size(); i++) {
+            same = ea.get(i).kind() == eb.get(i).kind() && ea.get(i).phaseAfter() == eb.get(i).phaseAfter();
+        }
+        return same ? null : "event logs differ: " + ea + " vs " + eb;
+    }
+}
