@@ -15,9 +15,12 @@ import org.trundle.core.check.LawSampler;
 import org.trundle.core.check.ScalableLaw;
 import org.trundle.core.check.StartSampler;
 import org.trundle.core.check.SurfaceSampler;
+import org.trundle.surfaces.Cone;
 import org.trundle.surfaces.Cylinder;
 import org.trundle.surfaces.Plane;
 import org.trundle.surfaces.Side;
+import org.trundle.surfaces.Sphere;
+import org.trundle.surfaces.Torus;
 
 /**
  * Every surface and contact law of the project, as samplers for the property-testing kit. Adding a
@@ -51,7 +54,31 @@ final class Catalogue {
             StartSampler.near(Vector3D.ZERO, 0.25)),
         new SurfaceEntry("cylinder outside", (rnd, b) -> new Cylinder(Vector3D.ZERO, Draws.unitVector(rnd),
             Interval.log(0.002, 0.05).draw(rnd), Side.OUTSIDE, -0.1, 0.1),
-            StartSampler.near(Vector3D.ZERO, 0.1)));
+            StartSampler.near(Vector3D.ZERO, 0.1)),
+        new SurfaceEntry("sphere inside (bowl)", (rnd, b) -> new Sphere(Vector3D.ZERO,
+            b.radius() * Interval.log(1.5, 20).draw(rnd), Side.INSIDE),
+            StartSampler.near(Vector3D.ZERO, 0.005)),
+        new SurfaceEntry("sphere outside (dome)", (rnd, b) -> new Sphere(Vector3D.ZERO,
+            Interval.log(0.005, 0.1).draw(rnd), Side.OUTSIDE),
+            StartSampler.near(Vector3D.ZERO, 0.1)),
+        new SurfaceEntry("cone inside", (rnd, b) -> {
+            Vector3D a = Draws.unitVector(rnd);
+            // the origin lies on the axis 0.3 m from the apex; the patch keeps 0.1 m clear of the apex
+            return new Cone(a.scalarMultiply(-0.3), a, Math.toRadians(Interval.of(15, 70).draw(rnd)), Side.INSIDE,
+                0.1, 0.6);
+        }, StartSampler.near(Vector3D.ZERO, 0.02)),
+        new SurfaceEntry("torus inside (ring groove)", (rnd, b) -> {
+            Vector3D a = Draws.unitVector(rnd);
+            double minor = b.radius() * Interval.log(1.5, 8).draw(rnd);
+            double major = 4 * minor + 0.05;
+            // the origin lies on the tube's core circle
+            return new Torus(a.orthogonal().scalarMultiply(-major), a, major, minor, Side.INSIDE);
+        }, StartSampler.near(Vector3D.ZERO, 0.0005)));
+
+    // Not in the catalogue yet: SurfaceOfRevolution and SplineTube. Their natural cubic splines are
+    // only C2, so the distance Hessian jumps at the knots; at the default tolerance about a third of
+    // their cases exceed the 1e-8 bounds on the budget and the residuals (worst seen 6e-8). They need
+    // a smoother interpolant (quintic) or knot-aware step control before they can join.
 
     static final List<LawEntry> LAWS = List.of(
         new LawEntry("pure rolling", (rnd, b) -> new PureRolling(rnd.nextDouble()), true, false),
