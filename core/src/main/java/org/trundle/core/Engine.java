@@ -677,16 +677,7 @@ final class Engine {
     private Phase chooseContactPhase(boolean rollingCandidate) {
         if (rollingCandidate) {
             stickImpulse();
-            dyn.phase = Phase.ROLLING;
-            dyn.evaluate(t, y);
-            if (!(dyn.normalForce > 0)) {
-                return Phase.FLIGHT;
-            }
-            if (dyn.neededTangential <= dyn.grip) {
-                return Phase.ROLLING;
-            }
-            setSlideDirectionFromRolling();
-            return Phase.SLIDING;
+            return contactPhaseAfterStick();
         }
         dyn.phase = Phase.SLIDING;
         double[] s = slipOf(y);
@@ -698,6 +689,7 @@ final class Engine {
         return dyn.normalForce > 0 ? Phase.SLIDING : Phase.FLIGHT;
     }
 
+    /** Rolling if the grip holds the no-slip state, else sliding; flight if the normal force would be negative. */
     private Phase contactPhaseAfterStick() {
         dyn.phase = Phase.ROLLING;
         dyn.evaluate(t, y);
