@@ -186,79 +186,79 @@ final class Engine {
         EndReason reason = null;
         String message = "";
         try {
-        while (reason == null) {
-            if (events.size() >= set.maxEvents()) {
-                reason = EndReason.BUDGET;
-                message = "event budget of " + set.maxEvents() + " events exhausted";
-                break;
-            }
-            if (t >= endTime) {
-                reason = EndReason.DURATION;
-                break;
-            }
-            if (dyn.evaluations >= set.maxEvaluations()) {
-                reason = EndReason.BUDGET;
-                message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
-                dyn.budget = Long.MAX_VALUE;
-                break;
-            }
-            if (phase.inContact() && restsNow()) {
-                BallState before = toState(t, y, phase);
-                if (phase == Phase.ROLLING) {
-                    setDerivedVelocity();
+            while (reason == null) {
+                if (events.size() >= set.maxEvents()) {
+                    reason = EndReason.BUDGET;
+                    message = "event budget of " + set.maxEvents() + " events exhausted";
+                    break;
                 }
-                changePhase(Phase.REST);
-                log(EventKind.REST, before, null, Vector3D.ZERO);
-                reason = EndReason.REST;
-                break;
-            }
-            fired = null;
-            geometryStop = null;
-            ODEStateAndDerivative end;
-            try {
-                end = integrateSegment();
-            } catch (Dynamics.BudgetExhausted e) {
-                // lift the budget so that the end-of-run bookkeeping (end state, samples) can evaluate
-                dyn.budget = Long.MAX_VALUE;
-                reason = EndReason.BUDGET;
-                message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
-                dyn.budget = Long.MAX_VALUE;
-                restoreLastGood();
-                break;
-            } catch (SurfaceDomainException e) {
-                reason = EndReason.GEOMETRY;
-                message = e.getMessage();
-                restoreLastGood();
-                break;
-            } catch (Dynamics.NumericalFailure | MathRuntimeException e) {
-                throw new SimulationException("run failed: " + e.getMessage(), lastGoodState(), e);
-            }
-            t = end.getTime();
-            y = end.getPrimaryState();
-            if (geometryStop != null) {
-                reason = EndReason.GEOMETRY;
-                message = geometryStop;
-                break;
-            }
-            if (fired == null) {
-                reason = EndReason.DURATION;
-                break;
-            }
-            try {
-                reason = applySwitch(fired);
-                if (reason == EndReason.GEOMETRY) {
-                    message = geometryMessage;
+                if (t >= endTime) {
+                    reason = EndReason.DURATION;
+                    break;
                 }
-            } catch (Dynamics.BudgetExhausted e) {
-                reason = EndReason.BUDGET;
-                message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
-                dyn.budget = Long.MAX_VALUE;
-            } catch (SurfaceDomainException e) {
-                reason = EndReason.GEOMETRY;
-                message = e.getMessage();
-                restoreLastGood();
+                if (dyn.evaluations >= set.maxEvaluations()) {
+                    reason = EndReason.BUDGET;
+                    message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+                    dyn.budget = Long.MAX_VALUE;
+                    break;
+                }
+                if (phase.inContact() && restsNow()) {
+                    BallState before = toState(t, y, phase);
+                    if (phase == Phase.ROLLING) {
+                        setDerivedVelocity();
+                    }
+                    changePhase(Phase.REST);
+                    log(EventKind.REST, before, null, Vector3D.ZERO);
+                    reason = EndReason.REST;
+                    break;
+                }
+                fired = null;
+                geometryStop = null;
+                ODEStateAndDerivative end;
+                try {
+                    end = integrateSegment();
+                } catch (Dynamics.BudgetExhausted e) {
+                    // lift the budget so that the end-of-run bookkeeping (end state, samples) can evaluate
+                    dyn.budget = Long.MAX_VALUE;
+                    reason = EndReason.BUDGET;
+                    message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+                    dyn.budget = Long.MAX_VALUE;
+                    restoreLastGood();
+                    break;
+                } catch (SurfaceDomainException e) {
+                    reason = EndReason.GEOMETRY;
+                    message = e.getMessage();
+                    restoreLastGood();
+                    break;
+                } catch (Dynamics.NumericalFailure | MathRuntimeException e) {
+                    throw new SimulationException("run failed: " + e.getMessage(), lastGoodState(), e);
+                }
+                t = end.getTime();
+                y = end.getPrimaryState();
+                if (geometryStop != null) {
+                    reason = EndReason.GEOMETRY;
+                    message = geometryStop;
+                    break;
+                }
+                if (fired == null) {
+                    reason = EndReason.DURATION;
+                    break;
+                }
+                try {
+                    reason = applySwitch(fired);
+                    if (reason == EndReason.GEOMETRY) {
+                        message = geometryMessage;
+                    }
+                } catch (Dynamics.BudgetExhausted e) {
+                    reason = EndReason.BUDGET;
+                    message = "evaluation budget of " + set.maxEvaluations() + " right-hand-side evaluations exhausted";
+                    dyn.budget = Long.MAX_VALUE;
+                } catch (SurfaceDomainException e) {
+                    reason = EndReason.GEOMETRY;
+                    message = e.getMessage();
+                    restoreLastGood();
+                }
             }
-        }
         } catch (Dynamics.BudgetExhausted e) {
             // exhausted outside the integrator: in a switch, the rest test or a start-of-segment check
             reason = EndReason.BUDGET;
