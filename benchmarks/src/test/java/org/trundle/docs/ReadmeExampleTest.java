@@ -3,6 +3,8 @@ package org.trundle.docs;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
+
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 import org.trundle.contact.PureRolling;
@@ -12,10 +14,16 @@ import org.trundle.core.EndReason;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
 import org.trundle.core.Surface;
+import org.trundle.core.sweep.Axis;
+import org.trundle.core.sweep.Grid;
+import org.trundle.core.sweep.RunFactory;
+import org.trundle.core.sweep.RunSpec;
+import org.trundle.core.sweep.Sweep;
+import org.trundle.core.sweep.SweepRun;
 import org.trundle.surfaces.Cylinder;
 import org.trundle.surfaces.Side;
 
-/** Keeps the README's Java example compiling and running (copy kept in sync by hand). */
+/** Keeps the README's Java examples (a run, a sweep) compiling and running (copies kept in sync by hand). */
 class ReadmeExampleTest {
     @Test
     void readmeExampleRuns() {
@@ -30,6 +38,18 @@ class ReadmeExampleTest {
         RunResult result = sim.run(start, 3.0);
         result.exit().ifPresent(e -> System.out.println("left through " + e.edge() + " at " + e.time() + " s"));
 
+        Grid grid = Grid.of(Axis.linear("speed", 0.3, 1.5, 13), Axis.linear("angle_deg", -60, 0, 7));
+        RunFactory entries = p -> {
+            double a = Math.toRadians(p.get("angle_deg"));
+            Vector3D v = new Vector3D(0, p.get("speed") * Math.cos(a), p.get("speed") * Math.sin(a));
+            return new RunSpec(sim, sim.rollingStart(new Vector3D(0.011, 0, -0.001), v), 2.0);
+        };
+        List<SweepRun> runs = Sweep.over(grid).threads(2).runAll(entries);
+        long comeBack = runs.stream().filter(r -> r.result().flatMap(RunResult::exit)
+            .map(e -> e.edge().equals("to")).orElse(false)).count();
+
+        assertEquals(91, runs.size());
+        assertTrue(comeBack > 0 && comeBack < 91, "some entries come back out, some do not: " + comeBack);
         assertEquals(EndReason.EXIT, result.endReason());
         assertEquals("to", result.exit().orElseThrow().edge());
         assertTrue(result.exit().orElseThrow().before().centre().getZ() > -1e-9);
