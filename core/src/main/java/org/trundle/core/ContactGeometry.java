@@ -80,6 +80,38 @@ public final class ContactGeometry {
         hessian[8] = hzz;
     }
 
+    /**
+     * Sets the patch margin of a patch bounded on two opposite sides: the smaller of the two
+     * distances (m) and the index of its edge (the lower bound wins a tie).
+     *
+     * @param lo distance from the lower edge (m)
+     * @param loEdge index of the lower edge
+     * @param hi distance from the upper edge (m)
+     * @param hiEdge index of the upper edge
+     */
+    public void setMargin(double lo, int loEdge, double hi, int hiEdge) {
+        if (lo <= hi) {
+            patchMargin = lo;
+            edge = loEdge;
+        } else {
+            patchMargin = hi;
+            edge = hiEdge;
+        }
+    }
+
+    /**
+     * Narrows the patch margin to a further edge when that edge is nearer (strictly).
+     *
+     * @param margin distance from that edge (m)
+     * @param index its index
+     */
+    public void tightenMargin(double margin, int index) {
+        if (margin < patchMargin) {
+            patchMargin = margin;
+            edge = index;
+        }
+    }
+
     /** Forgets the per-run hint (for instance after a jump of the query point). */
     public void resetHint() {
         hintValid = false;

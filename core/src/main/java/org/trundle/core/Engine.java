@@ -77,7 +77,6 @@ final class Engine {
     private Phase lastGoodPhase;
 
     // event-function workspaces (no allocation per call)
-    private final double[] gx = new double[3];
     private final double[] gv = new double[3];
     private final double[] ghv = new double[3];
     private final double[] gw = new double[3];
@@ -394,7 +393,7 @@ final class Engine {
             double wz = ys[Dynamics.W + 2];
             v[3] = Dynamics.norm(dyn.vel) + r * Math.sqrt(wx * wx + wy * wy + wz * wz);
         } else {
-            surface.query(ts, centreInto(ys, gx), dyn.geo);
+            surface.query(ts, centreOf(ys), dyn.geo);
         }
         v[4] = dyn.geo.patchMargin;
         v[5] = dyn.geo.distance;
@@ -872,19 +871,16 @@ final class Engine {
         return 0.5 * m * v2 + 0.5 * inertia * w2;
     }
 
-    private static double[] centreInto(double[] ys, double[] out) {
-        out[0] = ys[Dynamics.C];
-        out[1] = ys[Dynamics.C + 1];
-        out[2] = ys[Dynamics.C + 2];
-        return out;
-    }
 
     /**
      * The centre of a state array, copied into the run's workspace (no allocation). The result is
      * only valid until the next call.
      */
     private double[] centreOf(double[] ys) {
-        return centreInto(ys, centreWork);
+        centreWork[0] = ys[Dynamics.C];
+        centreWork[1] = ys[Dynamics.C + 1];
+        centreWork[2] = ys[Dynamics.C + 2];
+        return centreWork;
     }
 
     private static void put(double[] a, int at, Vector3D v) {

@@ -22,8 +22,7 @@ final class FloorForTests implements Surface {
         out.curvature2 = 0;
         double lo = x[0] + halfWidth;
         double hi = halfWidth - x[0];
-        out.patchMargin = Math.min(lo, hi);
-        out.edge = lo <= hi ? 0 : 1;
+        out.setMargin(lo, 0, hi, 1);
     }
 
     @Override

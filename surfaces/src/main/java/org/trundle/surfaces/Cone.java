@@ -179,13 +179,7 @@ public final class Cone implements Surface {
         }
         double lo = slant - from / cosA;
         double hi = to / cosA - slant;
-        if (lo <= hi) {
-            out.patchMargin = lo;
-            out.edge = EDGE_FROM;
-        } else {
-            out.patchMargin = hi;
-            out.edge = EDGE_TO;
-        }
+        out.setMargin(lo, EDGE_FROM, hi, EDGE_TO);
     }
 
     @Override

@@ -159,13 +159,7 @@ public final class Cylinder implements Surface {
         }
         double lo = s - from;
         double hi = to - s;
-        if (lo <= hi) {
-            out.patchMargin = lo;
-            out.edge = EDGE_FROM;
-        } else {
-            out.patchMargin = hi;
-            out.edge = EDGE_TO;
-        }
+        out.setMargin(lo, EDGE_FROM, hi, EDGE_TO);
     }
 
     @Override

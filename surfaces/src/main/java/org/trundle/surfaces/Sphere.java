@@ -155,13 +155,7 @@ public final class Sphere implements Surface {
         double theta = Math.atan2(Math.sqrt(cx * cx + cy * cy + cz * cz), ex * px + ey * py + ez * pz);
         double lo = polarFrom == 0.0 ? Double.POSITIVE_INFINITY : radius * (theta - polarFrom);
         double hi = polarTo == Math.PI ? Double.POSITIVE_INFINITY : radius * (polarTo - theta);
-        if (lo <= hi) {
-            out.patchMargin = lo;
-            out.edge = EDGE_POLAR_FROM;
-        } else {
-            out.patchMargin = hi;
-            out.edge = EDGE_POLAR_TO;
-        }
+        out.setMargin(lo, EDGE_POLAR_FROM, hi, EDGE_POLAR_TO);
     }
 
     @Override

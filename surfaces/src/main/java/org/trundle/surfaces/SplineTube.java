@@ -444,13 +444,7 @@ public final class SplineTube implements Surface {
         double speed = Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);
         double lo = (u - cx.first()) * speed;
         double hi = (cx.last() - u) * speed;
-        if (lo <= hi) {
-            out.patchMargin = lo;
-            out.edge = EDGE_FROM;
-        } else {
-            out.patchMargin = hi;
-            out.edge = EDGE_TO;
-        }
+        out.setMargin(lo, EDGE_FROM, hi, EDGE_TO);
         if (angular) {
             double[] fn = work.f;
             frame(u, w, fn);
@@ -463,14 +457,8 @@ public final class SplineTube implements Surface {
             double theta = Math.atan2(ex * bx + ey * by + ez * bz, ex * fn[0] + ey * fn[1] + ez * fn[2]);
             double a0 = r * (theta - angleFrom);
             double a1 = r * (angleTo - theta);
-            if (a0 < out.patchMargin) {
-                out.patchMargin = a0;
-                out.edge = EDGE_ANGLE_FROM;
-            }
-            if (a1 < out.patchMargin) {
-                out.patchMargin = a1;
-                out.edge = EDGE_ANGLE_TO;
-            }
+            out.tightenMargin(a0, EDGE_ANGLE_FROM);
+            out.tightenMargin(a1, EDGE_ANGLE_TO);
         }
     }
 

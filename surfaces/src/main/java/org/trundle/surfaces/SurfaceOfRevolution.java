@@ -207,13 +207,7 @@ public final class SurfaceOfRevolution implements Surface {
         out.curvature2 = Math.min(km, kf);
         double lo = z - profile.first();
         double hi = profile.last() - z;
-        if (lo <= hi) {
-            out.patchMargin = lo;
-            out.edge = EDGE_FROM;
-        } else {
-            out.patchMargin = hi;
-            out.edge = EDGE_TO;
-        }
+        out.setMargin(lo, EDGE_FROM, hi, EDGE_TO);
     }
 
     @Override

@@ -229,20 +229,13 @@ public final class Torus implements Surface {
         if (azBounded) {
             double phi = Math.atan2(erx * bx + ery * by + erz * bz, erx * cx + ery * cy + erz * cz);
             double rp = major + minor * cosP;
-            edge(rp * (phi - azFrom), EDGE_AZIMUTH_FROM, out);
-            edge(rp * (azTo - phi), EDGE_AZIMUTH_TO, out);
+            out.tightenMargin(rp * (phi - azFrom), EDGE_AZIMUTH_FROM);
+            out.tightenMargin(rp * (azTo - phi), EDGE_AZIMUTH_TO);
         }
         if (tubeBounded) {
             double psi = Math.atan2(sinP, cosP);
-            edge(minor * (psi - tubeFrom), EDGE_TUBE_FROM, out);
-            edge(minor * (tubeTo - psi), EDGE_TUBE_TO, out);
-        }
-    }
-
-    private static void edge(double margin, int index, ContactGeometry out) {
-        if (margin < out.patchMargin) {
-            out.patchMargin = margin;
-            out.edge = index;
+            out.tightenMargin(minor * (psi - tubeFrom), EDGE_TUBE_FROM);
+            out.tightenMargin(minor * (tubeTo - psi), EDGE_TUBE_TO);
         }
     }
 
