@@ -10,7 +10,6 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.events.Action;
-import org.hipparchus.ode.events.ODEStepEndHandler;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
@@ -70,6 +69,9 @@ final class Engine {
     private double[] c0;
     private double impactLoss;
     private long steps;
+    private long projections;
+    /** Step size (s) the next segment starts with, after a projection restart; 0: Hipparchus' own estimate. */
+    private double restartStep;
     private int sampleIndex;
     private double sampleT0;
     private double[] lastGoodY;
@@ -86,19 +88,28 @@ final class Engine {
 
     // event values of the last few states asked about
     private static final int CACHE = 4;
+    /** Event values per state: see {@link #evaluateEventValues}. */
+    private static final int VALUES = 12;
     private final double[][] cacheY = new double[CACHE][Dynamics.DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
-    private final double[][] cacheValues = new double[CACHE][11];
+    private final double[][] cacheValues = new double[CACHE][VALUES];
+    /** Rates (per second) of the lift-off and slip functions at the cached states, NaN until asked for. */
+    private final double[][] cacheRates = new double[CACHE][2];
+    private final double[] probeY = new double[Dynamics.DIM];
+    private final double[] probeValues = new double[VALUES];
+    /** Per watched trigger (lift-off, slip): time and rate at its last check, for the curvature estimate. */
+    private final double[] checkTime = new double[2];
+    private final double[] checkRate = new double[2];
+    private final double[] checkCurvature = new double[2];
     private int cacheNext;
     private double cachedHessianNorm;
     private double[] lastValues;
+    private int lastSlot;
 
     // set by handlers during a segment
     private Trigger fired;
     private String geometryMessage;
-    private String geometryStop;
-    private double[] pendingReset;
 
     Engine(Simulation sim, RunObserver observer) {
         this.sim = sim;
@@ -212,10 +223,13 @@ final class Engine {
                     break;
                 }
                 fired = null;
-                geometryStop = null;
                 ODEStateAndDerivative end;
                 try {
                     end = integrateSegment();
+                } catch (ProjectionRestart e) {
+                    t = lastGoodT;
+                    y = projected(t, lastGoodY);
+                    continue;
                 } catch (Dynamics.BudgetExhausted e) {
                     // lift the budget so that the end-of-run bookkeeping (end state, samples) can evaluate
                     dyn.budget = Long.MAX_VALUE;
@@ -234,11 +248,6 @@ final class Engine {
                 }
                 t = end.getTime();
                 y = end.getPrimaryState();
-                if (geometryStop != null) {
-                    reason = EndReason.GEOMETRY;
-                    message = geometryStop;
-                    break;
-                }
                 if (fired == null) {
                     reason = EndReason.DURATION;
                     break;
@@ -301,9 +310,22 @@ final class Engine {
         dyn.phase = phase;
         DormandPrince853Integrator integ = new DormandPrince853Integrator(0.0, endTime - t + 1e-300,
             absTol, relTol);
+        if (restartStep > 0) {
+            integ.setInitialStepSize(restartStep);
+            restartStep = 0;
+        }
         integ.addStepHandler(new StepObserver());
+        for (int i = 0; i < 2; i++) {
+            checkTime[i] = Double.NaN;
+            checkCurvature[i] = 0;
+        }
         if (phase.inContact()) {
-            integ.addStepEndHandler(new Projection());
+            // the drift detector watches for its function falling through zero: a segment must
+            // start below the thresholds, or it would never fire
+            surface.query(t, centreOf(y), dyn.geo);
+            if (drift(y, dyn.geo.distance, dyn.geo.normal) >= 0.5) {
+                y = projected(t, y);
+            }
             integ.addEventDetector(new SwitchDetector(this, Trigger.LIFT_OFF, set));
             integ.addEventDetector(new SwitchDetector(this, Trigger.REST, set));
             if (Double.isNaN(surface.maxConcaveCurvature())) {
@@ -351,11 +373,16 @@ final class Engine {
         if (slot < 0) {
             slot = cacheNext;
             cacheNext = (cacheNext + 1) % CACHE;
-            evaluateEventValues(ts, ys, slot);
+            evaluateEventValues(ts, ys, cacheValues[slot]);
+            System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
+            cacheTime[slot] = ts;
+            cachePhase[slot] = phase;
+            cacheRates[slot][0] = Double.NaN;
         }
         double[] v = cacheValues[slot];
         cachedHessianNorm = v[6];
         lastValues = v;
+        lastSlot = slot;
         switch (trig) {
             case LIFT_OFF:
                 return v[0];
@@ -376,12 +403,16 @@ final class Engine {
     }
 
     /**
-     * Evaluates every event function of the current phase at once, into one slot of a small cache:
-     * Hipparchus asks each detector in turn about the same few states of a step (its check points
-     * and end), so one evaluation per state serves all detectors.
+     * Evaluates every event function of the current phase at once into {@code v}: Hipparchus asks
+     * each detector in turn about the same few states of a step (its check points and end), so one
+     * evaluation per state, kept in a small cache by {@link #g}, serves all detectors. Layout:
+     * 0 normal force, 1 grip minus needed tangential force, 2 slip speed, 3 speed measure
+     * {@code |v| + r|ω|}, 4 patch margin, 5 centre distance, 6 Hessian norm, 7 {@code 1 − r κ₁},
+     * 8–10 normal, 11 constraint drift (the largest of distance residual / (threshold · r),
+     * rolling slip / (threshold · speed scale) and quaternion-norm drift / its threshold; contact
+     * phases only, 0 in flight).
      */
-    private void evaluateEventValues(double ts, double[] ys, int slot) {
-        double[] v = cacheValues[slot];
+    private void evaluateEventValues(double ts, double[] ys, double[] v) {
         dyn.phase = phase;
         if (phase.inContact()) {
             dyn.evaluate(ts, ys);
@@ -403,12 +434,88 @@ final class Engine {
         }
         v[6] = Math.sqrt(hn);
         v[7] = 1.0 - r * dyn.geo.curvature1;
-        v[8] = dyn.geo.normal[0];
-        v[9] = dyn.geo.normal[1];
-        v[10] = dyn.geo.normal[2];
-        System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
-        cacheTime[slot] = ts;
-        cachePhase[slot] = phase;
+        double[] n = dyn.geo.normal;
+        v[8] = n[0];
+        v[9] = n[1];
+        v[10] = n[2];
+        v[11] = phase.inContact() ? drift(ys, v[5], n) : 0.0;
+    }
+
+    /** Rolling slip residual {@code |v − r ω × n|} of a state (m/s) for the normal (nx, ny, nz). */
+    private double rollingSlip(double[] ys, double nx, double ny, double nz) {
+        double wx = ys[Dynamics.W];
+        double wy = ys[Dynamics.W + 1];
+        double wz = ys[Dynamics.W + 2];
+        double ex = ys[Dynamics.V] - r * (wy * nz - wz * ny);
+        double ey = ys[Dynamics.V + 1] - r * (wz * nx - wx * nz);
+        double ez = ys[Dynamics.V + 2] - r * (wx * ny - wy * nx);
+        return Math.sqrt(ex * ex + ey * ey + ez * ez);
+    }
+
+    /** Constraint drift of a contact state relative to the projection thresholds (see {@link #evaluateEventValues}). */
+    private double drift(double[] ys, double distance, double[] n) {
+        double d = Math.abs(distance - r) / (set.projectionThreshold() * r);
+        if (phase == Phase.ROLLING) {
+            d = Math.max(d, rollingSlip(ys, n[0], n[1], n[2]) / (set.projectionThreshold() * speedScale));
+        }
+        double qn = Math.sqrt(ys[Dynamics.Q] * ys[Dynamics.Q] + ys[Dynamics.Q + 1] * ys[Dynamics.Q + 1]
+            + ys[Dynamics.Q + 2] * ys[Dynamics.Q + 2] + ys[Dynamics.Q + 3] * ys[Dynamics.Q + 3]);
+        return Math.max(d, Math.abs(qn - 1) / QUATERNION_DRIFT);
+    }
+
+    /**
+     * Check interval of the lift-off and slip detectors (s). Their functions {@code f} (normal
+     * force; grip minus needed tangential force) have no cheap analytic bound on their rate, so the
+     * rate is measured along the flow: {@code ḟ ≈ (f(t + h, y + h ẏ) − f(t, y))/h} with
+     * {@code h = 1e-6 r/U} (one extra evaluation; truncation error {@code O(h f̈)}, relative
+     * {@code ~1e-6}), and the curvature {@code |f̈|} is estimated from the change of {@code ḟ}
+     * since this detector's previous check. The pessimistic model
+     * {@code f + ḟ τ − ½|f̈| τ² = 0} gives the earliest time {@code τ₀} the function could reach
+     * zero; the next check is at {@code τ₀/2}, and never sooner than the configured interval
+     * (so the detectors are never checked less often than with a fixed interval near a root).
+     * Common practice for event location (check spacing from a local model of the event function,
+     * as the exit, rest and stick detectors do with their bounds).
+     */
+    double flowCheckInterval(Trigger trig, ODEStateAndDerivative s) {
+        int w = trig == Trigger.LIFT_OFF ? 0 : 1;
+        double f = g(trig, s);
+        if (!(f > 0)) {
+            return set.maxCheckInterval();
+        }
+        int slot = lastSlot;
+        if (Double.isNaN(cacheRates[slot][0])) {
+            double[] ys = s.getPrimaryState();
+            double[] yd = s.getPrimaryDerivative();
+            double h = 1e-6 * r / speedScale;
+            for (int i = 0; i < ys.length; i++) {
+                probeY[i] = ys[i] + h * yd[i];
+            }
+            evaluateEventValues(s.getTime() + h, probeY, probeValues);
+            double[] v = cacheValues[slot];
+            cacheRates[slot][0] = (probeValues[0] - v[0]) / h;
+            cacheRates[slot][1] = (probeValues[1] - v[1]) / h;
+        }
+        double rate = cacheRates[slot][w];
+        double ts = s.getTime();
+        double dt = ts - checkTime[w];
+        if (dt > 0) {
+            checkCurvature[w] = Math.abs(rate - checkRate[w]) / dt;
+        }
+        if (!(dt == 0)) {
+            checkTime[w] = ts;
+            checkRate[w] = rate;
+        }
+        double curv = checkCurvature[w];
+        double tau;
+        if (curv > 0) {
+            tau = (rate + Math.sqrt(rate * rate + 2 * curv * f)) / curv;
+        } else {
+            tau = rate < 0 ? f / -rate : Double.POSITIVE_INFINITY;
+        }
+        if (!Double.isFinite(tau)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return Math.max(set.maxCheckInterval(), 0.5 * tau);
     }
 
     /**
@@ -952,7 +1059,17 @@ final class Engine {
         observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent));
     }
 
-    /** Step observer: samples, last good state, scales. */
+    /** Leaves a segment's integration to project its last accepted state (see {@link StepObserver}). */
+    private static final class ProjectionRestart extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        static final ProjectionRestart INSTANCE = new ProjectionRestart();
+
+        private ProjectionRestart() {
+            super("projection restart", null, false, false);
+        }
+    }
+
+    /** Step observer: samples, last good state, scales; projection restarts. */
     private final class StepObserver implements ODEStepHandler {
         @Override
         public void handleStep(ODEStateInterpolator interpolator) {
@@ -998,78 +1115,70 @@ final class Engine {
             lastGoodY = yc;
             lastGoodT = tc;
             lastGoodPhase = phase;
+            if (phase.inContact()) {
+                trackResiduals(cur);
+                // a whole step (no event cut it short) whose end drifted past the thresholds: leave
+                // the integrator and start afresh from the projected state, with the step size
+                // reached (cheaper than a step-end handler, which interpolates every step)
+                if (!interpolator.isCurrentStateInterpolated() && lastValues[11] >= 1 && tc < endTime) {
+                    restartStep = tc - interpolator.getPreviousState().getTime();
+                    throw ProjectionRestart.INSTANCE;
+                }
+            }
         }
     }
 
-    /** Step-end handler in contact: residuals, fit check and projection back onto d = r. */
-    private final class Projection implements ODEStepEndHandler {
-        @Override
-        public Action stepEndOccurred(ODEStateAndDerivative state, boolean forward) {
-            double[] ys = state.getPrimaryState();
-            double ts = state.getTime();
-            // the detectors have already evaluated this state: read their cached values
-            g(Trigger.LIFT_OFF, state);
-            double[] ev = lastValues;
-            maxNormalForce = Math.max(maxNormalForce, ev[0]);
-            double res = Math.abs(ev[5] - r);
-            maxDistanceError = Math.max(maxDistanceError, res);
-            double slipRes = 0;
-            if (phase == Phase.ROLLING) {
-                // v - r w x n
-                double wx = ys[Dynamics.W];
-                double wy = ys[Dynamics.W + 1];
-                double wz = ys[Dynamics.W + 2];
-                double ex = ys[Dynamics.V] - r * (wy * ev[10] - wz * ev[9]);
-                double ey = ys[Dynamics.V + 1] - r * (wz * ev[8] - wx * ev[10]);
-                double ez = ys[Dynamics.V + 2] - r * (wx * ev[9] - wy * ev[8]);
-                slipRes = Math.sqrt(ex * ex + ey * ey + ez * ez);
-                maxRollingSlip = Math.max(maxRollingSlip, slipRes);
-            }
-            if (ev[7] <= 0) {
-                geometryStop = String.format(Locale.ROOT,
-                    "ball of radius %s m no longer fits surface %s at the contact point: r*kappa = %s >= 1",
-                    r, surface.name(), 1 - ev[7]);
-                return Action.STOP;
-            }
-            ContactGeometry geo = dyn.geo;
-            double qn = Math.sqrt(ys[Dynamics.Q] * ys[Dynamics.Q] + ys[Dynamics.Q + 1] * ys[Dynamics.Q + 1]
-                + ys[Dynamics.Q + 2] * ys[Dynamics.Q + 2] + ys[Dynamics.Q + 3] * ys[Dynamics.Q + 3]);
-            if (res > set.projectionThreshold() * r || slipRes > set.projectionThreshold() * speedScale
-                || Math.abs(qn - 1) > QUATERNION_DRIFT) {
-                double[] p = ys.clone();
-                double dr = r - ev[5];
-                for (int i = 0; i < 3; i++) {
-                    p[Dynamics.C + i] += dr * ev[8 + i];
-                }
-                for (int i = 0; i < 4; i++) {
-                    p[Dynamics.Q + i] /= qn;
-                }
-                surface.query(ts, centreOf(p), geo);
-                double[] n = geo.normal;
-                if (phase == Phase.ROLLING) {
-                    double[] w = {p[Dynamics.W], p[Dynamics.W + 1], p[Dynamics.W + 2]};
-                    double[] v = new double[3];
-                    Dynamics.cross(w, n, v);
-                    for (int i = 0; i < 3; i++) {
-                        p[Dynamics.V + i] = r * v[i];
-                    }
-                } else {
-                    double vn = p[Dynamics.V] * n[0] + p[Dynamics.V + 1] * n[1] + p[Dynamics.V + 2] * n[2];
-                    for (int i = 0; i < 3; i++) {
-                        p[Dynamics.V + i] -= vn * n[i];
-                    }
-                }
-                pendingReset = p;
-                return Action.RESET_STATE;
-            }
-            return Action.CONTINUE;
+    /**
+     * Residuals at an accepted step end in contact (read from the detectors' cached values of that
+     * state): largest normal force, distance residual {@code |d − r|} and, rolling, slip
+     * {@code |v − r ω × n|}.
+     */
+    private void trackResiduals(ODEStateAndDerivative state) {
+        double[] ys = state.getPrimaryState();
+        g(Trigger.LIFT_OFF, state);
+        double[] ev = lastValues;
+        maxNormalForce = Math.max(maxNormalForce, ev[0]);
+        maxDistanceError = Math.max(maxDistanceError, Math.abs(ev[5] - r));
+        if (phase == Phase.ROLLING) {
+            maxRollingSlip = Math.max(maxRollingSlip, rollingSlip(ys, ev[8], ev[9], ev[10]));
         }
+    }
 
-        @Override
-        public ODEState resetState(ODEStateAndDerivative state) {
-            double[] p = pendingReset;
-            pendingReset = null;
-            return new ODEState(state.getTime(), p);
+    /**
+     * The projection of a contact state back onto the constraints, applied at an accepted step end
+     * where the drift measure of {@link #evaluateEventValues} has reached 1: the centre moves along
+     * the normal to {@code d = r}, the quaternion is normalised, and the velocity is set to the
+     * no-slip {@code r ω × n} (rolling) or stripped of its normal part (sliding).
+     */
+    private double[] projected(double ts, double[] ys) {
+        surface.query(ts, centreOf(ys), dyn.geo);
+        double[] p = ys.clone();
+        double dr = r - dyn.geo.distance;
+        for (int i = 0; i < 3; i++) {
+            p[Dynamics.C + i] += dr * dyn.geo.normal[i];
         }
+        double qn = Math.sqrt(p[Dynamics.Q] * p[Dynamics.Q] + p[Dynamics.Q + 1] * p[Dynamics.Q + 1]
+            + p[Dynamics.Q + 2] * p[Dynamics.Q + 2] + p[Dynamics.Q + 3] * p[Dynamics.Q + 3]);
+        for (int i = 0; i < 4; i++) {
+            p[Dynamics.Q + i] /= qn;
+        }
+        ContactGeometry geo = dyn.geo;
+        surface.query(ts, centreOf(p), geo);
+        double[] n = geo.normal;
+        if (phase == Phase.ROLLING) {
+            double[] w = {p[Dynamics.W], p[Dynamics.W + 1], p[Dynamics.W + 2]};
+            double[] v = new double[3];
+            Dynamics.cross(w, n, v);
+            for (int i = 0; i < 3; i++) {
+                p[Dynamics.V + i] = r * v[i];
+            }
+        } else {
+            double vn = p[Dynamics.V] * n[0] + p[Dynamics.V + 1] * n[1] + p[Dynamics.V + 2] * n[2];
+            for (int i = 0; i < 3; i++) {
+                p[Dynamics.V + i] -= vn * n[i];
+            }
+        }
+        projections++;
+        return p;
     }
 }

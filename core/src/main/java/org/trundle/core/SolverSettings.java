@@ -9,9 +9,12 @@ package org.trundle.core;
  *   <li>{@code tolerance} (default 1e-10): relative tolerance of the Dormand–Prince 8(5,3)
  *       integrator; absolute tolerances are this times the problem's scales (ball radius for
  *       lengths, {@code V} for velocities, {@code V/r} for spins, the energy scale for energies).</li>
- *   <li>{@code maxCheckInterval} (s, default 1e-3): largest time between two evaluations of the
- *       event functions; an event whose function changes sign twice within it may be missed, so it
- *       must be below the shortest phase of interest.</li>
+ *   <li>{@code maxCheckInterval} (s, default 1e-3): time between two evaluations of an event
+ *       function near its root; an event whose function changes sign twice within it may be
+ *       missed, so it must be below the shortest phase of interest. Far from a root the detectors
+ *       check less often, at half the earliest time a local model of their function (a bound on
+ *       its rate, or its measured rate and curvature) allows it to reach zero, and at least at
+ *       every step end.</li>
  *   <li>{@code eventTimeTolerance} (s, default 1e-12): convergence of event times.</li>
  *   <li>{@code sampleInterval} (s, default 0): interval of output samples; 0 means one per accepted
  *       step.</li>

@@ -25,6 +25,8 @@ final class SwitchDetector extends AbstractODEDetector<SwitchDetector> {
                 ? (state, forward) -> engine.exitCheckInterval(state)
                 : trigger == Trigger.REST
                 ? (state, forward) -> engine.restCheckInterval(state)
+                : trigger == Trigger.LIFT_OFF || trigger == Trigger.SLIP
+                ? (state, forward) -> engine.flowCheckInterval(trigger, state)
                 : AdaptableInterval.of(set.maxCheckInterval()), 100,
             new BracketingNthOrderBrentSolver(0.0, set.eventTimeTolerance(), 0.0, 5), null);
     }
