@@ -155,8 +155,8 @@ final class RunOutputs {
                     + " budget residual %.1e of scale", r.energy().initial(), r.energy().fin(),
                 r.energy().slidingFrictionLoss(), r.energy().impactLoss(), r.energy().relativeResidual()));
             out.println(String.format(Locale.ROOT,
-                "Checks:   largest normal force %.4g N, largest distance error %.2e m, largest rolling slip %.2e m/s",
-                r.maxNormalForce(), r.maxDistanceError(), r.maxRollingSlip()));
+                "Checks:   largest normal force %.4g N, largest distance error %.2e m",
+                r.maxNormalForce(), r.maxDistanceError()));
         }
         out.println("Files:    " + String.join(", ", List.of(dir.resolve("summary.json").toString(),
             dir.resolve("trajectory.csv").toString(), dir.resolve("run.png").toString())));

@@ -23,7 +23,7 @@ import org.trundle.core.RunResult;
  * {@code edge} crossed); {@code energy} (J: {@code initial}, {@code final}, {@code friction_loss},
  * {@code rolling_resistance_loss}, {@code pivoting_resistance_loss}, {@code impact_loss},
  * {@code other_loss}, {@code applied_work}, {@code residual}, {@code relative_residual});
- * {@code max_distance_error} (m), {@code max_rolling_slip} (m/s), {@code max_normal_force} (N);
+ * {@code max_distance_error} (m), {@code max_normal_force} (N);
  * {@code phases} (each {@code phase}, {@code start}, {@code end}, {@code duration} s and
  * {@code centre_path} m, the path length of the centre in that phase); {@code evaluations},
  * {@code steps}.
@@ -69,7 +69,6 @@ final class SummaryJson {
         en.put("residual", e.residual());
         en.put("relative_residual", e.relativeResidual());
         o.put("max_distance_error", r.maxDistanceError());
-        o.put("max_rolling_slip", r.maxRollingSlip());
         o.put("max_normal_force", r.maxNormalForce());
         ArrayNode ph = o.putArray("phases");
         for (PhaseSpan p : r.phases()) {
@@ -105,7 +104,6 @@ final class SummaryJson {
         o.set("events", events(events));
         o.putNull("energy");
         o.putNull("max_distance_error");
-        o.putNull("max_rolling_slip");
         o.putNull("max_normal_force");
         o.putArray("phases");
         return o;

@@ -29,7 +29,8 @@ import org.trundle.surfaces.Side;
  * <p>Pure rolling does no work (the contact point is at rest), so mechanical energy is conserved
  * (common practice; any text on non-holonomic rolling); the budget must close (to 1e-8 of
  * {@code E_scale}) whatever happens, and with no impacts the energy itself stays constant. The
- * distance residual must stay below 1e-9 r and the slip residual below 1e-9 of the speed scale.
+ * distance residual must stay below 1e-9 r (the slip is zero by construction: the rolling velocity
+ * is derived, {@code v = r ω × n}).
  * Each case's display name holds the seed and index, so a failure reproduces.
  */
 class RollingPropertiesTest {
@@ -101,7 +102,5 @@ class RollingPropertiesTest {
             assertTrue(drift < 1e-8, "energy drift " + drift);
         }
         assertTrue(res.maxDistanceError() < 1e-9 * r, "distance residual " + res.maxDistanceError() / r + " r");
-        double speedScale = Math.max(start.velocity().getNorm(), r * start.spin().getNorm());
-        assertTrue(res.maxRollingSlip() < 1e-9 * speedScale, "slip residual " + res.maxRollingSlip());
     }
 }

@@ -92,6 +92,6 @@ class VerticalTubeTest {
         assertTrue(res.maxDistanceError() < 1e-9 * r, "distance residual " + res.maxDistanceError());
         assertTrue(res.energy().relativeResidual() < 1e-8, "energy " + res.energy());
         System.out.println("evals=" + res.evaluations() + " steps=" + res.steps() + " z=" + worstZ
-            + " E=" + res.energy().relativeResidual() + " d=" + res.maxDistanceError() / r + " slip=" + res.maxRollingSlip());
+            + " E=" + res.energy().relativeResidual() + " d=" + res.maxDistanceError() / r);
     }
 }

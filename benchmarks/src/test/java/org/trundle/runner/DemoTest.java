@@ -79,7 +79,7 @@ class DemoTest {
         }
         assertEquals(direct.energy().initial(), summary.get("energy").get("initial").asDouble(), 0.0);
         for (String key : List.of("end_reason", "end_time", "end_state", "events", "energy", "max_distance_error",
-            "max_rolling_slip", "max_normal_force", "phases")) {
+            "max_normal_force", "phases")) {
             assertTrue(summary.has(key), "summary.json has " + key);
         }
         for (String key : List.of("position", "velocity", "spin")) {

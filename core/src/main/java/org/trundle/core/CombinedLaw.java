@@ -22,6 +22,11 @@ final class CombinedLaw implements ContactLaw {
         this.restitution = ea.isPresent() ? ea : eb;
     }
 
+    /** Whether either part overrides {@link ContactLaw#addCouples} (see {@link Dynamics#addsCouples}). */
+    boolean partsAddCouples() {
+        return Dynamics.addsCouples(a) || Dynamics.addsCouples(b);
+    }
+
     @Override
     public double gripLimit(ContactContext c) {
         return Math.min(a.gripLimit(c), b.gripLimit(c));

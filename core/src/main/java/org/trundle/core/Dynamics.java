@@ -77,6 +77,15 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     private final double[] tau = new double[3];
     private final double[] scratchDot = new double[DIM];
 
+    /** Integrated layout of the current segment: compact index to full index (identity by default). */
+    private int[] map = IDENTITY;
+    private boolean derived;
+    /** Full state of the segment start: the values of the components left out of the layout. */
+    private final double[] segmentStart = new double[DIM];
+    private final double[] full = new double[DIM];
+    private final double[] fullDot = new double[DIM];
+    private static final int[] IDENTITY = java.util.stream.IntStream.range(0, DIM).toArray();
+
     Dynamics(Ball ball, Surface surface, ContactLaw law, double[] gravity, AppliedLoad load) {
         this.ball = ball;
         this.r = ball.radius();
@@ -92,14 +101,111 @@ final class Dynamics implements OrdinaryDifferentialEquation {
 
     @Override
     public int getDimension() {
-        return DIM;
+        return map.length;
     }
 
     @Override
     public double[] computeDerivatives(double t, double[] y) {
-        double[] yDot = new double[DIM];
-        evaluate(t, y, yDot);
+        double[] yDot = new double[map.length];
+        if (map == IDENTITY) {
+            evaluate(t, y, yDot);
+            return yDot;
+        }
+        expand(y, full);
+        evaluate(t, full, fullDot);
+        for (int i = 0; i < map.length; i++) {
+            yDot[i] = fullDot[map[i]];
+        }
         return yDot;
+    }
+
+    /**
+     * The components integrated in a phase (full indices, in compact order): centre, velocity
+     * (not while rolling), quaternion, spin, then the sliding loss (sliding), the couple losses
+     * (contact phases, when the law has couples), the applied work (when there is a load) and the
+     * path length.
+     */
+    static int[] layout(Phase phase, boolean couples, boolean loaded) {
+        int[] out = new int[DIM];
+        int n = 0;
+        for (int i = C; i < LOSS; i++) {
+            if (phase != Phase.ROLLING || i < V || i >= Q) {
+                out[n++] = i;
+            }
+        }
+        if (phase == Phase.SLIDING) {
+            out[n++] = LOSS + LossKind.SLIDING_FRICTION.ordinal();
+        }
+        if (phase.inContact() && couples) {
+            out[n++] = LOSS + LossKind.ROLLING_RESISTANCE.ordinal();
+            out[n++] = LOSS + LossKind.PIVOTING_RESISTANCE.ordinal();
+            out[n++] = LOSS + LossKind.OTHER.ordinal();
+        }
+        if (loaded) {
+            out[n++] = APPLIED;
+        }
+        out[n++] = PATH;
+        return n == DIM ? IDENTITY : java.util.Arrays.copyOf(out, n);
+    }
+
+    /**
+     * Sets the integrated layout of a segment starting at the full state {@code start}.
+     *
+     * @return the compact start state
+     */
+    double[] beginSegment(int[] layout, double[] start) {
+        map = layout;
+        derived = layout.length < 4 || layout[V] != V;
+        System.arraycopy(start, 0, segmentStart, 0, DIM);
+        return compress(start);
+    }
+
+    /** The compact form of a full state in the current layout (a new array). */
+    double[] compress(double[] fullState) {
+        double[] out = new double[map.length];
+        for (int i = 0; i < map.length; i++) {
+            out[i] = fullState[map[i]];
+        }
+        return out;
+    }
+
+    /** Writes the full form of a compact state into {@code out}; left-out components keep their segment-start values. */
+    double[] expand(double[] compact, double[] out) {
+        if (map == IDENTITY) {
+            System.arraycopy(compact, 0, out, 0, DIM);
+            return out;
+        }
+        System.arraycopy(segmentStart, 0, out, 0, DIM);
+        for (int i = 0; i < map.length; i++) {
+            out[map[i]] = compact[i];
+        }
+        return out;
+    }
+
+    /** Whether the current layout leaves the velocity out (rolling: derived from the spin). */
+    boolean derivedVelocity() {
+        return derived;
+    }
+
+    /** The full derivative written by the last {@link #evaluate(double, double[])}. */
+    double[] lastDerivative() {
+        return scratchDot;
+    }
+
+    /**
+     * Whether a law can add contact couples: it (or, for a combination, one of its parts)
+     * overrides {@link ContactLaw#addCouples}, whose default adds none.
+     */
+    static boolean addsCouples(ContactLaw law) {
+        if (law instanceof CombinedLaw) {
+            return ((CombinedLaw) law).partsAddCouples();
+        }
+        try {
+            return law.getClass().getMethod("addCouples", ContactContext.class).getDeclaringClass()
+                != ContactLaw.class;
+        } catch (NoSuchMethodException e) {
+            return true;
+        }
     }
 
     /** Evaluates the phase's forces without keeping derivatives (event functions, samples). */

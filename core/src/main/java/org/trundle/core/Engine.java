@@ -49,6 +49,9 @@ final class Engine {
     private double restSpeed;
     private double restitution;
     private double[] absTol;
+    /** Integrated layout per phase (see {@link Dynamics#layout}), built on first use. */
+    private final int[][] layouts = new int[Phase.values().length][];
+    private final boolean lawCouples;
     private double[] relTol;
 
     private double t;
@@ -62,7 +65,6 @@ final class Engine {
     private double spanPath;
 
     private double maxDistanceError;
-    private double maxRollingSlip;
     private double maxNormalForce;
     private double maxKinetic;
     private double extent;
@@ -89,10 +91,13 @@ final class Engine {
     // event values of the last few states asked about
     private static final int CACHE = 4;
     /** Event values per state: see {@link #evaluateEventValues}. */
-    private static final int VALUES = 12;
+    private static final int VALUES = 13;
     private final double[][] cacheY = new double[CACHE][Dynamics.DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
+    private final int[] cacheLength = new int[CACHE];
+    /** Full-layout workspace of the event functions (the integrator's states are compact). */
+    private final double[] eventFull = new double[Dynamics.DIM];
     private final double[][] cacheValues = new double[CACHE][VALUES];
     /** Rates (per second) of the lift-off and slip functions at the cached states, NaN until asked for. */
     private final double[][] cacheRates = new double[CACHE][2];
@@ -125,6 +130,7 @@ final class Engine {
         this.g = sim.gravity().toArray();
         this.dyn = new Dynamics(b, surface, law, g, sim.load());
         this.restitution = law.restitution().orElse(0.0);
+        this.lawCouples = Dynamics.addsCouples(law);
     }
 
     RunResult run(BallState start, double duration) {
@@ -247,7 +253,7 @@ final class Engine {
                     throw new SimulationException("run failed: " + e.getMessage(), lastGoodState(), e);
                 }
                 t = end.getTime();
-                y = end.getPrimaryState();
+                y = fullState(end);
                 if (fired == null) {
                     reason = EndReason.DURATION;
                     break;
@@ -290,7 +296,7 @@ final class Engine {
             y[Dynamics.LOSS + LossKind.OTHER.ordinal()],
             impactLoss, y[Dynamics.APPLIED], scale);
         RunResult result = new RunResult(reason, message, endState, events, spans, budget,
-            maxDistanceError, maxRollingSlip, maxNormalForce, dyn.evaluations, steps);
+            maxDistanceError, maxNormalForce, dyn.evaluations, steps);
         observer.finish(result);
         return result;
     }
@@ -308,8 +314,18 @@ final class Engine {
 
     private ODEStateAndDerivative integrateSegment() {
         dyn.phase = phase;
-        DormandPrince853Integrator integ = new DormandPrince853Integrator(0.0, endTime - t + 1e-300,
-            absTol, relTol);
+        int[] layout = layouts[phase.ordinal()];
+        if (layout == null) {
+            layout = Dynamics.layout(phase, lawCouples, sim.load() != AppliedLoad.NONE);
+            layouts[phase.ordinal()] = layout;
+        }
+        double[] abs = new double[layout.length];
+        double[] rel = new double[layout.length];
+        for (int i = 0; i < layout.length; i++) {
+            abs[i] = absTol[layout[i]];
+            rel[i] = relTol[layout[i]];
+        }
+        DormandPrince853Integrator integ = new DormandPrince853Integrator(0.0, endTime - t + 1e-300, abs, rel);
         if (restartStep > 0) {
             integ.setInitialStepSize(restartStep);
             restartStep = 0;
@@ -323,7 +339,7 @@ final class Engine {
             // the drift detector watches for its function falling through zero: a segment must
             // start below the thresholds, or it would never fire
             surface.query(t, centreOf(y), dyn.geo);
-            if (drift(y, dyn.geo.distance, dyn.geo.normal) >= 0.5) {
+            if (drift(y, dyn.geo.distance) >= 0.5) {
                 y = projected(t, y);
             }
             integ.addEventDetector(new SwitchDetector(this, Trigger.LIFT_OFF, set));
@@ -347,7 +363,7 @@ final class Engine {
             dyn.geo.resetHint();
             integ.addEventDetector(new SwitchDetector(this, Trigger.IMPACT, set));
         }
-        return integ.integrate(dyn, new ODEState(t, y.clone()), endTime);
+        return integ.integrate(dyn, new ODEState(t, dyn.beginSegment(layout, y)), endTime);
     }
 
     /** Whether the ball, at the start of a contact segment, is already slow enough and held at rest. */
@@ -363,9 +379,11 @@ final class Engine {
     double g(Trigger trig, ODEStateAndDerivative s) {
         double[] ys = s.getPrimaryState();
         double ts = s.getTime();
+        int len = ys.length;
         int slot = -1;
         for (int i = 0; i < CACHE; i++) {
-            if (cachePhase[i] == phase && cacheTime[i] == ts && java.util.Arrays.equals(ys, cacheY[i])) {
+            if (cachePhase[i] == phase && cacheTime[i] == ts && cacheLength[i] == len
+                && java.util.Arrays.equals(ys, 0, len, cacheY[i], 0, len)) {
                 slot = i;
                 break;
             }
@@ -373,8 +391,9 @@ final class Engine {
         if (slot < 0) {
             slot = cacheNext;
             cacheNext = (cacheNext + 1) % CACHE;
-            evaluateEventValues(ts, ys, cacheValues[slot]);
-            System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
+            evaluateEventValues(ts, dyn.expand(ys, eventFull), cacheValues[slot]);
+            System.arraycopy(ys, 0, cacheY[slot], 0, len);
+            cacheLength[slot] = len;
             cacheTime[slot] = ts;
             cachePhase[slot] = phase;
             cacheRates[slot][0] = Double.NaN;
@@ -408,9 +427,9 @@ final class Engine {
      * evaluation per state, kept in a small cache by {@link #g}, serves all detectors. Layout:
      * 0 normal force, 1 grip minus needed tangential force, 2 slip speed, 3 speed measure
      * {@code |v| + r|ω|}, 4 patch margin, 5 centre distance, 6 Hessian norm, 7 {@code 1 − r κ₁},
-     * 8–10 normal, 11 constraint drift (the largest of distance residual / (threshold · r),
-     * rolling slip / (threshold · speed scale) and quaternion-norm drift / its threshold; contact
-     * phases only, 0 in flight).
+     * 8–10 normal, 11 constraint drift (the larger of distance residual / (threshold · r) and
+     * quaternion-norm drift / its threshold; contact phases only, 0 in flight), 12 acceleration
+     * measure {@code |a| + r|α|} (contact phases only). {@code ys} is a full-layout state.
      */
     private void evaluateEventValues(double ts, double[] ys, double[] v) {
         dyn.phase = phase;
@@ -423,6 +442,10 @@ final class Engine {
             double wy = ys[Dynamics.W + 1];
             double wz = ys[Dynamics.W + 2];
             v[3] = Dynamics.norm(dyn.vel) + r * Math.sqrt(wx * wx + wy * wy + wz * wz);
+            double[] yd = dyn.lastDerivative();
+            v[12] = Math.sqrt(yd[Dynamics.V] * yd[Dynamics.V] + yd[Dynamics.V + 1] * yd[Dynamics.V + 1]
+                + yd[Dynamics.V + 2] * yd[Dynamics.V + 2]) + r * Math.sqrt(yd[Dynamics.W] * yd[Dynamics.W]
+                + yd[Dynamics.W + 1] * yd[Dynamics.W + 1] + yd[Dynamics.W + 2] * yd[Dynamics.W + 2]);
         } else {
             surface.query(ts, centreOf(ys), dyn.geo);
         }
@@ -438,26 +461,16 @@ final class Engine {
         v[8] = n[0];
         v[9] = n[1];
         v[10] = n[2];
-        v[11] = phase.inContact() ? drift(ys, v[5], n) : 0.0;
+        v[11] = phase.inContact() ? drift(ys, v[5]) : 0.0;
     }
 
-    /** Rolling slip residual {@code |v − r ω × n|} of a state (m/s) for the normal (nx, ny, nz). */
-    private double rollingSlip(double[] ys, double nx, double ny, double nz) {
-        double wx = ys[Dynamics.W];
-        double wy = ys[Dynamics.W + 1];
-        double wz = ys[Dynamics.W + 2];
-        double ex = ys[Dynamics.V] - r * (wy * nz - wz * ny);
-        double ey = ys[Dynamics.V + 1] - r * (wz * nx - wx * nz);
-        double ez = ys[Dynamics.V + 2] - r * (wx * ny - wy * nx);
-        return Math.sqrt(ex * ex + ey * ey + ez * ez);
-    }
-
-    /** Constraint drift of a contact state relative to the projection thresholds (see {@link #evaluateEventValues}). */
-    private double drift(double[] ys, double distance, double[] n) {
+    /**
+     * Constraint drift of a contact state relative to the projection thresholds (see
+     * {@link #evaluateEventValues}). Rolling has no slip drift: its velocity is not integrated but
+     * derived, {@code v = r ω × n}.
+     */
+    private double drift(double[] ys, double distance) {
         double d = Math.abs(distance - r) / (set.projectionThreshold() * r);
-        if (phase == Phase.ROLLING) {
-            d = Math.max(d, rollingSlip(ys, n[0], n[1], n[2]) / (set.projectionThreshold() * speedScale));
-        }
         double qn = Math.sqrt(ys[Dynamics.Q] * ys[Dynamics.Q] + ys[Dynamics.Q + 1] * ys[Dynamics.Q + 1]
             + ys[Dynamics.Q + 2] * ys[Dynamics.Q + 2] + ys[Dynamics.Q + 3] * ys[Dynamics.Q + 3]);
         return Math.max(d, Math.abs(qn - 1) / QUATERNION_DRIFT);
@@ -490,7 +503,7 @@ final class Engine {
             for (int i = 0; i < ys.length; i++) {
                 probeY[i] = ys[i] + h * yd[i];
             }
-            evaluateEventValues(s.getTime() + h, probeY, probeValues);
+            evaluateEventValues(s.getTime() + h, dyn.expand(probeY, eventFull), probeValues);
             double[] v = cacheValues[slot];
             cacheRates[slot][0] = (probeValues[0] - v[0]) / h;
             cacheRates[slot][1] = (probeValues[1] - v[1]) / h;
@@ -526,7 +539,8 @@ final class Engine {
      * root and never step over it.
      */
     double stickCheckInterval(ODEStateAndDerivative s) {
-        double[] ys = s.getPrimaryState();
+        // sliding integrates the full mechanical state: c, v, q, ω sit at their full indices
+        double[] ys = dyn.expand(s.getPrimaryState(), eventFull);
         double[] yd = s.getPrimaryDerivative();
         double ts = s.getTime();
         dyn.evaluate(ts, ys);
@@ -563,14 +577,13 @@ final class Engine {
      * configured interval) is a safe time to the next check.
      */
     double exitCheckInterval(ODEStateAndDerivative s) {
-        double[] ys = s.getPrimaryState();
         double margin = g(Trigger.EXIT, s);
         if (!(margin > 0)) {
             return set.maxCheckInterval();
         }
         double hessianNorm = cachedHessianNorm;
-        double v = Math.sqrt(ys[Dynamics.V] * ys[Dynamics.V] + ys[Dynamics.V + 1] * ys[Dynamics.V + 1]
-            + ys[Dynamics.V + 2] * ys[Dynamics.V + 2]);
+        // |v| + r|ω| bounds |v| from above (the velocity itself is not integrated while rolling)
+        double v = lastValues[3];
         double reach = margin / (v * (1 + r * hessianNorm) + 1e-300);
         return Math.max(set.maxCheckInterval(), 0.5 * reach);
     }
@@ -578,7 +591,8 @@ final class Engine {
     /**
      * Check interval of the rest detector (s): the speed measure {@code |v| + r|ω|} changes at most
      * at {@code |a| + r|α|}, read from the state's derivative, so it cannot fall to the rest speed
-     * sooner than {@code (speed − restSpeed)/(|a| + r|α|)} while the accelerations stay at that
+     * sooner than {@code (speed − restSpeed)/(|a| + r|α|)} (read from the cached event values,
+     * since the rolling velocity is not integrated) while the accelerations stay at that
      * level; half of that (never less than the configured interval) is the time to the next check.
      */
     double restCheckInterval(ODEStateAndDerivative s) {
@@ -586,12 +600,7 @@ final class Engine {
         if (!(gap > 0)) {
             return set.maxCheckInterval();
         }
-        double[] yd = s.getPrimaryDerivative();
-        double a = Math.sqrt(yd[Dynamics.V] * yd[Dynamics.V] + yd[Dynamics.V + 1] * yd[Dynamics.V + 1]
-            + yd[Dynamics.V + 2] * yd[Dynamics.V + 2]);
-        double al = Math.sqrt(yd[Dynamics.W] * yd[Dynamics.W] + yd[Dynamics.W + 1] * yd[Dynamics.W + 1]
-            + yd[Dynamics.W + 2] * yd[Dynamics.W + 2]);
-        return Math.max(set.maxCheckInterval(), 0.5 * gap / (a + r * al + 1e-300));
+        return Math.max(set.maxCheckInterval(), 0.5 * gap / (lastValues[12] + 1e-300));
     }
 
     /** Reaction to a located root of a trigger's event function. */
@@ -600,6 +609,7 @@ final class Engine {
             return Action.CONTINUE;
         }
         if (trig == Trigger.IMPACT) {
+            // flight integrates the full mechanical state: c, v sit at their full indices
             double[] ys = s.getPrimaryState();
             surface.query(s.getTime(), centreOf(ys), dyn.geo);
             double vn = ys[Dynamics.V] * dyn.geo.normal[0] + ys[Dynamics.V + 1] * dyn.geo.normal[1]
@@ -608,7 +618,7 @@ final class Engine {
                 return Action.CONTINUE;
             }
         }
-        if (trig == Trigger.REST && !dyn.canRest(s.getTime(), s.getPrimaryState(), 1e-9)) {
+        if (trig == Trigger.REST && !dyn.canRest(s.getTime(), fullState(s), 1e-9)) {
             return Action.CONTINUE;
         }
         fired = trig;
@@ -1080,7 +1090,7 @@ final class Engine {
                 return;
             }
             steps++;
-            double[] yc = cur.getPrimaryState();
+            double[] yc = fullState(cur);
             double tc = cur.getTime();
             double interval = set.sampleInterval();
             if (interval > 0) {
@@ -1091,7 +1101,7 @@ final class Engine {
                     }
                     sampleIndex++;
                     ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
-                    emitSample(ts, si.getPrimaryState(), phase, false);
+                    emitSample(ts, fullState(si), phase, false);
                 }
             } else if (tc < endTime) {
                 emitSample(tc, yc, phase, false);
@@ -1130,18 +1140,32 @@ final class Engine {
 
     /**
      * Residuals at an accepted step end in contact (read from the detectors' cached values of that
-     * state): largest normal force, distance residual {@code |d − r|} and, rolling, slip
-     * {@code |v − r ω × n|}.
+     * state): largest normal force and distance residual {@code |d − r|}.
      */
     private void trackResiduals(ODEStateAndDerivative state) {
-        double[] ys = state.getPrimaryState();
         g(Trigger.LIFT_OFF, state);
         double[] ev = lastValues;
         maxNormalForce = Math.max(maxNormalForce, ev[0]);
         maxDistanceError = Math.max(maxDistanceError, Math.abs(ev[5] - r));
-        if (phase == Phase.ROLLING) {
-            maxRollingSlip = Math.max(maxRollingSlip, rollingSlip(ys, ev[8], ev[9], ev[10]));
+    }
+
+    /**
+     * The full-layout state (a new array) of an integrator state of the current segment; while
+     * rolling, its velocity slot holds the no-slip {@code r ω × n} (normal from the event cache).
+     */
+    private double[] fullState(ODEStateAndDerivative s) {
+        double[] out = dyn.expand(s.getPrimaryState(), new double[Dynamics.DIM]);
+        if (dyn.derivedVelocity()) {
+            g(Trigger.LIFT_OFF, s);
+            double[] n = {lastValues[8], lastValues[9], lastValues[10]};
+            double wx = out[Dynamics.W];
+            double wy = out[Dynamics.W + 1];
+            double wz = out[Dynamics.W + 2];
+            out[Dynamics.V] = r * (wy * n[2] - wz * n[1]);
+            out[Dynamics.V + 1] = r * (wz * n[0] - wx * n[2]);
+            out[Dynamics.V + 2] = r * (wx * n[1] - wy * n[0]);
         }
+        return out;
     }
 
     /**

@@ -9,9 +9,9 @@ import java.util.Optional;
  * force, and the work done (right-hand-side evaluations, accepted steps).
  *
  * <p>Residuals: {@link #maxDistanceError()} is the largest {@code |d(c) − r|} (m) seen at the end of
- * an accepted step in contact, before projection; {@link #maxRollingSlip()} is the largest
- * difference (m/s) between the velocity integrated from Newton's law and the no-slip velocity
- * {@code r ω × n} while rolling (the rolling motion itself follows {@code ċ = r ω × n} exactly).
+ * an accepted step in contact, before projection. There is no slip residual: while rolling the
+ * velocity is not integrated but derived, {@code v = r ω × n}, so the no-slip constraint holds
+ * exactly.
  *
  * <p>Immutable.
  *
@@ -22,7 +22,6 @@ import java.util.Optional;
  * @param phases the phases visited, in time order
  * @param energy the energy budget
  * @param maxDistanceError largest distance residual (m)
- * @param maxRollingSlip largest slip residual while rolling (m/s)
  * @param maxNormalForce largest normal force (N) at step ends and events
  * @param evaluations right-hand-side evaluations: integrator stages, event functions, projections and
  *     switches (the evaluations made only to build output samples are not counted, so the count
@@ -31,7 +30,7 @@ import java.util.Optional;
  */
 public record RunResult(EndReason endReason, String message, BallState endState, List<RunEvent> events,
                         List<PhaseSpan> phases, EnergyBudget energy, double maxDistanceError,
-                        double maxRollingSlip, double maxNormalForce, long evaluations, long steps) {
+                        double maxNormalForce, long evaluations, long steps) {
 
     /** Defensive copies of the lists. */
     public RunResult {

@@ -140,22 +140,6 @@ public final class Invariants {
     }
 
     /**
-     * The slip residual while rolling stays small: {@link org.trundle.core.RunResult#maxRollingSlip()}
-     * over the speed scale V.
-     *
-     * @param bound bound on {@code max |v − r ω × n| / V}
-     * @return the invariant
-     */
-    public static Invariant slipResidual(double bound) {
-        Checks.positive("bound", bound);
-        return c -> {
-            var res = c.simulation().run(c.start(), c.duration());
-            return Verdict.measured("rolling slip residual", res.maxRollingSlip() / c.speedScale(), bound,
-                "end " + res.endReason().label());
-        };
-    }
-
-    /**
      * The phase log is explained: consecutive phase spans differ, and each change of phase at time
      * {@code t} has a logged event at {@code t} that leaves the earlier phase and enters the later
      * one (the phase machine switches only at located events; design notes §1). Worst deviation:

@@ -100,9 +100,8 @@ public final class Robustness {
                 return "energy budget " + b;
             }
         }
-        if (!Double.isFinite(res.maxDistanceError()) || !Double.isFinite(res.maxRollingSlip())
-            || !Double.isFinite(res.maxNormalForce())) {
-            return "residuals " + res.maxDistanceError() + ", " + res.maxRollingSlip() + ", " + res.maxNormalForce();
+        if (!Double.isFinite(res.maxDistanceError()) || !Double.isFinite(res.maxNormalForce())) {
+            return "residuals " + res.maxDistanceError() + ", " + res.maxNormalForce();
         }
         return null;
     }
