@@ -35,12 +35,19 @@ public final class ContactContext {
         this.normalForce = fn;
         this.phase = p;
         this.impulse = isImpulse;
-        System.arraycopy(s, 0, slip, 0, 3);
-        System.arraycopy(relSpin, 0, relativeSpin, 0, 3);
+        slip[0] = s[0];
+        slip[1] = s[1];
+        slip[2] = s[2];
+        relativeSpin[0] = relSpin[0];
+        relativeSpin[1] = relSpin[1];
+        relativeSpin[2] = relSpin[2];
         torque[0] = 0;
         torque[1] = 0;
         torque[2] = 0;
-        java.util.Arrays.fill(lossRate, 0.0);
+        // element by element: for four entries this is cheaper than Arrays.fill
+        for (int i = 0; i < lossRate.length; i++) {
+            lossRate[i] = 0.0;
+        }
     }
 
     /**

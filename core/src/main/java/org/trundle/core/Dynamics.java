@@ -40,6 +40,11 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     private final double m;
     private final double k;
     private final double inertia;
+    private final double invMass;
+    private final double invInertia;
+    /** 1/(k m r) and k m/(1+k): the rolling coefficients. */
+    private final double coupleFactor;
+    private final double rollingMass;
     private final double[] g;
     private final Surface surface;
     private final ContactLaw law;
@@ -61,6 +66,12 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     final double[] friction = new double[3];
     final double[] vel = new double[3];
     final double[] slip = new double[3];
+
+    // loss rates (W) of the last evaluation, by kind
+    private double lossRoll;
+    private double lossPivot;
+    private double lossSlide;
+    private double lossOther;
 
     long evaluations;
     long budget = Long.MAX_VALUE;
@@ -92,6 +103,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         this.m = ball.mass();
         this.k = ball.inertiaFactor();
         this.inertia = ball.momentOfInertia();
+        this.invMass = 1.0 / m;
+        this.invInertia = 1.0 / inertia;
+        this.coupleFactor = 1.0 / (k * m * r);
+        this.rollingMass = k * m / (1 + k);
         this.g = gravity.clone();
         this.surface = surface;
         this.law = law;
@@ -111,7 +126,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
             evaluate(t, y, yDot);
             return yDot;
         }
-        expand(y, full);
+        // the left-out components of the workspace hold their segment-start values (beginSegment)
+        for (int i = 0; i < map.length; i++) {
+            full[map[i]] = y[i];
+        }
         evaluate(t, full, fullDot);
         for (int i = 0; i < map.length; i++) {
             yDot[i] = fullDot[map[i]];
@@ -157,6 +175,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         map = layout;
         derived = layout.length < 4 || layout[V] != V;
         System.arraycopy(start, 0, segmentStart, 0, DIM);
+        System.arraycopy(start, 0, full, 0, DIM);
         return compress(start);
     }
 
@@ -217,164 +236,235 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         if (++evaluations > budget) {
             throw new BudgetExhausted();
         }
-        System.arraycopy(y, C, c, 0, 3);
-        System.arraycopy(y, Q, q, 0, 4);
-        System.arraycopy(y, W, w, 0, 3);
+        c[0] = y[C];
+        c[1] = y[C + 1];
+        c[2] = y[C + 2];
+        q[0] = y[Q];
+        q[1] = y[Q + 1];
+        q[2] = y[Q + 2];
+        q[3] = y[Q + 3];
+        w[0] = y[W];
+        w[1] = y[W + 1];
+        w[2] = y[W + 2];
         fApp[0] = 0;
         fApp[1] = 0;
         fApp[2] = 0;
         tApp[0] = 0;
         tApp[1] = 0;
         tApp[2] = 0;
-        double pRoll = 0;
-        double pPivot = 0;
-        double pSlide = 0;
-        double pOther = 0;
-        double[] ax = tmp;
-        switch (phase) {
-            case ROLLING:
-            case REST: {
-                surface.query(t, c, geo);
-                double[] n = geo.normal;
-                // v = r w x n
-                cross(w, n, vel);
-                scale(vel, r);
-                load.apply(t, c, vel, q, w, fApp, tApp);
-                mulSym(geo.hessian, vel, hv);
-                double vHv = dot(vel, hv);
-                double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
-                zero(slip);
-                ctx.set(ball, geo, fn, Phase.ROLLING, slip, w, false);
-                law.addCouples(ctx);
-                for (int i = 0; i < 3; i++) {
-                    tau[i] = ctx.torque[i] + tApp[i];
-                }
-                // tmp = (tau x n)/(k m r) + r (w x Hv) - g - fApp/m, projected on the tangent plane
-                cross(tau, n, ax);
-                double s1 = 1.0 / (k * m * r);
-                double wx = w[1] * hv[2] - w[2] * hv[1];
-                double wy = w[2] * hv[0] - w[0] * hv[2];
-                double wz = w[0] * hv[1] - w[1] * hv[0];
-                ax[0] = ax[0] * s1 + r * wx - g[0] - fApp[0] / m;
-                ax[1] = ax[1] * s1 + r * wy - g[1] - fApp[1] / m;
-                ax[2] = ax[2] * s1 + r * wz - g[2] - fApp[2] / m;
-                double an = dot(ax, n);
-                double kf = k * m / (1 + k);
-                for (int i = 0; i < 3; i++) {
-                    friction[i] = kf * (ax[i] - an * n[i]);
-                }
-                normalForce = fn;
-                neededTangential = norm(friction);
-                grip = law.gripLimit(ctx);
-                slipSpeed = 0;
-                pRoll = ctx.lossRate[LossKind.ROLLING_RESISTANCE.ordinal()];
-                pPivot = ctx.lossRate[LossKind.PIVOTING_RESISTANCE.ordinal()];
-                pOther = ctx.lossRate[LossKind.OTHER.ordinal()] + ctx.lossRate[LossKind.SLIDING_FRICTION.ordinal()];
-                for (int i = 0; i < 3; i++) {
-                    force[i] = fn * n[i] + friction[i];
-                }
-                break;
-            }
-            case SLIDING: {
-                surface.query(t, c, geo);
-                double[] n = geo.normal;
-                System.arraycopy(y, V, vel, 0, 3);
-                // s = v - r w x n, tangential part
-                cross(w, n, slip);
-                for (int i = 0; i < 3; i++) {
-                    slip[i] = vel[i] - r * slip[i];
-                }
-                double sn = dot(slip, n);
-                for (int i = 0; i < 3; i++) {
-                    slip[i] -= sn * n[i];
-                }
-                load.apply(t, c, vel, q, w, fApp, tApp);
-                mulSym(geo.hessian, vel, hv);
-                double vHv = dot(vel, hv);
-                double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
-                double sp = norm(slip);
-                double[] dir = ax;
-                if (sp >= stickEps) {
-                    for (int i = 0; i < 3; i++) {
-                        dir[i] = slip[i] / sp;
-                    }
-                } else {
-                    // inside the stick band the friction keeps the direction d0 it had on entering
-                    // (kept up to date at each step end by the engine), so that the motion stays
-                    // smooth through the band and the stick root is located on a smooth stretch
-                    System.arraycopy(slideDir0, 0, dir, 0, 3);
-                }
-                ctx.set(ball, geo, fn, Phase.SLIDING, slip, w, false);
-                double f = law.slidingFriction(ctx);
-                law.addCouples(ctx);
-                for (int i = 0; i < 3; i++) {
-                    friction[i] = -f * dir[i];
-                    tau[i] = ctx.torque[i] + tApp[i];
-                    force[i] = fn * n[i] + friction[i];
-                }
-                normalForce = fn;
-                neededTangential = f;
-                grip = Double.NaN;
-                slipSpeed = sp;
-                pSlide = -dot(friction, slip);
-                pRoll = ctx.lossRate[LossKind.ROLLING_RESISTANCE.ordinal()];
-                pPivot = ctx.lossRate[LossKind.PIVOTING_RESISTANCE.ordinal()];
-                pOther = ctx.lossRate[LossKind.OTHER.ordinal()] + ctx.lossRate[LossKind.SLIDING_FRICTION.ordinal()];
-                break;
-            }
-            default: {
-                System.arraycopy(y, V, vel, 0, 3);
-                load.apply(t, c, vel, q, w, fApp, tApp);
-                zero(force);
-                zero(friction);
-                zero(slip);
-                System.arraycopy(tApp, 0, tau, 0, 3);
-                normalForce = 0;
-                neededTangential = 0;
-                grip = Double.NaN;
-                slipSpeed = 0;
-                break;
-            }
+        lossRoll = 0;
+        lossPivot = 0;
+        lossSlide = 0;
+        lossOther = 0;
+        // one method per phase keeps each small enough for the JIT to inline its callees
+        if (phase == Phase.ROLLING || phase == Phase.REST) {
+            rollingForces(t);
+        } else if (phase == Phase.SLIDING) {
+            slidingForces(t, y);
+        } else {
+            flightForces(t, y);
         }
         if (yDot == null) {
             return;
         }
         // alpha = (-r n x F + tau)/I, with the contact force F applied at c - r n
-        double[] n = geo.normal;
+        double fx = force[0];
+        double fy = force[1];
+        double fz = force[2];
+        double vx = vel[0];
+        double vy = vel[1];
+        double vz = vel[2];
+        double wx = w[0];
+        double wy = w[1];
+        double wz = w[2];
+        double fax = fApp[0];
+        double fay = fApp[1];
+        double faz = fApp[2];
         double ix = tau[0];
         double iy = tau[1];
         double iz = tau[2];
         if (phase != Phase.FLIGHT) {
-            ix -= r * (n[1] * force[2] - n[2] * force[1]);
-            iy -= r * (n[2] * force[0] - n[0] * force[2]);
-            iz -= r * (n[0] * force[1] - n[1] * force[0]);
+            double[] n = geo.normal;
+            double nx = n[0];
+            double ny = n[1];
+            double nz = n[2];
+            ix -= r * (ny * fz - nz * fy);
+            iy -= r * (nz * fx - nx * fz);
+            iz -= r * (nx * fy - ny * fx);
         }
-        yDot[C] = vel[0];
-        yDot[C + 1] = vel[1];
-        yDot[C + 2] = vel[2];
-        yDot[V] = g[0] + (force[0] + fApp[0]) / m;
-        yDot[V + 1] = g[1] + (force[1] + fApp[1]) / m;
-        yDot[V + 2] = g[2] + (force[2] + fApp[2]) / m;
+        double q0 = q[0];
+        double q1 = q[1];
+        double q2 = q[2];
+        double q3 = q[3];
+        double applied = fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz;
+        yDot[C] = vx;
+        yDot[C + 1] = vy;
+        yDot[C + 2] = vz;
+        yDot[V] = g[0] + (fx + fax) * invMass;
+        yDot[V + 1] = g[1] + (fy + fay) * invMass;
+        yDot[V + 2] = g[2] + (fz + faz) * invMass;
         // q' = 1/2 (0, w) * q
-        yDot[Q] = -0.5 * (w[0] * q[1] + w[1] * q[2] + w[2] * q[3]);
-        yDot[Q + 1] = 0.5 * (q[0] * w[0] + w[1] * q[3] - w[2] * q[2]);
-        yDot[Q + 2] = 0.5 * (q[0] * w[1] + w[2] * q[1] - w[0] * q[3]);
-        yDot[Q + 3] = 0.5 * (q[0] * w[2] + w[0] * q[2] - w[1] * q[1]);
-        yDot[W] = ix / inertia;
-        yDot[W + 1] = iy / inertia;
-        yDot[W + 2] = iz / inertia;
-        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = pSlide;
-        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = pRoll;
-        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = pPivot;
-        yDot[LOSS + LossKind.OTHER.ordinal()] = pOther;
-        yDot[APPLIED] = dot(fApp, vel) + dot(tApp, w);
-        yDot[PATH] = norm(vel);
+        yDot[Q] = -0.5 * (wx * q1 + wy * q2 + wz * q3);
+        yDot[Q + 1] = 0.5 * (q0 * wx + wy * q3 - wz * q2);
+        yDot[Q + 2] = 0.5 * (q0 * wy + wz * q1 - wx * q3);
+        yDot[Q + 3] = 0.5 * (q0 * wz + wx * q2 - wy * q1);
+        yDot[W] = ix * invInertia;
+        yDot[W + 1] = iy * invInertia;
+        yDot[W + 2] = iz * invInertia;
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
+        yDot[APPLIED] = applied;
+        yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        // one test for all: a sum of finite numbers of this size is finite, and NaN or ±∞ spread
+        double sum = 0;
         for (int i = 0; i < DIM; i++) {
-            if (!Double.isFinite(yDot[i])) {
-                throw new NumericalFailure("non-finite derivative component " + i + " = " + yDot[i]
-                    + " at t = " + t + " s in phase " + phase.label());
+            sum += yDot[i];
+        }
+        if (!Double.isFinite(sum)) {
+            for (int i = 0; i < DIM; i++) {
+                if (!Double.isFinite(yDot[i])) {
+                    throw new NumericalFailure("non-finite derivative component " + i + " = " + yDot[i]
+                        + " at t = " + t + " s in phase " + phase.label());
+                }
             }
         }
+    }
+
+    /**
+     * Rolling: no-slip velocity, constraint forces and couples (results in the fields). Written
+     * with local scalars: the JIT cannot keep array elements in registers across stores to other
+     * arrays that might alias them, and this is the hot path of most runs.
+     */
+    private void rollingForces(double t) {
+        surface.query(t, c, geo);
+        double[] n = geo.normal;
+        double nx = n[0];
+        double ny = n[1];
+        double nz = n[2];
+        double wx = w[0];
+        double wy = w[1];
+        double wz = w[2];
+        // v = r w x n
+        double vx = r * (wy * nz - wz * ny);
+        double vy = r * (wz * nx - wx * nz);
+        double vz = r * (wx * ny - wy * nx);
+        vel[0] = vx;
+        vel[1] = vy;
+        vel[2] = vz;
+        load.apply(t, c, vel, q, w, fApp, tApp);
+        double fax = fApp[0];
+        double fay = fApp[1];
+        double faz = fApp[2];
+        double[] h = geo.hessian;
+        double hvx = h[0] * vx + h[1] * vy + h[2] * vz;
+        double hvy = h[3] * vx + h[4] * vy + h[5] * vz;
+        double hvz = h[6] * vx + h[7] * vy + h[8] * vz;
+        double vHv = vx * hvx + vy * hvy + vz * hvz;
+        double gx = g[0];
+        double gy = g[1];
+        double gz = g[2];
+        double fn = m * (-vHv - (nx * gx + ny * gy + nz * gz)) - (nx * fax + ny * fay + nz * faz);
+        slip[0] = 0;
+        slip[1] = 0;
+        slip[2] = 0;
+        ctx.set(ball, geo, fn, Phase.ROLLING, slip, w, false);
+        law.addCouples(ctx);
+        double[] ct = ctx.torque;
+        double tx = ct[0] + tApp[0];
+        double ty = ct[1] + tApp[1];
+        double tz = ct[2] + tApp[2];
+        tau[0] = tx;
+        tau[1] = ty;
+        tau[2] = tz;
+        // a = (tau x n)/(k m r) + r (w x Hv) - g - fApp/m, projected on the tangent plane
+        double s1 = coupleFactor;
+        double im = invMass;
+        double ax = (ty * nz - tz * ny) * s1 + r * (wy * hvz - wz * hvy) - gx - fax * im;
+        double ay = (tz * nx - tx * nz) * s1 + r * (wz * hvx - wx * hvz) - gy - fay * im;
+        double az = (tx * ny - ty * nx) * s1 + r * (wx * hvy - wy * hvx) - gz - faz * im;
+        double an = ax * nx + ay * ny + az * nz;
+        double kf = rollingMass;
+        double fx = kf * (ax - an * nx);
+        double fy = kf * (ay - an * ny);
+        double fz = kf * (az - an * nz);
+        friction[0] = fx;
+        friction[1] = fy;
+        friction[2] = fz;
+        normalForce = fn;
+        neededTangential = Math.sqrt(fx * fx + fy * fy + fz * fz);
+        grip = law.gripLimit(ctx);
+        slipSpeed = 0;
+        double[] lr = ctx.lossRate;
+        lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+        lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+        lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+        force[0] = fn * nx + fx;
+        force[1] = fn * ny + fy;
+        force[2] = fn * nz + fz;
+    }
+
+    /** Sliding: normal constraint force, friction against the slip, couples (results in the fields). */
+    private void slidingForces(double t, double[] y) {
+        surface.query(t, c, geo);
+        double[] n = geo.normal;
+        System.arraycopy(y, V, vel, 0, 3);
+        // s = v - r w x n, tangential part
+        cross(w, n, slip);
+        for (int i = 0; i < 3; i++) {
+            slip[i] = vel[i] - r * slip[i];
+        }
+        double sn = dot(slip, n);
+        for (int i = 0; i < 3; i++) {
+            slip[i] -= sn * n[i];
+        }
+        load.apply(t, c, vel, q, w, fApp, tApp);
+        mulSym(geo.hessian, vel, hv);
+        double vHv = dot(vel, hv);
+        double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
+        double sp = norm(slip);
+        double[] dir = tmp;
+        if (sp >= stickEps) {
+            for (int i = 0; i < 3; i++) {
+                dir[i] = slip[i] / sp;
+            }
+        } else {
+            // inside the stick band the friction keeps the direction d0 it had on entering
+            // (kept up to date at each step end by the engine), so that the motion stays
+            // smooth through the band and the stick root is located on a smooth stretch
+            System.arraycopy(slideDir0, 0, dir, 0, 3);
+        }
+        ctx.set(ball, geo, fn, Phase.SLIDING, slip, w, false);
+        double f = law.slidingFriction(ctx);
+        law.addCouples(ctx);
+        for (int i = 0; i < 3; i++) {
+            friction[i] = -f * dir[i];
+            tau[i] = ctx.torque[i] + tApp[i];
+            force[i] = fn * n[i] + friction[i];
+        }
+        normalForce = fn;
+        neededTangential = f;
+        grip = Double.NaN;
+        slipSpeed = sp;
+        lossSlide = -dot(friction, slip);
+        lossRoll = ctx.lossRate[LossKind.ROLLING_RESISTANCE.ordinal()];
+        lossPivot = ctx.lossRate[LossKind.PIVOTING_RESISTANCE.ordinal()];
+        lossOther = ctx.lossRate[LossKind.OTHER.ordinal()] + ctx.lossRate[LossKind.SLIDING_FRICTION.ordinal()];
+    }
+
+    /** Flight: applied loads only (results in the fields). */
+    private void flightForces(double t, double[] y) {
+        System.arraycopy(y, V, vel, 0, 3);
+        load.apply(t, c, vel, q, w, fApp, tApp);
+        zero(force);
+        zero(friction);
+        zero(slip);
+        System.arraycopy(tApp, 0, tau, 0, 3);
+        normalForce = 0;
+        neededTangential = 0;
+        grip = Double.NaN;
+        slipSpeed = 0;
     }
 
     /**

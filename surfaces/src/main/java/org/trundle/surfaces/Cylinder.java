@@ -41,6 +41,8 @@ public final class Cylinder implements Surface {
     private final double ay;
     private final double az;
     private final double radius;
+    /** 1/R (1/m). */
+    private final double curvature;
     private final Side side;
     private final double from;
     private final double to;
@@ -71,6 +73,7 @@ public final class Cylinder implements Surface {
         Checks.finite("origin", origin);
         Vector3D a = Checks.direction("axis", axis);
         this.radius = Checks.positive("radius", radius);
+        this.curvature = 1.0 / radius;
         if (side == null) {
             throw new IllegalArgumentException("side must be given, got null");
         }
@@ -133,9 +136,10 @@ public final class Cylinder implements Surface {
             throw new SurfaceDomainException("query point on the axis of " + name()
                 + " has no closest point (distance from the axis " + rho + " m)");
         }
-        double ex = rx / rho;
-        double ey = ry / rho;
-        double ez = rz / rho;
+        double inv = 1.0 / rho;
+        double ex = rx * inv;
+        double ey = ry * inv;
+        double ez = rz * inv;
         out.point[0] = ox + s * ax + radius * ex;
         out.point[1] = oy + s * ay + radius * ey;
         out.point[2] = oz + s * az + radius * ez;
@@ -145,17 +149,17 @@ public final class Cylinder implements Surface {
         out.normal[2] = sign * ez;
         out.distance = sign * (rho - radius);
         // H = sign * (I - a a^T - e e^T) / rho
-        double f = sign / rho;
+        double f = sign * inv;
         out.setHessian(
             f * (1 - ax * ax - ex * ex), -f * (ax * ay + ex * ey), -f * (ax * az + ex * ez),
             f * (1 - ay * ay - ey * ey), -f * (ay * az + ey * ez),
             f * (1 - az * az - ez * ez));
         if (side == Side.INSIDE) {
-            out.curvature1 = 1.0 / radius;
+            out.curvature1 = curvature;
             out.curvature2 = 0.0;
         } else {
             out.curvature1 = 0.0;
-            out.curvature2 = -1.0 / radius;
+            out.curvature2 = -curvature;
         }
         double lo = s - from;
         double hi = to - s;
