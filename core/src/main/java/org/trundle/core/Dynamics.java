@@ -126,13 +126,44 @@ final class Dynamics implements OrdinaryDifferentialEquation {
             evaluate(t, y, yDot);
             return yDot;
         }
-        // the left-out components of the workspace hold their segment-start values (beginSegment)
-        for (int i = 0; i < map.length; i++) {
-            full[map[i]] = y[i];
+        // the left-out components of the workspace hold their segment-start values (beginSegment);
+        // the mechanical part is copied with fixed offsets (every layout starts with c, [v,] q, ω)
+        double[] f = full;
+        double[] fd = fullDot;
+        int n = map.length;
+        int head;
+        if (derived) {
+            f[0] = y[0];
+            f[1] = y[1];
+            f[2] = y[2];
+            for (int i = 0; i < 7; i++) {
+                f[Q + i] = y[3 + i];
+            }
+            head = 10;
+        } else {
+            for (int i = 0; i < LOSS; i++) {
+                f[i] = y[i];
+            }
+            head = LOSS;
         }
-        evaluate(t, full, fullDot);
-        for (int i = 0; i < map.length; i++) {
-            yDot[i] = fullDot[map[i]];
+        for (int i = head; i < n; i++) {
+            f[map[i]] = y[i];
+        }
+        evaluate(t, f, fd);
+        if (derived) {
+            yDot[0] = fd[0];
+            yDot[1] = fd[1];
+            yDot[2] = fd[2];
+            for (int i = 0; i < 7; i++) {
+                yDot[3 + i] = fd[Q + i];
+            }
+        } else {
+            for (int i = 0; i < LOSS; i++) {
+                yDot[i] = fd[i];
+            }
+        }
+        for (int i = head; i < n; i++) {
+            yDot[i] = fd[map[i]];
         }
         return yDot;
     }
