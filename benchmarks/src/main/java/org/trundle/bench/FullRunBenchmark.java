@@ -155,7 +155,8 @@ public class FullRunBenchmark {
     }
 
     /**
-     * The baseline with the library's state length (19 components, the 6 extra ones idle): the
+     * The baseline with the library's full state length (19 components, the 6 extra ones idle; the
+     * library itself now integrates 11 while rolling): the
      * integrator's own array work for a longer state.
      *
      * @param s scenario

@@ -83,9 +83,9 @@ public final class ResultsReport {
         JsonNode det = byKey.get("FullRunBenchmark.baselineWithOneDetector");
         if (base != null && pad != null && det != null) {
             double b = score(base);
-            out.printf(Locale.ROOT, "| decomposition: baseline with the library's 19-component state / baseline | %.2f |%n",
+            out.printf(Locale.ROOT, "| decomposition: baseline with a 19-component state (the library's full layout) / baseline | %.2f |%n",
                 b / score(pad));
-            out.printf(Locale.ROOT, "| decomposition: baseline with one event detector checked every 1 ms / baseline"
+            out.printf(Locale.ROOT, "| decomposition: baseline with one event detector at a fixed 1 ms check interval / baseline"
                 + " | %.2f |%n", b / score(det));
         }
         JsonNode kLib = byKey.get("KernelBenchmark.libraryKernel law=PURE_ROLLING");
