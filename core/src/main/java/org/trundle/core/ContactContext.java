@@ -51,6 +51,31 @@ public final class ContactContext {
     }
 
     /**
+     * The rolling contact of the solver's hot path: no slip, no impulse, the given spin; the ball
+     * and geometry stay those of the last {@link #set}. Couples and loss rates are cleared only
+     * when the law may add them.
+     */
+    void setRolling(double fn, double wx, double wy, double wz, boolean clearCouples) {
+        this.normalForce = fn;
+        this.phase = Phase.ROLLING;
+        this.impulse = false;
+        slip[0] = 0;
+        slip[1] = 0;
+        slip[2] = 0;
+        relativeSpin[0] = wx;
+        relativeSpin[1] = wy;
+        relativeSpin[2] = wz;
+        if (clearCouples) {
+            torque[0] = 0;
+            torque[1] = 0;
+            torque[2] = 0;
+            for (int i = 0; i < lossRate.length; i++) {
+                lossRate[i] = 0.0;
+            }
+        }
+    }
+
+    /**
      * Prepares the context outside the solver (for testing a law on its own).
      *
      * @param b ball

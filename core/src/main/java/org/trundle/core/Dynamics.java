@@ -87,6 +87,21 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     private final double[] force = new double[3];
     private final double[] tau = new double[3];
     private final double[] scratchDot = new double[DIM];
+    /** Whether there is an applied load (without one, the load arrays stay zero and are never asked). */
+    private final boolean loaded;
+    /** Whether the law may add couples (without, the couple calls and loss reads are skipped while rolling). */
+    private final boolean couples;
+    /** Receives the state and results of an integrator stage evaluated at the same time as the one before. */
+    interface StageObserver {
+        void stage(double t, double[] compact, double[] full, double[] fullDot);
+    }
+
+    /** Told about repeated-time stages (the step end of Dormand–Prince 8(5,3)); null for none. */
+    StageObserver stageObserver;
+    private double lastStageTime = Double.NaN;
+
+    /** Compact derivative returned to Hipparchus, which copies it (ExpandableODE.computeDerivatives). */
+    private double[] compactDot = new double[DIM];
 
     /** Integrated layout of the current segment: compact index to full index (identity by default). */
     private int[] map = IDENTITY;
@@ -112,6 +127,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         this.law = law;
         this.load = load;
         this.geo.scratch = surface.newScratch();
+        this.loaded = load != AppliedLoad.NONE;
+        this.couples = addsCouples(law);
+        // the ball and the geometry workspace never change: the hot path sets only the contact values
+        ctx.set(ball, geo, 0.0, Phase.ROLLING, slip, w, false);
     }
 
     @Override
@@ -121,9 +140,14 @@ final class Dynamics implements OrdinaryDifferentialEquation {
 
     @Override
     public double[] computeDerivatives(double t, double[] y) {
-        double[] yDot = new double[map.length];
+        // Hipparchus copies the returned array into its own (ExpandableODE), so one workspace serves
+        double[] yDot = compactDot;
         if (map == IDENTITY) {
             evaluate(t, y, yDot);
+            if (t == lastStageTime && stageObserver != null) {
+                stageObserver.stage(t, y, y, yDot);
+            }
+            lastStageTime = t;
             return yDot;
         }
         // the left-out components of the workspace hold their segment-start values (beginSegment);
@@ -165,6 +189,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         for (int i = head; i < n; i++) {
             yDot[i] = fd[map[i]];
         }
+        if (t == lastStageTime && stageObserver != null) {
+            stageObserver.stage(t, y, f, fd);
+        }
+        lastStageTime = t;
         return yDot;
     }
 
@@ -205,6 +233,8 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     double[] beginSegment(int[] layout, double[] start) {
         map = layout;
         derived = layout.length < 4 || layout[V] != V;
+        compactDot = new double[layout.length];
+        lastStageTime = Double.NaN;
         System.arraycopy(start, 0, segmentStart, 0, DIM);
         System.arraycopy(start, 0, full, 0, DIM);
         return compress(start);
@@ -250,13 +280,20 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         if (law instanceof CombinedLaw) {
             return ((CombinedLaw) law).partsAddCouples();
         }
-        try {
-            return law.getClass().getMethod("addCouples", ContactContext.class).getDeclaringClass()
-                != ContactLaw.class;
-        } catch (NoSuchMethodException e) {
-            return true;
-        }
+        return OVERRIDES_COUPLES.get(law.getClass());
     }
+
+    /** Per law class: whether it overrides {@code addCouples} (looked up once per class). */
+    private static final ClassValue<Boolean> OVERRIDES_COUPLES = new ClassValue<>() {
+        @Override
+        protected Boolean computeValue(Class<?> type) {
+            try {
+                return type.getMethod("addCouples", ContactContext.class).getDeclaringClass() != ContactLaw.class;
+            } catch (NoSuchMethodException e) {
+                return Boolean.TRUE;
+            }
+        }
+    };
 
     /** Evaluates the phase's forces without keeping derivatives (event functions, samples). */
     void evaluate(double t, double[] y) {
@@ -270,19 +307,21 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         c[0] = y[C];
         c[1] = y[C + 1];
         c[2] = y[C + 2];
-        q[0] = y[Q];
-        q[1] = y[Q + 1];
-        q[2] = y[Q + 2];
-        q[3] = y[Q + 3];
         w[0] = y[W];
         w[1] = y[W + 1];
         w[2] = y[W + 2];
-        fApp[0] = 0;
-        fApp[1] = 0;
-        fApp[2] = 0;
-        tApp[0] = 0;
-        tApp[1] = 0;
-        tApp[2] = 0;
+        if (loaded) {
+            q[0] = y[Q];
+            q[1] = y[Q + 1];
+            q[2] = y[Q + 2];
+            q[3] = y[Q + 3];
+            fApp[0] = 0;
+            fApp[1] = 0;
+            fApp[2] = 0;
+            tApp[0] = 0;
+            tApp[1] = 0;
+            tApp[2] = 0;
+        }
         lossRoll = 0;
         lossPivot = 0;
         lossSlide = 0;
@@ -323,10 +362,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
             iy -= r * (nz * fx - nx * fz);
             iz -= r * (nx * fy - ny * fx);
         }
-        double q0 = q[0];
-        double q1 = q[1];
-        double q2 = q[2];
-        double q3 = q[3];
+        double q0 = y[Q];
+        double q1 = y[Q + 1];
+        double q2 = y[Q + 2];
+        double q3 = y[Q + 3];
         double applied = fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz;
         yDot[C] = vx;
         yDot[C + 1] = vy;
@@ -349,10 +388,16 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[APPLIED] = applied;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
         // one test for all: a sum of finite numbers of this size is finite, and NaN or ±∞ spread
-        double sum = 0;
-        for (int i = 0; i < DIM; i++) {
-            sum += yDot[i];
+        // (three partial sums, so that the additions do not form one long dependency chain)
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        for (int i = 0; i < 18; i += 3) {
+            s0 += yDot[i];
+            s1 += yDot[i + 1];
+            s2 += yDot[i + 2];
         }
+        double sum = s0 + s1 + s2 + yDot[18];
         if (!Double.isFinite(sum)) {
             for (int i = 0; i < DIM; i++) {
                 if (!Double.isFinite(yDot[i])) {
@@ -384,7 +429,9 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         vel[0] = vx;
         vel[1] = vy;
         vel[2] = vz;
-        load.apply(t, c, vel, q, w, fApp, tApp);
+        if (loaded) {
+            load.apply(t, c, vel, q, w, fApp, tApp);
+        }
         double fax = fApp[0];
         double fay = fApp[1];
         double faz = fApp[2];
@@ -400,12 +447,17 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         slip[0] = 0;
         slip[1] = 0;
         slip[2] = 0;
-        ctx.set(ball, geo, fn, Phase.ROLLING, slip, w, false);
-        law.addCouples(ctx);
-        double[] ct = ctx.torque;
-        double tx = ct[0] + tApp[0];
-        double ty = ct[1] + tApp[1];
-        double tz = ct[2] + tApp[2];
+        ctx.setRolling(fn, wx, wy, wz, couples);
+        double tx = tApp[0];
+        double ty = tApp[1];
+        double tz = tApp[2];
+        if (couples) {
+            law.addCouples(ctx);
+            double[] ct = ctx.torque;
+            tx += ct[0];
+            ty += ct[1];
+            tz += ct[2];
+        }
         tau[0] = tx;
         tau[1] = ty;
         tau[2] = tz;
@@ -427,10 +479,12 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         neededTangential = Math.sqrt(fx * fx + fy * fy + fz * fz);
         grip = law.gripLimit(ctx);
         slipSpeed = 0;
-        double[] lr = ctx.lossRate;
-        lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
-        lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
-        lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+        if (couples) {
+            double[] lr = ctx.lossRate;
+            lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+        }
         force[0] = fn * nx + fx;
         force[1] = fn * ny + fy;
         force[2] = fn * nz + fz;
@@ -450,7 +504,9 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         for (int i = 0; i < 3; i++) {
             slip[i] -= sn * n[i];
         }
-        load.apply(t, c, vel, q, w, fApp, tApp);
+        if (loaded) {
+            load.apply(t, c, vel, q, w, fApp, tApp);
+        }
         mulSym(geo.hessian, vel, hv);
         double vHv = dot(vel, hv);
         double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
@@ -487,7 +543,9 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     /** Flight: applied loads only (results in the fields). */
     private void flightForces(double t, double[] y) {
         System.arraycopy(y, V, vel, 0, 3);
-        load.apply(t, c, vel, q, w, fApp, tApp);
+        if (loaded) {
+            load.apply(t, c, vel, q, w, fApp, tApp);
+        }
         zero(force);
         zero(friction);
         zero(slip);

@@ -99,18 +99,13 @@ final class Engine {
     /** Full-layout workspace of the event functions (the integrator's states are compact). */
     private final double[] eventFull = new double[Dynamics.DIM];
     private final double[][] cacheValues = new double[CACHE][VALUES];
-    /** Rates (per second) of the lift-off and slip functions at the cached states, NaN until asked for. */
-    private final double[][] cacheRates = new double[CACHE][2];
-    private final double[] probeY = new double[Dynamics.DIM];
-    private final double[] probeValues = new double[VALUES];
-    /** Per watched trigger (lift-off, slip): time and rate at its last check, for the curvature estimate. */
-    private final double[] checkTime = new double[2];
-    private final double[] checkRate = new double[2];
-    private final double[] checkCurvature = new double[2];
+    /** Per watched trigger (lift-off, slip): times and values of its last three checks in the segment. */
+    private final double[][] checkTimes = new double[2][3];
+    private final double[][] checkValues = new double[2][3];
+    private final int[] checkCount = new int[2];
     private int cacheNext;
     private double cachedHessianNorm;
     private double[] lastValues;
-    private int lastSlot;
 
     // set by handlers during a segment
     private Trigger fired;
@@ -131,6 +126,7 @@ final class Engine {
         this.dyn = new Dynamics(b, surface, law, g, sim.load());
         this.restitution = law.restitution().orElse(0.0);
         this.lawCouples = Dynamics.addsCouples(law);
+        this.dyn.stageObserver = this::stageAtStepEnd;
     }
 
     RunResult run(BallState start, double duration) {
@@ -331,10 +327,8 @@ final class Engine {
             restartStep = 0;
         }
         integ.addStepHandler(new StepObserver());
-        for (int i = 0; i < 2; i++) {
-            checkTime[i] = Double.NaN;
-            checkCurvature[i] = 0;
-        }
+        checkCount[0] = 0;
+        checkCount[1] = 0;
         if (phase.inContact()) {
             // the drift detector watches for its function falling through zero: a segment must
             // start below the thresholds, or it would never fire
@@ -389,19 +383,12 @@ final class Engine {
             }
         }
         if (slot < 0) {
-            slot = cacheNext;
-            cacheNext = (cacheNext + 1) % CACHE;
+            slot = nextSlot(ts, ys);
             evaluateEventValues(ts, dyn.expand(ys, eventFull), cacheValues[slot]);
-            System.arraycopy(ys, 0, cacheY[slot], 0, len);
-            cacheLength[slot] = len;
-            cacheTime[slot] = ts;
-            cachePhase[slot] = phase;
-            cacheRates[slot][0] = Double.NaN;
         }
         double[] v = cacheValues[slot];
         cachedHessianNorm = v[6];
         lastValues = v;
-        lastSlot = slot;
         switch (trig) {
             case LIFT_OFF:
                 return v[0];
@@ -421,6 +408,29 @@ final class Engine {
         }
     }
 
+    /** Claims the next cache slot for the integrator state (ts, ys), keyed by its compact array. */
+    private int nextSlot(double ts, double[] ys) {
+        int slot = cacheNext;
+        cacheNext = (cacheNext + 1) % CACHE;
+        System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
+        cacheLength[slot] = ys.length;
+        cacheTime[slot] = ts;
+        cachePhase[slot] = phase;
+        return slot;
+    }
+
+    /**
+     * Dormand–Prince 8(5,3) evaluates its last two main stages at the step end, the second at the
+     * step's end state itself (first same as last); the detectors ask about that state next, so
+     * its event values are taken from that evaluation instead of a new one (a state that differs
+     * in the last bit just misses the cache and is evaluated).
+     */
+    private void stageAtStepEnd(double ts, double[] compact, double[] full, double[] fullDot) {
+        if (phase.inContact()) {
+            fillEventValues(full, fullDot, cacheValues[nextSlot(ts, compact)]);
+        }
+    }
+
     /**
      * Evaluates every event function of the current phase at once into {@code v}: Hipparchus asks
      * each detector in turn about the same few states of a step (its check points and end), so one
@@ -435,6 +445,18 @@ final class Engine {
         dyn.phase = phase;
         if (phase.inContact()) {
             dyn.evaluate(ts, ys);
+        } else {
+            surface.query(ts, centreOf(ys), dyn.geo);
+        }
+        fillEventValues(ys, dyn.lastDerivative(), v);
+    }
+
+    /**
+     * The event values of {@link #evaluateEventValues} from the results the last evaluation left in
+     * {@code dyn} (forces, geometry), for the full state {@code ys} with full derivative {@code yd}.
+     */
+    private void fillEventValues(double[] ys, double[] yd, double[] v) {
+        if (phase.inContact()) {
             v[0] = dyn.normalForce;
             v[1] = dyn.grip - dyn.neededTangential;
             v[2] = dyn.slipSpeed;
@@ -442,12 +464,9 @@ final class Engine {
             double wy = ys[Dynamics.W + 1];
             double wz = ys[Dynamics.W + 2];
             v[3] = Dynamics.norm(dyn.vel) + r * Math.sqrt(wx * wx + wy * wy + wz * wz);
-            double[] yd = dyn.lastDerivative();
             v[12] = Math.sqrt(yd[Dynamics.V] * yd[Dynamics.V] + yd[Dynamics.V + 1] * yd[Dynamics.V + 1]
                 + yd[Dynamics.V + 2] * yd[Dynamics.V + 2]) + r * Math.sqrt(yd[Dynamics.W] * yd[Dynamics.W]
                 + yd[Dynamics.W + 1] * yd[Dynamics.W + 1] + yd[Dynamics.W + 2] * yd[Dynamics.W + 2]);
-        } else {
-            surface.query(ts, centreOf(ys), dyn.geo);
         }
         v[4] = dyn.geo.patchMargin;
         v[5] = dyn.geo.distance;
@@ -478,55 +497,53 @@ final class Engine {
 
     /**
      * Check interval of the lift-off and slip detectors (s). Their functions {@code f} (normal
-     * force; grip minus needed tangential force) have no cheap analytic bound on their rate, so the
-     * rate is measured along the flow: {@code ḟ ≈ (f(t + h, y + h ẏ) − f(t, y))/h} with
-     * {@code h = 1e-6 r/U} (one extra evaluation; truncation error {@code O(h f̈)}, relative
-     * {@code ~1e-6}), and the curvature {@code |f̈|} is estimated from the change of {@code ḟ}
-     * since this detector's previous check. The pessimistic model
+     * force; grip minus needed tangential force) have no cheap analytic bound on their rate, so a
+     * local model is fitted to this detector's last three checks in the segment (values the
+     * detector computed anyway, so no extra evaluation): the quadratic through them gives the rate
+     * {@code ḟ} and the curvature {@code f̈} now. The pessimistic model
      * {@code f + ḟ τ − ½|f̈| τ² = 0} gives the earliest time {@code τ₀} the function could reach
-     * zero; the next check is at {@code τ₀/2}, and never sooner than the configured interval
-     * (so the detectors are never checked less often than with a fixed interval near a root).
-     * Common practice for event location (check spacing from a local model of the event function,
-     * as the exit, rest and stick detectors do with their bounds).
+     * zero; the next check is at {@code τ₀/2}, and never sooner than the configured interval (so a
+     * detector is never checked less often than with a fixed interval near a root; until three
+     * checks exist, the configured interval is used). Common practice for event location (check
+     * spacing from a local model of the event function, as the exit, rest and stick detectors do
+     * with their bounds).
      */
     double flowCheckInterval(Trigger trig, ODEStateAndDerivative s) {
         int w = trig == Trigger.LIFT_OFF ? 0 : 1;
         double f = g(trig, s);
-        if (!(f > 0)) {
+        double ts = s.getTime();
+        double[] ht = checkTimes[w];
+        double[] hf = checkValues[w];
+        if (ts > ht[2] || checkCount[w] == 0) {
+            ht[0] = ht[1];
+            hf[0] = hf[1];
+            ht[1] = ht[2];
+            hf[1] = hf[2];
+            ht[2] = ts;
+            hf[2] = f;
+            checkCount[w]++;
+        } else if (ts < ht[2]) {
+            // not in time order (should not happen within a segment): start the history afresh
+            checkCount[w] = 1;
+            ht[2] = ts;
+            hf[2] = f;
+        }
+        if (!(f > 0) || checkCount[w] < 3) {
             return set.maxCheckInterval();
         }
-        int slot = lastSlot;
-        if (Double.isNaN(cacheRates[slot][0])) {
-            double[] ys = s.getPrimaryState();
-            double[] yd = s.getPrimaryDerivative();
-            double h = 1e-6 * r / speedScale;
-            for (int i = 0; i < ys.length; i++) {
-                probeY[i] = ys[i] + h * yd[i];
-            }
-            evaluateEventValues(s.getTime() + h, dyn.expand(probeY, eventFull), probeValues);
-            double[] v = cacheValues[slot];
-            cacheRates[slot][0] = (probeValues[0] - v[0]) / h;
-            cacheRates[slot][1] = (probeValues[1] - v[1]) / h;
-        }
-        double rate = cacheRates[slot][w];
-        double ts = s.getTime();
-        double dt = ts - checkTime[w];
-        if (dt > 0) {
-            checkCurvature[w] = Math.abs(rate - checkRate[w]) / dt;
-        }
-        if (!(dt == 0)) {
-            checkTime[w] = ts;
-            checkRate[w] = rate;
-        }
-        double curv = checkCurvature[w];
+        double dab = (hf[1] - hf[0]) / (ht[1] - ht[0]);
+        double dbc = (hf[2] - hf[1]) / (ht[2] - ht[1]);
+        double dabc = (dbc - dab) / (ht[2] - ht[0]);
+        double rate = dbc + dabc * (ht[2] - ht[1]);
+        double curv = 2 * Math.abs(dabc);
         double tau;
         if (curv > 0) {
             tau = (rate + Math.sqrt(rate * rate + 2 * curv * f)) / curv;
         } else {
             tau = rate < 0 ? f / -rate : Double.POSITIVE_INFINITY;
         }
-        if (!Double.isFinite(tau)) {
-            return Double.POSITIVE_INFINITY;
+        if (!(tau >= 0)) {
+            return set.maxCheckInterval();
         }
         return Math.max(set.maxCheckInterval(), 0.5 * tau);
     }
