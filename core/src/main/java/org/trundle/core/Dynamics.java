@@ -328,7 +328,11 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         lossOther = 0;
         // one method per phase keeps each small enough for the JIT to inline its callees
         if (phase == Phase.ROLLING || phase == Phase.REST) {
-            rollingForces(t);
+            rollingForces(t, y, yDot);
+            if (yDot != null) {
+                checkFinite(t, yDot);
+            }
+            return;
         } else if (phase == Phase.SLIDING) {
             slidingForces(t, y);
         } else {
@@ -387,6 +391,11 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
         yDot[APPLIED] = applied;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        checkFinite(t, yDot);
+    }
+
+    /** Throws {@link NumericalFailure} naming the first non-finite component of a derivative. */
+    private void checkFinite(double t, double[] yDot) {
         // one test for all: a sum of finite numbers of this size is finite, and NaN or ±∞ spread
         // (three partial sums, so that the additions do not form one long dependency chain)
         double s0 = 0;
@@ -413,7 +422,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
      * with local scalars: the JIT cannot keep array elements in registers across stores to other
      * arrays that might alias them, and this is the hot path of most runs.
      */
-    private void rollingForces(double t) {
+    private void rollingForces(double t, double[] y, double[] yDot) {
         surface.query(t, c, geo);
         double[] n = geo.normal;
         double nx = n[0];
@@ -488,6 +497,37 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         force[0] = fn * nx + fx;
         force[1] = fn * ny + fy;
         force[2] = fn * nz + fz;
+        if (yDot == null) {
+            return;
+        }
+        // the derivative from the locals (the general tail below reads them back from the arrays):
+        // alpha = (tau - r n x F)/I with n x F = n x F_t
+        double ix = tx - r * (ny * fz - nz * fy);
+        double iy = ty - r * (nz * fx - nx * fz);
+        double iz = tz - r * (nx * fy - ny * fx);
+        double q0 = y[Q];
+        double q1 = y[Q + 1];
+        double q2 = y[Q + 2];
+        double q3 = y[Q + 3];
+        yDot[C] = vx;
+        yDot[C + 1] = vy;
+        yDot[C + 2] = vz;
+        yDot[V] = gx + (fn * nx + fx + fax) * im;
+        yDot[V + 1] = gy + (fn * ny + fy + fay) * im;
+        yDot[V + 2] = gz + (fn * nz + fz + faz) * im;
+        yDot[Q] = -0.5 * (wx * q1 + wy * q2 + wz * q3);
+        yDot[Q + 1] = 0.5 * (q0 * wx + wy * q3 - wz * q2);
+        yDot[Q + 2] = 0.5 * (q0 * wy + wz * q1 - wx * q3);
+        yDot[Q + 3] = 0.5 * (q0 * wz + wx * q2 - wy * q1);
+        yDot[W] = ix * invInertia;
+        yDot[W + 1] = iy * invInertia;
+        yDot[W + 2] = iz * invInertia;
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = 0;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
+        yDot[APPLIED] = loaded ? fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz : 0;
+        yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
     }
 
     /** Sliding: normal constraint force, friction against the slip, couples (results in the fields). */

@@ -96,6 +96,11 @@ final class Engine {
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
     private final int[] cacheLength = new int[CACHE];
+    /** Bumped whenever a slot is reused, so that the identity shortcut of {@link #g} never reads stale values. */
+    private final long[] cacheGeneration = new long[CACHE];
+    private ODEStateAndDerivative lastState;
+    private int lastStateSlot;
+    private long lastStateGeneration;
     /** Full-layout workspace of the event functions (the integrator's states are compact). */
     private final double[] eventFull = new double[Dynamics.DIM];
     private final double[][] cacheValues = new double[CACHE][VALUES];
@@ -371,20 +376,15 @@ final class Engine {
 
     /** Event function value of a trigger at a state. */
     double g(Trigger trig, ODEStateAndDerivative s) {
-        double[] ys = s.getPrimaryState();
-        double ts = s.getTime();
-        int len = ys.length;
-        int slot = -1;
-        for (int i = 0; i < CACHE; i++) {
-            if (cachePhase[i] == phase && cacheTime[i] == ts && cacheLength[i] == len
-                && java.util.Arrays.equals(ys, 0, len, cacheY[i], 0, len)) {
-                slot = i;
-                break;
-            }
-        }
-        if (slot < 0) {
-            slot = nextSlot(ts, ys);
-            evaluateEventValues(ts, dyn.expand(ys, eventFull), cacheValues[slot]);
+        int slot;
+        if (s == lastState && cacheGeneration[lastStateSlot] == lastStateGeneration && cachePhase[lastStateSlot] == phase) {
+            // Hipparchus hands the same (immutable) state object to every detector in turn
+            slot = lastStateSlot;
+        } else {
+            slot = slotOf(s);
+            lastState = s;
+            lastStateSlot = slot;
+            lastStateGeneration = cacheGeneration[slot];
         }
         double[] v = cacheValues[slot];
         cachedHessianNorm = v[6];
@@ -408,9 +408,26 @@ final class Engine {
         }
     }
 
+    /** The cache slot holding the event values of an integrator state, evaluated if not cached. */
+    private int slotOf(ODEStateAndDerivative s) {
+        double[] ys = s.getPrimaryState();
+        double ts = s.getTime();
+        int len = ys.length;
+        for (int i = 0; i < CACHE; i++) {
+            if (cachePhase[i] == phase && cacheTime[i] == ts && cacheLength[i] == len
+                && java.util.Arrays.equals(ys, 0, len, cacheY[i], 0, len)) {
+                return i;
+            }
+        }
+        int slot = nextSlot(ts, ys);
+        evaluateEventValues(ts, dyn.expand(ys, eventFull), cacheValues[slot]);
+        return slot;
+    }
+
     /** Claims the next cache slot for the integrator state (ts, ys), keyed by its compact array. */
     private int nextSlot(double ts, double[] ys) {
         int slot = cacheNext;
+        cacheGeneration[slot]++;
         cacheNext = (cacheNext + 1) % CACHE;
         System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
         cacheLength[slot] = ys.length;

@@ -43,6 +43,15 @@ public final class Cylinder implements Surface {
     private final double radius;
     /** 1/R (1/m). */
     private final double curvature;
+    /** −1 inside, +1 outside: the normal's sense relative to the outward radial direction. */
+    private final double sign;
+    /** The projector {@code I − a aᵀ} onto the plane normal to the axis, upper triangle. */
+    private final double pxx;
+    private final double pxy;
+    private final double pxz;
+    private final double pyy;
+    private final double pyz;
+    private final double pzz;
     private final Side side;
     private final double from;
     private final double to;
@@ -90,6 +99,13 @@ public final class Cylinder implements Surface {
         ax = a.getX();
         ay = a.getY();
         az = a.getZ();
+        sign = side == Side.INSIDE ? -1.0 : 1.0;
+        pxx = 1 - ax * ax;
+        pxy = -ax * ay;
+        pxz = -ax * az;
+        pyy = 1 - ay * ay;
+        pyz = -ay * az;
+        pzz = 1 - az * az;
     }
 
     /** @return radius R (m) */
@@ -143,7 +159,7 @@ public final class Cylinder implements Surface {
         out.point[0] = ox + s * ax + radius * ex;
         out.point[1] = oy + s * ay + radius * ey;
         out.point[2] = oz + s * az + radius * ez;
-        double sign = side == Side.INSIDE ? -1.0 : 1.0;
+        double sign = this.sign;
         out.normal[0] = sign * ex;
         out.normal[1] = sign * ey;
         out.normal[2] = sign * ez;
@@ -151,9 +167,9 @@ public final class Cylinder implements Surface {
         // H = sign * (I - a a^T - e e^T) / rho
         double f = sign * inv;
         out.setHessian(
-            f * (1 - ax * ax - ex * ex), -f * (ax * ay + ex * ey), -f * (ax * az + ex * ez),
-            f * (1 - ay * ay - ey * ey), -f * (ay * az + ey * ez),
-            f * (1 - az * az - ez * ez));
+            f * (pxx - ex * ex), f * (pxy - ex * ey), f * (pxz - ex * ez),
+            f * (pyy - ey * ey), f * (pyz - ey * ez),
+            f * (pzz - ez * ez));
         if (side == Side.INSIDE) {
             out.curvature1 = curvature;
             out.curvature2 = 0.0;
