@@ -24,6 +24,7 @@ public final class ContactContext {
     private final double[] relativeSpin = new double[3];
     final double[] torque = new double[3];
     final double[] lossRate = new double[LossKind.values().length];
+    private boolean rollingSlipZero;
 
     /** Creates an empty context (the solver makes one per run). */
     public ContactContext() {
@@ -35,6 +36,7 @@ public final class ContactContext {
         this.normalForce = fn;
         this.phase = p;
         this.impulse = isImpulse;
+        rollingSlipZero = false;
         slip[0] = s[0];
         slip[1] = s[1];
         slip[2] = s[2];
@@ -57,11 +59,17 @@ public final class ContactContext {
      */
     void setRolling(double fn, double wx, double wy, double wz, boolean clearCouples) {
         this.normalForce = fn;
-        this.phase = Phase.ROLLING;
-        this.impulse = false;
-        slip[0] = 0;
-        slip[1] = 0;
-        slip[2] = 0;
+        if (phase != Phase.ROLLING || impulse) {
+            this.phase = Phase.ROLLING;
+            this.impulse = false;
+        }
+        // the slip stays zero from one rolling call to the next; any other use resets it
+        if (!rollingSlipZero) {
+            slip[0] = 0;
+            slip[1] = 0;
+            slip[2] = 0;
+            rollingSlipZero = true;
+        }
         relativeSpin[0] = wx;
         relativeSpin[1] = wy;
         relativeSpin[2] = wz;

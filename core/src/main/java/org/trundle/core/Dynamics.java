@@ -65,6 +65,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     double slipSpeed;
     final double[] friction = new double[3];
     final double[] vel = new double[3];
+    /** Slip velocity of the last sliding evaluation (not written while rolling, where it is zero). */
     final double[] slip = new double[3];
 
     // loss rates (W) of the last evaluation, by kind
@@ -366,10 +367,6 @@ final class Dynamics implements OrdinaryDifferentialEquation {
             iy -= r * (nz * fx - nx * fz);
             iz -= r * (nx * fy - ny * fx);
         }
-        double q0 = y[Q];
-        double q1 = y[Q + 1];
-        double q2 = y[Q + 2];
-        double q3 = y[Q + 3];
         double applied = fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz;
         yDot[C] = vx;
         yDot[C + 1] = vy;
@@ -377,14 +374,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[V] = g[0] + (fx + fax) * invMass;
         yDot[V + 1] = g[1] + (fy + fay) * invMass;
         yDot[V + 2] = g[2] + (fz + faz) * invMass;
-        // q' = 1/2 (0, w) * q
-        yDot[Q] = -0.5 * (wx * q1 + wy * q2 + wz * q3);
-        yDot[Q + 1] = 0.5 * (q0 * wx + wy * q3 - wz * q2);
-        yDot[Q + 2] = 0.5 * (q0 * wy + wz * q1 - wx * q3);
-        yDot[Q + 3] = 0.5 * (q0 * wz + wx * q2 - wy * q1);
-        yDot[W] = ix * invInertia;
-        yDot[W + 1] = iy * invInertia;
-        yDot[W + 2] = iz * invInertia;
+        rotationRates(y, wx, wy, wz, ix * invInertia, iy * invInertia, iz * invInertia, yDot);
         yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide;
         yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
         yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
@@ -392,6 +382,25 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[APPLIED] = applied;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
         checkFinite(t, yDot);
+    }
+
+    /**
+     * Writes the orientation and spin rates: {@code q̇ = ½ (0, ω) ⊗ q} (Hamilton product, scalar
+     * first) and {@code ω̇ = α}.
+     */
+    private static void rotationRates(double[] y, double wx, double wy, double wz,
+                                      double alx, double aly, double alz, double[] yDot) {
+        double q0 = y[Q];
+        double q1 = y[Q + 1];
+        double q2 = y[Q + 2];
+        double q3 = y[Q + 3];
+        yDot[Q] = -0.5 * (wx * q1 + wy * q2 + wz * q3);
+        yDot[Q + 1] = 0.5 * (q0 * wx + wy * q3 - wz * q2);
+        yDot[Q + 2] = 0.5 * (q0 * wy + wz * q1 - wx * q3);
+        yDot[Q + 3] = 0.5 * (q0 * wz + wx * q2 - wy * q1);
+        yDot[W] = alx;
+        yDot[W + 1] = aly;
+        yDot[W + 2] = alz;
     }
 
     /** Throws {@link NumericalFailure} naming the first non-finite component of a derivative. */
@@ -453,9 +462,6 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         double gy = g[1];
         double gz = g[2];
         double fn = m * (-vHv - (nx * gx + ny * gy + nz * gz)) - (nx * fax + ny * fay + nz * faz);
-        slip[0] = 0;
-        slip[1] = 0;
-        slip[2] = 0;
         ctx.setRolling(fn, wx, wy, wz, couples);
         double tx = tApp[0];
         double ty = tApp[1];
@@ -505,23 +511,13 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         double ix = tx - r * (ny * fz - nz * fy);
         double iy = ty - r * (nz * fx - nx * fz);
         double iz = tz - r * (nx * fy - ny * fx);
-        double q0 = y[Q];
-        double q1 = y[Q + 1];
-        double q2 = y[Q + 2];
-        double q3 = y[Q + 3];
         yDot[C] = vx;
         yDot[C + 1] = vy;
         yDot[C + 2] = vz;
         yDot[V] = gx + (fn * nx + fx + fax) * im;
         yDot[V + 1] = gy + (fn * ny + fy + fay) * im;
         yDot[V + 2] = gz + (fn * nz + fz + faz) * im;
-        yDot[Q] = -0.5 * (wx * q1 + wy * q2 + wz * q3);
-        yDot[Q + 1] = 0.5 * (q0 * wx + wy * q3 - wz * q2);
-        yDot[Q + 2] = 0.5 * (q0 * wy + wz * q1 - wx * q3);
-        yDot[Q + 3] = 0.5 * (q0 * wz + wx * q2 - wy * q1);
-        yDot[W] = ix * invInertia;
-        yDot[W + 1] = iy * invInertia;
-        yDot[W + 2] = iz * invInertia;
+        rotationRates(y, wx, wy, wz, ix * invInertia, iy * invInertia, iz * invInertia, yDot);
         yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = 0;
         yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
         yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
