@@ -77,6 +77,8 @@ final class Engine {
     private int sampleIndex;
     private double sampleT0;
     private double[] lastGoodY;
+    /** The last accepted step end, kept as the integrator's state until its full form is needed. */
+    private ODEStateAndDerivative lastGoodState;
     private double lastGoodT;
     private Phase lastGoodPhase;
 
@@ -91,7 +93,7 @@ final class Engine {
     // event values of the last few states asked about
     private static final int CACHE = 4;
     /** Event values per state: see {@link #evaluateEventValues}. */
-    private static final int VALUES = 13;
+    private static final int VALUES = 14;
     private final double[][] cacheY = new double[CACHE][Dynamics.DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
@@ -235,7 +237,7 @@ final class Engine {
                     end = integrateSegment();
                 } catch (ProjectionRestart e) {
                     t = lastGoodT;
-                    y = projected(t, lastGoodY);
+                    y = projected(t, lastGoodY());
                     continue;
                 } catch (Dynamics.BudgetExhausted e) {
                     // lift the budget so that the end-of-run bookkeeping (end state, samples) can evaluate
@@ -302,18 +304,29 @@ final class Engine {
         return result;
     }
 
+    /** The full state of the last accepted step end (expanded on first use, in the segment's layout). */
+    private double[] lastGoodY() {
+        if (lastGoodY == null) {
+            lastGoodY = fullState(lastGoodState);
+            lastGoodState = null;
+        }
+        return lastGoodY;
+    }
+
     private void restoreLastGood() {
         t = lastGoodT;
-        y = lastGoodY.clone();
+        y = lastGoodY().clone();
         phase = lastGoodPhase;
     }
 
     private BallState lastGoodState() {
         dyn.budget = Long.MAX_VALUE;
-        return toState(lastGoodT, lastGoodY, lastGoodPhase);
+        return toState(lastGoodT, lastGoodY(), lastGoodPhase);
     }
 
     private ODEStateAndDerivative integrateSegment() {
+        // the last good state must take its full form before the layout changes
+        lastGoodY();
         dyn.phase = phase;
         int[] layout = layouts[phase.ordinal()];
         if (layout == null) {
@@ -456,7 +469,8 @@ final class Engine {
      * {@code |v| + r|ω|}, 4 patch margin, 5 centre distance, 6 Hessian norm, 7 {@code 1 − r κ₁},
      * 8–10 normal, 11 constraint drift (the larger of distance residual / (threshold · r) and
      * quaternion-norm drift / its threshold; contact phases only, 0 in flight), 12 acceleration
-     * measure {@code |a| + r|α|} (contact phases only). {@code ys} is a full-layout state.
+     * measure {@code |a| + r|α|} (contact phases only), 13 kinetic energy (J). {@code ys} is a
+     * full-layout state.
      */
     private void evaluateEventValues(double ts, double[] ys, double[] v) {
         dyn.phase = phase;
@@ -498,6 +512,14 @@ final class Engine {
         v[9] = n[1];
         v[10] = n[2];
         v[11] = phase.inContact() ? drift(ys, v[5]) : 0.0;
+        double[] vel = phase.inContact() ? dyn.vel : null;
+        double vx = vel != null ? vel[0] : ys[Dynamics.V];
+        double vy = vel != null ? vel[1] : ys[Dynamics.V + 1];
+        double vz = vel != null ? vel[2] : ys[Dynamics.V + 2];
+        double wx = ys[Dynamics.W];
+        double wy = ys[Dynamics.W + 1];
+        double wz = ys[Dynamics.W + 2];
+        v[13] = 0.5 * m * (vx * vx + vy * vy + vz * vz) + 0.5 * inertia * (wx * wx + wy * wy + wz * wz);
     }
 
     /**
@@ -1124,8 +1146,9 @@ final class Engine {
                 return;
             }
             steps++;
-            double[] yc = fullState(cur);
             double tc = cur.getTime();
+            boolean observed = observer != RunObserver.NONE;
+            double[] yc = observed || phase == Phase.SLIDING ? fullState(cur) : null;
             double interval = set.sampleInterval();
             if (interval > 0) {
                 while (true) {
@@ -1137,7 +1160,7 @@ final class Engine {
                     ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
                     emitSample(ts, fullState(si), phase, false);
                 }
-            } else if (tc < endTime) {
+            } else if (tc < endTime && observed) {
                 emitSample(tc, yc, phase, false);
             }
             if (phase == Phase.SLIDING) {
@@ -1150,13 +1173,16 @@ final class Engine {
                     }
                 }
             }
-            double ke = kinetic(yc);
-            maxKinetic = Math.max(maxKinetic, ke);
-            double dx = yc[0] - c0[0];
-            double dy = yc[1] - c0[1];
-            double dz = yc[2] - c0[2];
+            // kinetic energy and centre from the event cache (every layout starts with the centre)
+            g(Trigger.LIFT_OFF, cur);
+            double[] yk = cacheY[lastStateSlot];
+            maxKinetic = Math.max(maxKinetic, lastValues[13]);
+            double dx = yk[0] - c0[0];
+            double dy = yk[1] - c0[1];
+            double dz = yk[2] - c0[2];
             extent = Math.max(extent, Math.sqrt(dx * dx + dy * dy + dz * dz));
             lastGoodY = yc;
+            lastGoodState = yc == null ? cur : null;
             lastGoodT = tc;
             lastGoodPhase = phase;
             if (phase.inContact()) {
