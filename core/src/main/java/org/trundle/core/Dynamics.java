@@ -107,8 +107,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     /** Integrated layout of the current segment: compact index to full index (identity by default). */
     private int[] map = IDENTITY;
     private boolean derived;
-    /** Full state of the segment start: the values of the components left out of the layout. */
-    private final double[] segmentStart = new double[DIM];
+    /**
+     * Full-layout workspace of the right-hand side: the components left out of the layout keep
+     * their segment-start values here, the others are overwritten at every evaluation.
+     */
     private final double[] full = new double[DIM];
     private final double[] fullDot = new double[DIM];
     private static final int[] IDENTITY = java.util.stream.IntStream.range(0, DIM).toArray();
@@ -233,10 +235,9 @@ final class Dynamics implements OrdinaryDifferentialEquation {
      */
     double[] beginSegment(int[] layout, double[] start) {
         map = layout;
-        derived = layout.length < 4 || layout[V] != V;
+        derived = layout[V] != V;
         compactDot = new double[layout.length];
         lastStageTime = Double.NaN;
-        System.arraycopy(start, 0, segmentStart, 0, DIM);
         System.arraycopy(start, 0, full, 0, DIM);
         return compress(start);
     }
@@ -256,7 +257,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
             System.arraycopy(compact, 0, out, 0, DIM);
             return out;
         }
-        System.arraycopy(segmentStart, 0, out, 0, DIM);
+        System.arraycopy(full, 0, out, 0, DIM);
         for (int i = 0; i < map.length; i++) {
             out[map[i]] = compact[i];
         }

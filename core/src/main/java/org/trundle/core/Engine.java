@@ -71,7 +71,6 @@ final class Engine {
     private double[] c0;
     private double impactLoss;
     private long steps;
-    private long projections;
     /** Step size (s) the next segment starts with, after a projection restart; 0: Hipparchus' own estimate. */
     private double restartStep;
     private int sampleIndex;
@@ -348,8 +347,8 @@ final class Engine {
         checkCount[0] = 0;
         checkCount[1] = 0;
         if (phase.inContact()) {
-            // the drift detector watches for its function falling through zero: a segment must
-            // start below the thresholds, or it would never fire
+            // a switch may hand over a drifted state: start each contact segment well within the
+            // projection thresholds (the step observer checks them only at step ends)
             surface.query(t, centreOf(y), dyn.geo);
             if (drift(y, dyn.geo.distance) >= 0.5) {
                 y = projected(t, y);
@@ -516,10 +515,7 @@ final class Engine {
         double vx = vel != null ? vel[0] : ys[Dynamics.V];
         double vy = vel != null ? vel[1] : ys[Dynamics.V + 1];
         double vz = vel != null ? vel[2] : ys[Dynamics.V + 2];
-        double wx = ys[Dynamics.W];
-        double wy = ys[Dynamics.W + 1];
-        double wz = ys[Dynamics.W + 2];
-        v[13] = 0.5 * m * (vx * vx + vy * vy + vz * vz) + 0.5 * inertia * (wx * wx + wy * wy + wz * wz);
+        v[13] = kinetic(vx, vy, vz, ys);
     }
 
     /**
@@ -1037,8 +1033,12 @@ final class Engine {
     }
 
     private double kinetic(double[] ys) {
-        double v2 = ys[Dynamics.V] * ys[Dynamics.V] + ys[Dynamics.V + 1] * ys[Dynamics.V + 1]
-            + ys[Dynamics.V + 2] * ys[Dynamics.V + 2];
+        return kinetic(ys[Dynamics.V], ys[Dynamics.V + 1], ys[Dynamics.V + 2], ys);
+    }
+
+    /** Kinetic energy (J) with centre velocity (vx, vy, vz) and the spin of {@code ys}. */
+    private double kinetic(double vx, double vy, double vz, double[] ys) {
+        double v2 = vx * vx + vy * vy + vz * vz;
         double w2 = ys[Dynamics.W] * ys[Dynamics.W] + ys[Dynamics.W + 1] * ys[Dynamics.W + 1]
             + ys[Dynamics.W + 2] * ys[Dynamics.W + 2];
         return 0.5 * m * v2 + 0.5 * inertia * w2;
@@ -1262,7 +1262,6 @@ final class Engine {
                 p[Dynamics.V + i] -= vn * n[i];
             }
         }
-        projections++;
         return p;
     }
 }
