@@ -71,7 +71,7 @@ record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean random,
         Map<String, String> labels = new LinkedHashMap<>();
         s.optionalSection("labels").ifPresent(l -> {
             for (String k : l.keys()) {
-                labels.put(k, l.text(k, k));
+                labels.put(snakeEdge(k), l.text(k, k));
             }
         });
         ParameterSpace space;
@@ -183,5 +183,28 @@ record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean random,
             b.append(i == 0 ? "" : ", ").append(p.names().get(i)).append(" = ").append(p.value(i));
         }
         return b.append(')').toString();
+    }
+
+    /**
+     * The outcome name for a {@code labels} key, accepting the camelCase edge names of earlier
+     * versions as aliases (scenario keys are a contract): {@code exit_angleFrom} becomes
+     * {@code exit_angle_from}, {@code exit_polarTo} {@code exit_polar_to}; other keys are unchanged.
+     *
+     * @param key a labels key
+     * @return the outcome it names
+     */
+    static String snakeEdge(String key) {
+        if (!key.startsWith("exit_")) {
+            return key;
+        }
+        StringBuilder b = new StringBuilder(key.length() + 4);
+        for (char c : key.toCharArray()) {
+            if (Character.isUpperCase(c)) {
+                b.append('_').append(Character.toLowerCase(c));
+            } else {
+                b.append(c);
+            }
+        }
+        return b.toString();
     }
 }
