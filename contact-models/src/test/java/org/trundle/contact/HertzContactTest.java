@@ -240,6 +240,18 @@ class HertzContactTest {
         assertEquals(1.5277 + 0.6023 * Math.log(ratio), bigK, 0.01 * bigK);
     }
 
+    /** The README's example compiles and gives a patch long round the bore with a positive pressure. */
+    @Test
+    void readmeExample() {
+        HertzPatch patch = HertzContact.solve(10.0, 0.004, Material.STEEL,
+            1 / 0.015, Vector3D.PLUS_J, 0.0, Vector3D.PLUS_I, Material.ACRYLIC);  // 8 mm ball, 30 mm acrylic bore, 10 N
+        double pMax = patch.maxPressure();
+        double a = patch.semiMajor();
+        double b = patch.semiMinor();
+        assertTrue(pMax > 0 && a > b, patch.toString());
+        assertEquals(Vector3D.PLUS_J, patch.majorAxis());
+    }
+
     /** The circular limit is continuous: curvatures 1e-9 apart give the circle to ~1e-9. */
     @Test
     void circularLimitIsContinuous() {
