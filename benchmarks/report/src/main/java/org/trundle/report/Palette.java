@@ -5,12 +5,10 @@ import java.awt.Color;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.style.Styler;
-import org.knowm.xchart.style.markers.Marker;
-import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.trundle.core.EventKind;
 import org.trundle.core.Phase;
 
-/** Colours, markers and the common chart style of the runner's pictures. */
+/** Colours, event marks and the common chart style of the pictures (colours and shapes of our own). */
 final class Palette {
     private Palette() {
     }
@@ -29,22 +27,61 @@ final class Palette {
         }
     }
 
-    static Marker eventMarker(EventKind k) {
+    /**
+     * Draws an event's mark: a shape per kind (exit: diamond; slip: down triangle; stick: up triangle;
+     * lift-off: square; impact: ring; rest: cross), centred at {@code (x, y)} px.
+     *
+     * @param g where to draw
+     * @param k the kind
+     * @param x centre column (px)
+     * @param y centre row (px)
+     */
+    static void drawEvent(java.awt.Graphics2D g, EventKind k, double x, double y) {
+        double r = 5;
+        java.awt.geom.Path2D.Double p = new java.awt.geom.Path2D.Double();
         switch (k) {
             case EXIT:
-                return SeriesMarkers.DIAMOND;
+                p.moveTo(x, y - r - 1);
+                p.lineTo(x + r + 1, y);
+                p.lineTo(x, y + r + 1);
+                p.lineTo(x - r - 1, y);
+                p.closePath();
+                break;
             case SLIP:
-                return SeriesMarkers.TRIANGLE_DOWN;
+                p.moveTo(x - r, y - r * 0.7);
+                p.lineTo(x + r, y - r * 0.7);
+                p.lineTo(x, y + r);
+                p.closePath();
+                break;
             case STICK:
-                return SeriesMarkers.TRIANGLE_UP;
+                p.moveTo(x - r, y + r * 0.7);
+                p.lineTo(x + r, y + r * 0.7);
+                p.lineTo(x, y - r);
+                p.closePath();
+                break;
             case LIFT_OFF:
-                return SeriesMarkers.SQUARE;
+                p.append(new java.awt.geom.Rectangle2D.Double(x - r * 0.8, y - r * 0.8, 1.6 * r, 1.6 * r), false);
+                break;
             case IMPACT:
-                return SeriesMarkers.CIRCLE;
+                p.append(new java.awt.geom.Ellipse2D.Double(x - r, y - r, 2 * r, 2 * r), false);
+                break;
             case REST:
             default:
-                return SeriesMarkers.CROSS;
+                p.moveTo(x - r, y - r);
+                p.lineTo(x + r, y + r);
+                p.moveTo(x - r, y + r);
+                p.lineTo(x + r, y - r);
+                break;
         }
+        java.awt.Stroke keep = g.getStroke();
+        g.setStroke(new java.awt.BasicStroke(1.6f));
+        if (k != EventKind.REST && k != EventKind.IMPACT) {
+            g.setColor(new Color(255, 255, 255, 200));
+            g.fill(p);
+        }
+        g.setColor(eventColor(k));
+        g.draw(p);
+        g.setStroke(keep);
     }
 
     static Color eventColor(EventKind k) {
@@ -52,10 +89,30 @@ final class Palette {
             case EXIT:
                 return new Color(0xb0, 0x10, 0x30);
             case IMPACT:
-                return new Color(0x40, 0x20, 0x70);
+                return new Color(0x5a, 0x2a, 0x90);
+            case SLIP:
+                return new Color(0xa0, 0x4a, 0x00);
+            case STICK:
+                return new Color(0x10, 0x40, 0x80);
             default:
                 return new Color(0x20, 0x20, 0x20);
         }
+    }
+
+    /**
+     * @param a world axis 0, 1, 2 (x, y, z)
+     * @return its colour in the 3-D views
+     */
+    static Color axis(int a) {
+        return a == 0 ? new Color(0xb8, 0x3b, 0x2e) : a == 1 ? new Color(0x2e, 0x8a, 0x44) : new Color(0x2c, 0x55, 0xb0);
+    }
+
+    /**
+     * @param c a colour
+     * @return its 0xRRGGBB value
+     */
+    static int rgb(Color c) {
+        return c.getRGB() & 0xffffff;
     }
 
     /** Outcome colours of the regime map (fixed per outcome name, others in turn). */

@@ -12,22 +12,27 @@ import java.util.List;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.BallState;
-import org.trundle.core.Phase;
+import org.trundle.core.ContactGeometry;
 import org.trundle.core.RunEvent;
 import org.trundle.core.RunObserver;
 import org.trundle.core.RunResult;
 import org.trundle.core.Sample;
+import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
 
 /**
- * Streams a run's samples to {@code trajectory.csv} and keeps what the picture and the summary
- * need. The file is opened when the library reports the validated start, so nothing is written for
+ * Streams a run's samples to {@code trajectory.csv} and keeps what the pictures and the summary
+ * need: a bounded {@link SampleDigest} of the samples (memory fixed in run length) and the events. The file is opened when the library reports the validated start, so nothing is written for
  * a start the library refuses.
  *
  * <p>Columns: {@code t,x,y,z,vx,vy,vz,wx,wy,wz,phase,normal_force,friction_force} (s, m, m/s, rad/s,
  * phase label, N, N: the magnitude of the tangential contact force), then {@code qw,qx,qy,qz} (the
  * body-to-world orientation quaternion), {@code contact_x,contact_y,contact_z} (contact point, m,
  * empty in flight), {@code speed} (m/s), {@code height} (m, along {@code −g}) and {@code event} (the
- * kinds of the events at that instant joined by {@code ;}, plus {@code start} and {@code end}).
+ * kinds of the events at that instant joined by {@code ;}, plus {@code start} and {@code end}),
+ * then, when a surface is given, its natural coordinates at the closest point to the centre, one
+ * column each, named {@code wall_<name>_<unit>} ({@link #header()}; empty where the surface has no
+ * closest point).
  * Rows come at the sample interval and at every event instant; numbers are written exactly
  * (shortest decimal that reads back to the same double).
  */
@@ -46,21 +51,23 @@ public final class RunRecorder implements RunObserver {
     private final Path csvFile;
     private final Vector3D up;
     private final IoAction beforeStart;
+    private final Surface surface;
+    private final List<SurfaceCoordinate> coordinates;
+    private final ContactGeometry work = new ContactGeometry();
+    private final double[] coordinateValues;
+    private final double[] point = new double[3];
     private BufferedWriter csv;
     private String pendingRow;
     private double pendingTime;
     private String pendingLabel = "";
+    private String pendingCoordinates = "";
     private boolean first = true;
 
-    final DoubleSeries time = new DoubleSeries();
-    final DoubleSeries height = new DoubleSeries();
-    final DoubleSeries speed = new DoubleSeries();
-    final DoubleSeries normalForce = new DoubleSeries();
-    final DoubleSeries frictionForce = new DoubleSeries();
-    final DoubleSeries x = new DoubleSeries();
-    final DoubleSeries y = new DoubleSeries();
-    final DoubleSeries z = new DoubleSeries();
-    final List<Phase> phases = new ArrayList<>();
+    /** Most buckets the picture's digest keeps (between half and all of them are in use). */
+    public static final int DIGEST_CAPACITY = 4096;
+
+    final SampleDigest digest = new SampleDigest(DIGEST_CAPACITY);
+    private final double[] digestRow = SampleDigest.newRow();
     final List<RunEvent> events = new ArrayList<>();
     BallState start;
     RunResult result;
@@ -72,9 +79,66 @@ public final class RunRecorder implements RunObserver {
      * @param beforeStart called when the library reports the validated start, before any output
      */
     public RunRecorder(Path csvFile, Vector3D up, IoAction beforeStart) {
+        this(csvFile, up, beforeStart, null);
+    }
+
+    /**
+     * @param csvFile where to write the trajectory, or null for none
+     * @param up unit "up" direction for the height column (opposite to gravity)
+     * @param beforeStart called when the library reports the validated start, before any output
+     * @param surface the run's surface, whose natural coordinates become extra columns, or null for none
+     */
+    public RunRecorder(Path csvFile, Vector3D up, IoAction beforeStart, Surface surface) {
         this.csvFile = csvFile;
         this.up = up;
         this.beforeStart = beforeStart;
+        this.surface = surface;
+        this.coordinates = surface == null ? List.of() : surface.coordinates();
+        this.coordinateValues = new double[coordinates.size()];
+        work.scratch = surface == null ? null : surface.newScratch();
+    }
+
+    /**
+     * The header of trajectory.csv: {@link #HEADER}, {@link #EXTRA}, then one column per natural
+     * coordinate of the surface, named {@code wall_<name>_<unit>} (for instance
+     * {@code wall_axial_m, wall_azimuth_rad}).
+     *
+     * @return the header line, without the line end
+     */
+    public String header() {
+        StringBuilder b = new StringBuilder(HEADER).append(',').append(EXTRA);
+        for (SurfaceCoordinate c : coordinates) {
+            b.append(',').append(columnName(c));
+        }
+        return b.toString();
+    }
+
+    /**
+     * @param c a surface coordinate
+     * @return its trajectory.csv column name, {@code wall_<name>_<unit>}
+     */
+    public static String columnName(SurfaceCoordinate c) {
+        return "wall_" + c.name() + "_" + c.unit();
+    }
+
+    /**
+     * @return axis titles with units for the first two surface coordinates (for the unrolled wall),
+     *     or null when the surface names fewer than two
+     */
+    public String[] coordinateTitles() {
+        if (coordinates.size() < 2) {
+            return null;
+        }
+        return new String[] {title(coordinates.get(0)), title(coordinates.get(1))};
+    }
+
+    /** @return the surface's natural coordinates written as the last columns (possibly none) */
+    public List<SurfaceCoordinate> coordinates() {
+        return coordinates;
+    }
+
+    private static String title(SurfaceCoordinate c) {
+        return c.name().replace('_', ' ') + " (" + c.unit() + ")";
     }
 
     @Override
@@ -85,7 +149,7 @@ public final class RunRecorder implements RunObserver {
                 beforeStart.run();
                 Files.createDirectories(csvFile.getParent());
                 csv = Files.newBufferedWriter(csvFile, StandardCharsets.UTF_8);
-                csv.write(HEADER + "," + EXTRA + "\n");
+                csv.write(header() + "\n");
             } catch (IOException e) {
                 throw new UncheckedIOException("cannot write " + csvFile, e);
             }
@@ -95,26 +159,52 @@ public final class RunRecorder implements RunObserver {
     @Override
     public void sample(Sample s) {
         BallState st = s.state();
+        surfaceCoordinates(s);
         String row = row(s);
         if (pendingRow != null && pendingTime == s.time() && pendingRow.equals(row)) {
             return; // the same instant reported twice (an event that also ends the run)
         }
         flushPending();
         pendingRow = row;
+        pendingCoordinates = coordinateCells();
         pendingTime = s.time();
         pendingLabel = first ? "start" : "";
         first = false;
         last = st;
+        digest(s);
+    }
+
+    private void digest(Sample s) {
+        BallState st = s.state();
         Vector3D c = st.centre();
-        time.add(s.time());
-        height.add(c.dotProduct(up));
-        speed.add(st.velocity().getNorm());
-        normalForce.add(s.normalForce());
-        frictionForce.add(s.frictionForce().getNorm());
-        x.add(c.getX());
-        y.add(c.getY());
-        z.add(c.getZ());
-        phases.add(st.phase());
+        Rotation q = st.orientation();
+        double[] r = digestRow;
+        r[SampleDigest.Column.T.ordinal()] = s.time();
+        r[SampleDigest.Column.X.ordinal()] = c.getX();
+        r[SampleDigest.Column.Y.ordinal()] = c.getY();
+        r[SampleDigest.Column.Z.ordinal()] = c.getZ();
+        r[SampleDigest.Column.HEIGHT.ordinal()] = c.dotProduct(up);
+        r[SampleDigest.Column.SPEED.ordinal()] = st.velocity().getNorm();
+        r[SampleDigest.Column.NORMAL.ordinal()] = s.normalForce();
+        r[SampleDigest.Column.FRICTION.ordinal()] = s.frictionForce().getNorm();
+        r[SampleDigest.Column.QW.ordinal()] = q.getQ0();
+        r[SampleDigest.Column.QX.ordinal()] = q.getQ1();
+        r[SampleDigest.Column.QY.ordinal()] = q.getQ2();
+        r[SampleDigest.Column.QZ.ordinal()] = q.getQ3();
+        r[SampleDigest.Column.PHASE.ordinal()] = st.phase().ordinal();
+        r[SampleDigest.Column.U.ordinal()] = coordinateValues.length > 1 ? coordinateValues[0] : Double.NaN;
+        r[SampleDigest.Column.V.ordinal()] = coordinateValues.length > 1 ? coordinateValues[1] : Double.NaN;
+        digest.add(r);
+    }
+
+    /** @return the bounded reduction of the samples recorded so far (for pictures) */
+    public SampleDigest digest() {
+        return digest;
+    }
+
+    /** @return the run's result, or null when the library reported none */
+    public RunResult result() {
+        return result;
     }
 
     @Override
@@ -162,6 +252,22 @@ public final class RunRecorder implements RunObserver {
         }
     }
 
+    /** Fills {@link #coordinateValues} for the sample (NaN where the surface has no closest point). */
+    private void surfaceCoordinates(Sample s) {
+        if (coordinateValues.length == 0) {
+            return;
+        }
+        Vector3D c = s.state().centre();
+        point[0] = c.getX();
+        point[1] = c.getY();
+        point[2] = c.getZ();
+        try {
+            surface.coordinatesAt(s.time(), point, work, coordinateValues);
+        } catch (RuntimeException e) {
+            java.util.Arrays.fill(coordinateValues, Double.NaN);
+        }
+    }
+
     private void flushPending() {
         if (pendingRow == null) {
             return;
@@ -170,12 +276,27 @@ public final class RunRecorder implements RunObserver {
             try {
                 csv.write(pendingRow);
                 csv.write(pendingLabel);
+                csv.write(pendingCoordinates);
                 csv.write('\n');
             } catch (IOException e) {
                 throw new UncheckedIOException("cannot write " + csvFile, e);
             }
         }
         pendingRow = null;
+    }
+
+    private String coordinateCells() {
+        if (coordinateValues.length == 0) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder(24 * coordinateValues.length);
+        for (double v : coordinateValues) {
+            b.append(',');
+            if (Double.isFinite(v)) {
+                b.append(v);
+            }
+        }
+        return b.toString();
     }
 
     private String row(Sample s) {

@@ -14,6 +14,7 @@ import org.trundle.core.RunEvent;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
 import org.trundle.core.SimulationException;
+import org.trundle.report.HtmlReport;
 import org.trundle.report.RunPlot;
 import org.trundle.report.RunRecorder;
 import org.trundle.scenario.Scenario;
@@ -22,8 +23,8 @@ import org.trundle.scenario.ScenarioFiles;
 
 /**
  * Runs one scenario and writes its outputs into the {@code --out} folder: {@code summary.json}
- * ({@link SummaryJson}), {@code trajectory.csv} ({@link RunRecorder}) and {@code run.png}
- * ({@link RunPlot}); then prints a short text summary.
+ * ({@link SummaryJson}), {@code trajectory.csv} ({@link RunRecorder}), {@code run.png}
+ * ({@link RunPlot}) and {@code report.html} ({@link HtmlReport}); then prints a short text summary.
  */
 final class RunOutputs {
     /**
@@ -62,7 +63,8 @@ final class RunOutputs {
     static Report execute(Scenario sc, Path dir, boolean demo) throws IOException {
         Simulation sim = sc.simulation();
         Vector3D up = up(sc);
-        RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo));
+        RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo),
+            sim.surface());
         RunResult result = null;
         String failure = null;
         try {
@@ -87,7 +89,9 @@ final class RunOutputs {
             summary = SummaryJson.failed(sc.description(), failure, rec.lastState() != null ? rec.lastState() : rec.validatedStart(), rec.events());
         }
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
-        RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
+        RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up, sim.ball().radius());
+        HtmlReport.writeRun(dir.resolve("report.html"), title[0], title[1], rec, result, sim.surface(), up,
+            sim.ball().radius());
         return new Report(result, failure, rec);
     }
 
@@ -164,7 +168,8 @@ final class RunOutputs {
                 r.maxNormalForce(), r.maxDistanceError()));
         }
         out.println("Files:    " + String.join(", ", List.of(dir.resolve("summary.json").toString(),
-            dir.resolve("trajectory.csv").toString(), dir.resolve("run.png").toString())));
+            dir.resolve("trajectory.csv").toString(), dir.resolve("run.png").toString(),
+            dir.resolve("report.html").toString())));
         out.flush();
     }
 

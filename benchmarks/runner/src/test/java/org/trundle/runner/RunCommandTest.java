@@ -68,11 +68,19 @@ class RunCommandTest {
         assertTrue(impactLoss > 0.03 * G * h * 0.75, "at least the normal restitution loss (1 - e^2) m g h");
 
         List<String> rows = Files.readAllLines(out.resolve("trajectory.csv"));
-        assertEquals(RunRecorder.HEADER + "," + RunRecorder.EXTRA, rows.get(0));
+        assertEquals(RunRecorder.HEADER + "," + RunRecorder.EXTRA + ",wall_u_m,wall_v_m", rows.get(0),
+            "the plane's two in-plane coordinates (m) close each row");
         assertEquals(1 + 31 + 2, rows.size(), "samples every 0.01 s from 0 to 0.3 s plus the two impact instants");
-        long impacts = rows.stream().filter(l -> l.endsWith(",impact")).count();
+        long impacts = rows.stream().filter(l -> l.contains(",impact,")).count();
         assertEquals(2, impacts);
-        String[] hit = rows.stream().filter(l -> l.endsWith(",impact")).findFirst().orElseThrow().split(",", -1);
+        String[] hit = rows.stream().filter(l -> l.contains(",impact,")).findFirst().orElseThrow().split(",", -1);
+        // the foot of the centre on the floor z = 0 through the origin is (x, y, 0): its in-plane offsets
+        // from the origin along any orthonormal pair satisfy u^2 + v^2 = x^2 + y^2 (plane geometry)
+        double u = Double.parseDouble(hit[23]);
+        double v = Double.parseDouble(hit[24]);
+        double x = Double.parseDouble(hit[1]);
+        double y = Double.parseDouble(hit[2]);
+        assertEquals(Math.hypot(x, y), Math.hypot(u, v), 1e-15);
         assertEquals(t1, Double.parseDouble(hit[0]), 1e-10);
         assertEquals(0.01, Double.parseDouble(hit[3]), 1e-12, "centre at one radius above the floor");
         assertEquals("flight", hit[10]);
