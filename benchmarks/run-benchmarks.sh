@@ -5,12 +5,12 @@
 # count with LONG_RUN_STEPS; set REBUILD=1 to rebuild the jar first.
 set -euo pipefail
 cd "$(dirname "$0")/.."
-JAR=benchmarks/target/trundle.jar
+JAR=benchmarks/jmh/target/trundle-benchmarks.jar
 OUT=benchmarks/results
 JMH_OPTS=${JMH_OPTS:-"-f 1 -wi 3 -i 6 -w 1s -r 2s"}
 LONG_RUN_STEPS=${LONG_RUN_STEPS:-10000000}
 if [ ! -f "$JAR" ] || [ "${REBUILD:-0}" = 1 ]; then
-  mvn -B -q package -pl benchmarks -am -DskipTests -Dmaven.javadoc.skip=true
+  mvn -B -q package -pl benchmarks/jmh -am -DskipTests -Dmaven.javadoc.skip=true
 fi
 mkdir -p "$OUT"
 START_LOAD=$(cut -d" " -f1-3 /proc/loadavg 2>/dev/null || echo unknown)

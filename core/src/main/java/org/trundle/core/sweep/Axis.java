@@ -7,7 +7,8 @@ import java.util.Arrays;
  *
  * <p>Immutable.
  */
-public final class Axis {
+public final class Axis implements java.io.Serializable {
+    private static final long serialVersionUID = 1L;
     private final String name;
     private final double[] values;
 

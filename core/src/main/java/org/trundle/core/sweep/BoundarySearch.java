@@ -80,7 +80,7 @@ public final class BoundarySearch {
         List<String> names = List.of(parameter);
         int[] count = {0};
         Function<Double, SweepRun> runAt = x -> {
-            SweepRun r = Sweep.runOne(factory, new ParameterPoint(count[0]++, names, new double[] {x}), () -> false);
+            SweepRun r = Sweep.runPoint(factory, new ParameterPoint(count[0]++, names, new double[] {x}), () -> false);
             return r;
         };
         double a = low;

@@ -11,7 +11,8 @@ import java.util.List;
  *
  * <p>Immutable and thread-safe.
  */
-public final class Grid implements ParameterSpace {
+public final class Grid implements ParameterSpace, java.io.Serializable {
+    private static final long serialVersionUID = 1L;
     private final List<Axis> axes;
     private final List<String> names;
     private final int size;

@@ -9,7 +9,8 @@ import java.util.Locale;
  *
  * <p>Immutable.
  */
-public final class ParameterPoint {
+public final class ParameterPoint implements java.io.Serializable {
+    private static final long serialVersionUID = 1L;
     private final int index;
     private final List<String> names;
     private final double[] values;

@@ -1,22 +1,31 @@
 package org.trundle.core.sweep;
 
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
-import java.util.SplittableRandom;
 
 /**
- * {@code count} points drawn uniformly and independently from a box of parameter ranges, with a
- * seeded {@link SplittableRandom}: the same seed gives the same points, in the same order, on every
- * machine and thread count. Each point is drawn parameter by parameter, in range order, from one
- * generator started at the seed, so point {@code i} is the i-th draw of the sequence.
+ * {@code count} points drawn uniformly and independently from a box of parameter ranges with a
+ * counter-based generator ({@link CounterRandom}, SplitMix64): point {@code i} comes from the seed
+ * and {@code i} alone, so the same seed gives the same points on every machine, thread count and
+ * executor, and no point is drawn before it is asked for. With {@code m} ranges of non-zero width,
+ * parameter {@code j} of point {@code i} is draw {@code i·m + r_j} of the generator ({@code r_j} the
+ * rank of range {@code j} among those of non-zero width; a range with {@code low == high} gives
+ * {@code low} and takes no draw). This numbering is that of one sequential
+ * {@link java.util.SplittableRandom} started at the seed and drawn point by point, parameter by
+ * parameter, so the points equal those of earlier versions, which drew them that way.
  *
- * <p>Immutable and thread-safe (the points are drawn once, at construction).
+ * <p>Immutable and thread-safe; holds the ranges only (memory independent of {@code count}).
  */
-public final class RandomSample implements ParameterSpace {
+public final class RandomSample implements ParameterSpace, Serializable {
+    private static final long serialVersionUID = 1L;
     private final List<String> names;
-    private final long seed;
-    private final double[][] points;
+    private final CounterRandom random;
+    private final List<Range> ranges;
+    private final int[] draw;
+    private final int drawsPerPoint;
+    private final int count;
 
     /**
      * One parameter's range for sampling: values uniform in {@code [low, high)}
@@ -26,11 +35,11 @@ public final class RandomSample implements ParameterSpace {
      * @param low lower bound
      * @param high upper bound, {@code ≥ low}
      */
-    public record Range(String name, double low, double high) {
+    public record Range(String name, double low, double high) implements Serializable {
         /** Checks the bounds. */
         public Range {
             ParameterPoint.checkName(name);
-            if (!Double.isFinite(low) || !Double.isFinite(high) || high < low) {
+            if (!Double.isFinite(low) || !Double.isFinite(high) || high < low || !Double.isFinite(high - low)) {
                 throw new IllegalArgumentException("range of " + name + " must be finite with low <= high, got low = "
                     + low + ", high = " + high);
             }
@@ -56,15 +65,15 @@ public final class RandomSample implements ParameterSpace {
             n.add(r.name());
         }
         this.names = List.copyOf(n);
-        this.seed = seed;
-        SplittableRandom rnd = new SplittableRandom(seed);
-        points = new double[count][ranges.size()];
-        for (int i = 0; i < count; i++) {
-            for (int j = 0; j < ranges.size(); j++) {
-                Range r = ranges.get(j);
-                points[i][j] = r.high() > r.low() ? rnd.nextDouble(r.low(), r.high()) : r.low();
-            }
+        this.ranges = List.copyOf(ranges);
+        this.random = new CounterRandom(seed);
+        this.count = count;
+        this.draw = new int[ranges.size()];
+        int m = 0;
+        for (int j = 0; j < ranges.size(); j++) {
+            draw[j] = ranges.get(j).high() > ranges.get(j).low() ? m++ : -1;
         }
+        this.drawsPerPoint = m;
     }
 
     /**
@@ -79,7 +88,12 @@ public final class RandomSample implements ParameterSpace {
 
     /** @return the seed */
     public long seed() {
-        return seed;
+        return random.seed();
+    }
+
+    /** @return the ranges, in parameter order */
+    public List<Range> ranges() {
+        return ranges;
     }
 
     @Override
@@ -89,14 +103,20 @@ public final class RandomSample implements ParameterSpace {
 
     @Override
     public int size() {
-        return points.length;
+        return count;
     }
 
     @Override
     public ParameterPoint point(int index) {
-        if (index < 0 || index >= points.length) {
-            throw new IndexOutOfBoundsException("sample point " + index + " outside 0.." + (points.length - 1));
+        if (index < 0 || index >= count) {
+            throw new IndexOutOfBoundsException("sample point " + index + " outside 0.." + (count - 1));
         }
-        return new ParameterPoint(index, names, points[index]);
+        double[] v = new double[draw.length];
+        long first = (long) index * drawsPerPoint;
+        for (int j = 0; j < v.length; j++) {
+            Range r = ranges.get(j);
+            v[j] = draw[j] < 0 ? r.low() : random.uniform(first + draw[j], r.low(), r.high());
+        }
+        return new ParameterPoint(index, names, v);
     }
 }

@@ -2,8 +2,7 @@ package org.trundle.core.sweep;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.locks.Condition;
-import java.util.concurrent.locks.ReentrantLock;
+import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 
 import org.trundle.core.RunObserver;
@@ -35,6 +34,10 @@ import org.trundle.core.Sample;
  * <p><b>Cancellation.</b> After {@link Cancellation#cancel()} no new run starts and runs in flight
  * are abandoned at their next output sample; the consumer has then received a prefix of the index
  * order, and {@link SweepSummary#cancelled()} is true.
+ *
+ * <p><b>Executors.</b> A sweep runs on a {@link ThreadedExecutor} ({@link #executor()}); the same
+ * space with a {@link PointTask} that reduces each run to a flat row can run on any
+ * {@link SweepExecutor} (the {@code trundle-spark} module runs it on Apache Spark).
  *
  * <p>Immutable: {@code threads}, {@code progress} and {@code cancellation} return copies.
  */
@@ -112,7 +115,23 @@ public final class Sweep {
         if (factory == null || consumer == null) {
             throw new IllegalArgumentException("factory and consumer must be given, got " + factory + ", " + consumer);
         }
-        return new Execution(factory).execute(consumer);
+        PointTask<SweepRun> task = new PointTask<>() {
+            @Override
+            public SweepRun run(ParameterPoint point, BooleanSupplier abandoned) {
+                return runPoint(factory, point, abandoned);
+            }
+
+            @Override
+            public boolean failed(SweepRun row) {
+                return !row.isSuccess();
+            }
+        };
+        return executor().execute(space, task, consumer);
+    }
+
+    /** @return the local executor this sweep runs on (its threads, progress and cancellation) */
+    public ThreadedExecutor executor() {
+        return new ThreadedExecutor(threads, progress, cancellation);
     }
 
     /**
@@ -128,10 +147,17 @@ public final class Sweep {
     }
 
     /**
-     * Runs one point on the calling thread; failures are recorded, never thrown (except
-     * {@link Error}s and the private abandonment signal).
+     * Runs one point on the calling thread and records the outcome: the building block of a
+     * {@link PointTask} that reduces a run to a row where it runs. Failures (the factory threw or
+     * returned nothing, the run threw) are recorded with their reason, never thrown; {@link Error}s
+     * are thrown.
+     *
+     * @param factory builds the point's run
+     * @param p the point
+     * @param abandoned polled at every output sample; when it turns true the run is given up
+     * @return the outcome, or {@code null} when the run was abandoned
      */
-    static SweepRun runOne(RunFactory factory, ParameterPoint p, java.util.function.BooleanSupplier abandon) {
+    public static SweepRun runPoint(RunFactory factory, ParameterPoint p, BooleanSupplier abandoned) {
         RunSpec spec;
         try {
             spec = factory.create(p);
@@ -144,7 +170,7 @@ public final class Sweep {
         RunObserver watch = new RunObserver() {
             @Override
             public void sample(Sample s) {
-                if (abandon.getAsBoolean()) {
+                if (abandoned.getAsBoolean()) {
                     throw new Abandoned();
                 }
             }
@@ -153,164 +179,18 @@ public final class Sweep {
             RunResult r = spec.simulation().run(spec.start(), spec.duration(), watch);
             return SweepRun.succeeded(p, r);
         } catch (Abandoned e) {
-            throw e;
+            return null;
         } catch (RuntimeException e) {
             return SweepRun.failed(p, SweepRun.reasonOf(e));
         }
     }
 
     /** Thrown through a run to abandon it on cancellation. */
-    static final class Abandoned extends RuntimeException {
+    private static final class Abandoned extends RuntimeException {
         private static final long serialVersionUID = 1L;
 
         Abandoned() {
             super("run abandoned on cancellation", null, false, false);
-        }
-    }
-
-    /** One execution: the shared window of results between workers and the consumer. */
-    private final class Execution {
-        private final RunFactory factory;
-        private final int total = space.size();
-        private final int window = Math.max(4 * threads, 1);
-        private final SweepRun[] slots = new SweepRun[window];
-        private final ReentrantLock lock = new ReentrantLock();
-        private final Condition changed = lock.newCondition();
-        private int nextClaim;
-        private int delivered;
-        private volatile boolean stop;
-        private Throwable error;
-
-        Execution(RunFactory factory) {
-            this.factory = factory;
-        }
-
-        SweepSummary execute(Consumer<SweepRun> consumer) {
-            List<Thread> workers = new ArrayList<>();
-            for (int i = 0; i < Math.min(threads, Math.max(total, 1)); i++) {
-                Thread t = new Thread(this::work, "trundle-sweep-" + i);
-                t.setDaemon(true);
-                workers.add(t);
-                t.start();
-            }
-            int failed = 0;
-            try {
-                while (delivered < total) {
-                    SweepRun next;
-                    lock.lock();
-                    try {
-                        while ((next = slots[delivered % window]) == null && error == null
-                            && !cancellation.isCancelled()) {
-                            changed.awaitUninterruptibly();
-                        }
-                        if (error != null) {
-                            break;
-                        }
-                        if (next == null) {
-                            break; // cancelled with no further contiguous result
-                        }
-                        slots[delivered % window] = null;
-                    } finally {
-                        lock.unlock();
-                    }
-                    if (cancellation.isCancelled()) {
-                        break;
-                    }
-                    consumer.accept(next);
-                    if (!next.isSuccess()) {
-                        failed++;
-                    }
-                    lock.lock();
-                    try {
-                        delivered++;
-                        changed.signalAll();
-                    } finally {
-                        lock.unlock();
-                    }
-                    progress.update(delivered, total);
-                }
-            } finally {
-                lock.lock();
-                try {
-                    stop = true;
-                    changed.signalAll();
-                } finally {
-                    lock.unlock();
-                }
-                for (Thread t : workers) {
-                    joinQuietly(t);
-                }
-            }
-            if (error != null) {
-                if (error instanceof Error) {
-                    throw (Error) error;
-                }
-                throw (RuntimeException) error;
-            }
-            return new SweepSummary(total, delivered, failed, delivered < total);
-        }
-
-        private void work() {
-            while (true) {
-                int i;
-                lock.lock();
-                try {
-                    while (!stop && !cancellation.isCancelled() && nextClaim < total && nextClaim >= delivered + window) {
-                        changed.awaitUninterruptibly();
-                    }
-                    if (stop || cancellation.isCancelled() || nextClaim >= total || error != null) {
-                        changed.signalAll();
-                        return;
-                    }
-                    i = nextClaim++;
-                } finally {
-                    lock.unlock();
-                }
-                SweepRun r;
-                try {
-                    r = runOne(factory, space.point(i), () -> stop || cancellation.isCancelled());
-                } catch (Abandoned e) {
-                    lock.lock();
-                    try {
-                        changed.signalAll();
-                    } finally {
-                        lock.unlock();
-                    }
-                    return;
-                } catch (RuntimeException | Error e) {
-                    lock.lock();
-                    try {
-                        if (error == null) {
-                            error = e;
-                        }
-                        changed.signalAll();
-                    } finally {
-                        lock.unlock();
-                    }
-                    return;
-                }
-                lock.lock();
-                try {
-                    slots[i % window] = r;
-                    changed.signalAll();
-                } finally {
-                    lock.unlock();
-                }
-            }
-        }
-    }
-
-    private static void joinQuietly(Thread t) {
-        boolean interrupted = false;
-        while (t.isAlive()) {
-            try {
-                t.join();
-            } catch (InterruptedException e) {
-                interrupted = true;
-            }
-        }
-        if (interrupted) {
-            Thread.currentThread().interrupt();
         }
     }
 }

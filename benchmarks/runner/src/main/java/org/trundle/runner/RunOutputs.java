@@ -1,0 +1,174 @@
+package org.trundle.runner;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.EndReason;
+import org.trundle.core.PhaseSpan;
+import org.trundle.core.RunEvent;
+import org.trundle.core.RunResult;
+import org.trundle.core.Simulation;
+import org.trundle.core.SimulationException;
+import org.trundle.report.RunPlot;
+import org.trundle.report.RunRecorder;
+import org.trundle.scenario.Scenario;
+import org.trundle.scenario.ScenarioException;
+import org.trundle.scenario.ScenarioFiles;
+
+/**
+ * Runs one scenario and writes its outputs into the {@code --out} folder: {@code summary.json}
+ * ({@link SummaryJson}), {@code trajectory.csv} ({@link RunRecorder}) and {@code run.png}
+ * ({@link RunPlot}); then prints a short text summary.
+ */
+final class RunOutputs {
+    /**
+     * What a run produced.
+     *
+     * @param result the result, or null when the library stopped the run with an exception
+     * @param failure why it failed, or null
+     * @param recorder the recorded samples and events
+     */
+    record Report(RunResult result, String failure, RunRecorder recorder) {
+        /** @return 0, or {@link Main#FAILED} when the run failed (exception or geometry stop) */
+        int exitCode() {
+            return result == null || result.endReason() == EndReason.GEOMETRY ? Main.FAILED : 0;
+        }
+    }
+
+    private RunOutputs() {
+    }
+
+    /**
+     * @param sc the scenario
+     * @return unit "up": opposite to gravity, or +z without gravity
+     */
+    static Vector3D up(Scenario sc) {
+        Vector3D g = sc.simulation().gravity();
+        return g.getNorm() > 0 ? g.normalize().negate() : Vector3D.PLUS_K;
+    }
+
+    /**
+     * @param sc the scenario, checked
+     * @param dir the output folder, checked
+     * @param demo whether this is the demo (its folder may be replaced)
+     * @return the run's outcome
+     * @throws IOException when an output cannot be written
+     */
+    static Report execute(Scenario sc, Path dir, boolean demo) throws IOException {
+        Simulation sim = sc.simulation();
+        Vector3D up = up(sc);
+        RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo));
+        RunResult result = null;
+        String failure = null;
+        try {
+            result = sim.run(sc.start(), sc.duration(), rec);
+        } catch (SimulationException e) {
+            rec.close();
+            failure = e.getMessage();
+        } catch (IllegalArgumentException e) {
+            if (rec.validatedStart() == null) {
+                throw new ScenarioException("start: " + e.getMessage());
+            }
+            throw e;
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
+        }
+        ObjectNode summary;
+        String[] title = {headline(sc), result != null ? "Result: " + endText(result) : "Result: the run failed: "
+            + failure};
+        if (result != null) {
+            summary = SummaryJson.of(sc.description(), result);
+        } else {
+            summary = SummaryJson.failed(sc.description(), failure, rec.lastState() != null ? rec.lastState() : rec.validatedStart(), rec.events());
+        }
+        ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
+        RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
+        return new Report(result, failure, rec);
+    }
+
+    /** The first sentence of the description (or "Trundle run"), for the picture's title. */
+    static String headline(Scenario sc) {
+        String d = sc.description().isEmpty() ? "Trundle run" : sc.description();
+        int cut = d.indexOf(". ");
+        return cut > 0 ? d.substring(0, cut + 1) : d;
+    }
+
+    static String endText(RunResult r) {
+        switch (r.endReason()) {
+            case EXIT: {
+                RunEvent e = r.exit().orElseThrow();
+                return String.format(Locale.ROOT, "left through edge \"%s\" at t = %.4f s, speed %.4f m/s", e.edge(),
+                    e.time(), e.before().velocity().getNorm());
+            }
+            case DURATION:
+                return String.format(Locale.ROOT, "still %s at the end, t = %.4f s", r.endState().phase().label(),
+                    r.endState().time());
+            case REST:
+                return String.format(Locale.ROOT, "came to rest at t = %.4f s", r.endState().time());
+            case BUDGET:
+                return String.format(Locale.ROOT, "stopped at t = %.4f s: %s", r.endState().time(), r.message());
+            case GEOMETRY:
+            default:
+                return String.format(Locale.ROOT, "failed at t = %.4f s: %s", r.endState().time(), r.message());
+        }
+    }
+
+    /**
+     * Prints the text summary of a run.
+     *
+     * @param out where to print
+     * @param sc the scenario
+     * @param o the outcome
+     * @param dir the output folder
+     */
+    static void print(PrintWriter out, Scenario sc, Report o, Path dir) {
+        if (!sc.description().isEmpty()) {
+            out.println("Scenario: " + sc.description());
+        }
+        if (o.result() == null) {
+            out.println("Result:   the run failed: " + o.failure());
+        } else {
+            RunResult r = o.result();
+            out.println("Result:   " + SummaryJson.endReason(r.endReason()) + " - " + endText(r));
+            RunEvent exit = r.exit().orElse(null);
+            if (exit != null) {
+                out.println("Exit:     position " + vec(exit.before().centre()) + " m, velocity "
+                    + vec(exit.before().velocity()) + " m/s, spin " + vec(exit.before().spin()) + " rad/s");
+            } else if (r.endReason() != EndReason.EXIT) {
+                out.println("End:      position " + vec(r.endState().centre()) + " m, velocity "
+                    + vec(r.endState().velocity()) + " m/s");
+            }
+            StringBuilder ev = new StringBuilder();
+            for (RunEvent e : r.events()) {
+                ev.append(ev.length() == 0 ? "" : ", ").append(e.kind().label())
+                    .append(String.format(Locale.ROOT, " %.4f s", e.time()));
+            }
+            out.println("Events:   " + (ev.length() == 0 ? "none" : ev));
+            StringBuilder ph = new StringBuilder();
+            for (PhaseSpan p : r.phases()) {
+                ph.append(ph.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT,
+                    "%s %.4f-%.4f s (centre path %.4f m)", p.phase().label(), p.start(), p.end(), p.centrePath()));
+            }
+            out.println("Phases:   " + ph);
+            out.println(String.format(Locale.ROOT,
+                "Energy:   initial %.6e J, final %.6e J, friction loss %.3e J, impact loss %.3e J,"
+                    + " budget residual %.1e of scale", r.energy().initial(), r.energy().fin(),
+                r.energy().slidingFrictionLoss(), r.energy().impactLoss(), r.energy().relativeResidual()));
+            out.println(String.format(Locale.ROOT,
+                "Checks:   largest normal force %.4g N, largest distance error %.2e m",
+                r.maxNormalForce(), r.maxDistanceError()));
+        }
+        out.println("Files:    " + String.join(", ", List.of(dir.resolve("summary.json").toString(),
+            dir.resolve("trajectory.csv").toString(), dir.resolve("run.png").toString())));
+        out.flush();
+    }
+
+    static String vec(Vector3D v) {
+        return String.format(Locale.ROOT, "[%.5g, %.5g, %.5g]", v.getX(), v.getY(), v.getZ());
+    }
+}

@@ -1,0 +1,105 @@
+package org.trundle.scenario;
+
+import java.util.List;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Ball;
+import org.trundle.core.BallState;
+import org.trundle.core.ContactLaw;
+import org.trundle.core.Simulation;
+import org.trundle.core.SolverSettings;
+import org.trundle.core.Surface;
+import org.trundle.core.sweep.RunSpec;
+
+/**
+ * A parsed and checked scenario: everything needed for one run, built and validated (the ball fits
+ * the surface, the start is consistent), plus the document it came from (sweeps vary it).
+ *
+ * <p>Top-level keys: {@code description} (free text), {@code ball}, {@code surface},
+ * {@code contact}, {@code gravity} (m/s², default {@code [0, 0, -9.81]}), {@code start},
+ * {@code run}, {@code sweep} (read by {@link SweepSpec}).
+ *
+ * @param document the JSON document
+ * @param description free text, may be empty
+ * @param simulation the configured simulation
+ * @param start the start state
+ * @param duration simulated time (s)
+ */
+public record Scenario(JsonNode document, String description, Simulation simulation, BallState start, double duration) {
+    /** Keys allowed at the top level. */
+    static final List<String> TOP_KEYS = List.of("description", "ball", "surface", "contact", "gravity", "start", "run",
+        "sweep");
+
+    /** Default gravity (m/s²): standard gravity, downward along z. */
+    static final Vector3D DEFAULT_GRAVITY = new Vector3D(0, 0, -9.81);
+
+    /**
+     * @param doc a parsed JSON document
+     * @return the checked scenario
+     * @throws ScenarioException naming the key and value of the first problem
+     */
+    public static Scenario parse(JsonNode doc) {
+        Section root = Section.root(doc);
+        root.allow(TOP_KEYS.toArray(new String[0]));
+        String description = root.text("description", "");
+        Ball ball = ball(root.section("ball"));
+        Surface surface = SurfaceFactory.create(root.section("surface"));
+        ContactLaw law = ContactFactory.create(root.section("contact"));
+        Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
+        StartSpec startSpec = StartSpec.parse(root.section("start"));
+        Section run = root.section("run");
+        run.allow("duration", "tolerance", "sample_interval", "stop_at_exit", "max_check_interval");
+        double duration = run.positive("duration", "s");
+        SolverSettings set = SolverSettings.defaults();
+        if (run.has("tolerance")) {
+            double tol = run.positive("tolerance", "");
+            if (!(tol < 1e-2)) {
+                throw new ScenarioException("run.tolerance must be below 1e-2, got " + tol);
+            }
+            set = set.withTolerance(tol);
+        }
+        set = set.withSampleInterval(run.nonNegative("sample_interval", "s", 0.0));
+        set = set.withStopAtExit(run.bool("stop_at_exit", true));
+        if (run.has("max_check_interval")) {
+            set = set.withMaxCheckInterval(run.positive("max_check_interval", "s"));
+        }
+        Simulation sim;
+        try {
+            sim = Simulation.builder().ball(ball).surface(surface).law(law).gravity(gravity).settings(set).build();
+        } catch (IllegalArgumentException e) {
+            String m = e.getMessage();
+            throw new ScenarioException((m.contains("does not fit") ? "ball does not fit: " : "") + m);
+        }
+        BallState start = startSpec.state(sim);
+        return new Scenario(doc, description, sim, start, duration);
+    }
+
+    private static Ball ball(Section s) {
+        s.allow("radius", "mass", "inertia");
+        double r = s.positive("radius", "m");
+        double m = s.positive("mass", "kg");
+        double k = Ball.SOLID;
+        if (s.has("inertia")) {
+            JsonNode n = s.raw("inertia");
+            if (n.isTextual()) {
+                k = s.choice("inertia", List.of("solid", "hollow")).equals("solid") ? Ball.SOLID : Ball.THIN_SHELL;
+            } else if (n.isNumber()) {
+                k = s.number("inertia", "");
+                if (!(k > 0 && k <= Ball.THIN_SHELL + 1e-15)) {
+                    throw new ScenarioException("ball.inertia must be \"solid\", \"hollow\" or a factor k = I/(m r^2) in"
+                        + " (0, 2/3], got " + k);
+                }
+            } else {
+                throw new ScenarioException("ball.inertia must be \"solid\", \"hollow\" or a number k = I/(m r^2), got "
+                    + Section.kind(n));
+            }
+        }
+        return Ball.of(r, m, k);
+    }
+
+    /** @return this scenario as a run of the core sweep API */
+    public RunSpec runSpec() {
+        return new RunSpec(simulation, start, duration);
+    }
+}

@@ -1,0 +1,137 @@
+package org.trundle.scenario;
+
+import java.util.Locale;
+import java.util.Optional;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.BallState;
+import org.trundle.core.ContactGeometry;
+import org.trundle.core.Phase;
+import org.trundle.core.Simulation;
+import org.trundle.core.SurfaceDomainException;
+
+/**
+ * The {@code start} section: where the ball starts and how it moves.
+ *
+ * <ul>
+ *   <li>{@code position}: centre (m);</li>
+ *   <li>{@code velocity}: centre velocity (m/s), or instead {@code speed} (m/s) with
+ *       {@code elevation_deg} and {@code azimuth_deg} (degrees):
+ *       {@code v = speed·(cos el cos az, cos el sin az, sin el)} in world axes;</li>
+ *   <li>{@code spin}: {@code "rolling"} (the no-slip spin {@code ω = n × v / r} for the velocity,
+ *       zero about the normal; a contact start only) or a vector (rad/s);</li>
+ *   <li>{@code on_surface} (optional): {@code true} requires a contact start (an error if the
+ *       ball is not on the surface), {@code false} forces a flight start; left out, a centre at
+ *       distance r from the surface (within the contact tolerance) is a contact start and any
+ *       other a flight start.</li>
+ * </ul>
+ *
+ * @param position centre (m)
+ * @param velocity velocity (m/s)
+ * @param spin spin vector (rad/s), or null for "rolling"
+ * @param onSurface the forced choice, empty for automatic
+ */
+record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<Boolean> onSurface) {
+
+    static StartSpec parse(Section s) {
+        s.allow("position", "velocity", "speed", "elevation_deg", "azimuth_deg", "spin", "on_surface");
+        Vector3D pos = s.vector("position", "m");
+        Vector3D vel;
+        boolean polar = s.has("speed") || s.has("elevation_deg") || s.has("azimuth_deg");
+        if (polar && s.has("velocity")) {
+            throw new ScenarioException("give either " + s.where("velocity") + " or " + s.where("speed") + " with "
+                + s.where("elevation_deg") + " and " + s.where("azimuth_deg") + ", not both");
+        }
+        if (polar) {
+            double speed = s.nonNegative("speed", "m/s", Double.NaN);
+            if (!s.has("speed")) {
+                s.number("speed", "m/s");
+            }
+            double el = Math.toRadians(s.number("elevation_deg", "degrees"));
+            double az = Math.toRadians(s.number("azimuth_deg", "degrees"));
+            vel = new Vector3D(speed * Math.cos(el) * Math.cos(az), speed * Math.cos(el) * Math.sin(az),
+                speed * Math.sin(el));
+        } else {
+            if (!s.has("velocity")) {
+                throw new ScenarioException("missing key " + s.where("velocity") + " (a vector [x, y, z] (m/s)), or give "
+                    + s.where("speed") + ", " + s.where("elevation_deg") + " and " + s.where("azimuth_deg"));
+            }
+            vel = s.vector("velocity", "m/s");
+        }
+        Vector3D spin = null;
+        if (!s.has("spin")) {
+            throw new ScenarioException("missing key " + s.where("spin") + " (\"rolling\" or a vector [x, y, z] (rad/s))");
+        }
+        if (s.raw("spin").isTextual()) {
+            s.choice("spin", java.util.List.of("rolling"));
+        } else if (s.raw("spin").isArray()) {
+            spin = s.vector("spin", "rad/s");
+        } else {
+            throw new ScenarioException(s.where("spin") + " must be \"rolling\" or a vector [x, y, z] (rad/s), got "
+                + Section.kind(s.raw("spin")));
+        }
+        return new StartSpec(pos, vel, spin, s.optionalBool("on_surface"));
+    }
+
+    /**
+     * The start state for a simulation, checked: a contact start must lie on the surface inside the
+     * patch and move along it; no start may penetrate the surface.
+     *
+     * @param sim the simulation
+     * @return the start state
+     */
+    BallState state(Simulation sim) {
+        ContactGeometry g;
+        try {
+            g = sim.geometryAt(position, 0.0);
+        } catch (SurfaceDomainException e) {
+            throw new ScenarioException("start.position: " + e.getMessage());
+        }
+        double r = sim.ball().radius();
+        double gap = g.distance - r;
+        double tol = sim.settings().contactTolerance() * r;
+        if (gap < -tol) {
+            throw new ScenarioException(String.format(Locale.ROOT,
+                "start.position: the ball penetrates the surface: its centre is %s m from it, less than the ball radius"
+                    + " %s m", g.distance, r));
+        }
+        boolean touching = Math.abs(gap) <= tol;
+        boolean contact = onSurface.orElse(touching);
+        if (contact && !touching) {
+            throw new ScenarioException(String.format(Locale.ROOT,
+                "start.position: contact start not on the surface: the centre is %s m from the surface, a contact"
+                    + " start needs the ball radius %s m (within %s m); leave out start.on_surface for a flight start",
+                g.distance, r, tol));
+        }
+        if (!contact) {
+            if (spin == null) {
+                throw new ScenarioException(String.format(Locale.ROOT,
+                    "start.spin: \"rolling\" needs a contact start, but the ball starts in flight (its centre is %s m"
+                        + " from the surface, the ball radius is %s m); give the spin as a vector (rad/s)",
+                    g.distance, r));
+            }
+            return BallState.flying(position, velocity, spin);
+        }
+        if (g.patchMargin < 0) {
+            throw new ScenarioException(String.format(Locale.ROOT,
+                "start.position: contact start not on the surface: the contact point lies %s m outside the patch,"
+                    + " beyond edge \"%s\"", -g.patchMargin, sim.surface().edgeName(g.edge)));
+        }
+        Vector3D n = new Vector3D(g.normal[0], g.normal[1], g.normal[2]);
+        double vn = velocity.dotProduct(n);
+        double w = spin == null ? velocity.subtract(vn, n).getNorm() : r * spin.getNorm();
+        double speedScale = Math.max(Math.max(velocity.getNorm(), w),
+            Math.max(Math.sqrt(sim.gravity().getNorm() * r), 1e-3));
+        double tolSpeed = sim.settings().contactTolerance() * speedScale;
+        if (Math.abs(vn) > tolSpeed) {
+            throw new ScenarioException(String.format(Locale.ROOT,
+                "start.velocity: a contact start must move along the surface, but the velocity has a normal component"
+                    + " %s m/s (tolerance %s m/s)", vn, tolSpeed));
+        }
+        if (spin == null) {
+            return sim.rollingStart(position, velocity);
+        }
+        return BallState.of(0.0, position, velocity, org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY, spin,
+            Phase.SLIDING);
+    }
+}

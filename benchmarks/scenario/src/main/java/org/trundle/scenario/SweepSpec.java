@@ -1,0 +1,187 @@
+package org.trundle.scenario;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import org.trundle.core.sweep.Axis;
+import org.trundle.core.sweep.Grid;
+import org.trundle.core.sweep.ParameterPoint;
+import org.trundle.core.sweep.ParameterSpace;
+import org.trundle.core.sweep.RandomSample;
+
+/**
+ * The {@code sweep} section of a scenario: which values vary and how.
+ *
+ * <pre>{@code
+ * "sweep": {
+ *   "start.speed":         {"from": 0.2, "to": 1.6, "count": 30},
+ *   "start.elevation_deg": [-70, -50, -30, -10],
+ *   "random": {"samples": 500, "seed": 7},
+ *   "labels": {"exit_to": "comes back out (top)"}
+ * }
+ * }</pre>
+ * Every key with a dot is a parameter: the dotted path of a numeric value of the scenario
+ * ({@link ScenarioPath}), given a range {@code {"from", "to", "count"}} (count ≥ 1 evenly spaced
+ * values, both ends included) or a list of values. Without {@code random} the parameters span a
+ * grid (the first one varies slowest); with {@code random} ({@code samples} ≥ 1, integer
+ * {@code seed}) each run draws every parameter uniformly from its {@code {"from", "to"}} range.
+ * {@code labels} (optional) names outcomes in the regime map's legend.
+ *
+ * @param paths the parameter paths, in file order
+ * @param space the points
+ * @param random whether the points are a random sample
+ * @param labels legend labels by outcome
+ */
+public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean random, Map<String, String> labels) {
+
+    /** Largest number of runs a sweep may ask for. */
+    static final int MAX_RUNS = 10_000_000;
+
+    /**
+     * @param doc the scenario document
+     * @return the sweep, checked against the document
+     */
+    public static SweepSpec parse(JsonNode doc) {
+        Section root = Section.root(doc);
+        if (!root.has("sweep")) {
+            throw new ScenarioException("the scenario has no sweep section; add \"sweep\": {\"start.speed\":"
+                + " {\"from\": 0.1, \"to\": 1.0, \"count\": 10}} or use the run command");
+        }
+        Section s = root.section("sweep");
+        List<ScenarioPath> paths = new ArrayList<>();
+        List<String> names = new ArrayList<>();
+        for (String k : s.keys()) {
+            if (k.contains(".")) {
+                ScenarioPath p = ScenarioPath.parse(k);
+                p.check(doc);
+                paths.add(p);
+                names.add(k);
+            } else if (!k.equals("random") && !k.equals("labels")) {
+                throw new ScenarioException("unknown key sweep." + k + "; valid keys in sweep: a dotted parameter path"
+                    + " (like start.velocity[2]), random, labels");
+            }
+        }
+        if (paths.isEmpty()) {
+            throw new ScenarioException("the sweep section names no parameter; add one like \"start.velocity[2]\":"
+                + " {\"from\": -1.0, \"to\": 0.0, \"count\": 40}");
+        }
+        Map<String, String> labels = new LinkedHashMap<>();
+        s.optionalSection("labels").ifPresent(l -> {
+            for (String k : l.keys()) {
+                labels.put(k, l.text(k, k));
+            }
+        });
+        ParameterSpace space;
+        boolean random = s.has("random");
+        if (random) {
+            Section r = s.section("random");
+            r.allow("samples", "seed");
+            int samples = integer(r, "samples", 1, MAX_RUNS);
+            long seed = (long) integerValue(r, "seed");
+            List<RandomSample.Range> ranges = new ArrayList<>();
+            for (String k : names) {
+                Section p = s.section(k);
+                p.allow("from", "to");
+                double from = p.number("from", "");
+                double to = p.number("to", "");
+                if (!(from <= to)) {
+                    throw new ScenarioException(p.where("from") + " must not exceed " + p.where("to") + ", got from = "
+                        + from + ", to = " + to);
+                }
+                ranges.add(new RandomSample.Range(k, from, to));
+            }
+            space = RandomSample.of(seed, samples, ranges);
+        } else {
+            List<Axis> axes = new ArrayList<>();
+            long total = 1;
+            for (String k : names) {
+                JsonNode n = s.raw(k);
+                Axis a;
+                if (n.isArray()) {
+                    if (n.size() == 0) {
+                        throw new ScenarioException("sweep." + k + " must list at least one value, got an empty list");
+                    }
+                    double[] v = new double[n.size()];
+                    for (int i = 0; i < v.length; i++) {
+                        if (!n.get(i).isNumber()) {
+                            throw new ScenarioException("sweep." + k + "[" + i + "] must be a number, got "
+                                + Section.kind(n.get(i)));
+                        }
+                        v[i] = n.get(i).doubleValue();
+                    }
+                    a = Axis.of(k, v);
+                } else if (n.isObject()) {
+                    Section p = s.section(k);
+                    p.allow("from", "to", "count");
+                    a = Axis.linear(k, p.number("from", ""), p.number("to", ""), integer(p, "count", 1, MAX_RUNS));
+                } else {
+                    throw new ScenarioException("sweep." + k + " must be a range {\"from\": .., \"to\": .., \"count\": ..}"
+                        + " or a list of values, got " + Section.kind(n));
+                }
+                total *= a.size();
+                if (total > MAX_RUNS) {
+                    throw new ScenarioException("the sweep grid has more than " + MAX_RUNS + " runs");
+                }
+                axes.add(a);
+            }
+            space = Grid.of(axes);
+        }
+        return new SweepSpec(List.copyOf(paths), space, random, Map.copyOf(labels));
+    }
+
+    private static double integerValue(Section s, String key) {
+        double v = s.number(key, "");
+        JsonNode n = s.raw(key);
+        if (!n.canConvertToExactIntegral() || !n.canConvertToLong()) {
+            throw new ScenarioException(s.where(key) + " must be a whole number, got " + n.asText());
+        }
+        return v;
+    }
+
+    private static int integer(Section s, String key, int lo, int hi) {
+        double v = integerValue(s, key);
+        if (v < lo || v > hi) {
+            throw new ScenarioException(s.where(key) + " must lie in [" + lo + ", " + hi + "], got " + (long) v);
+        }
+        return (int) v;
+    }
+
+    /**
+     * @param doc the base document
+     * @param p a point of the space
+     * @return the document with the point's values set
+     */
+    JsonNode apply(JsonNode doc, ParameterPoint p) {
+        JsonNode d = doc;
+        for (int i = 0; i < paths.size(); i++) {
+            d = paths.get(i).set(d, p.value(i));
+        }
+        return d;
+    }
+
+    /**
+     * The scenario of one point, or a {@link ScenarioException} naming the point.
+     *
+     * @param doc the base document
+     * @param p the point
+     * @return the scenario
+     */
+    public Scenario scenario(JsonNode doc, ParameterPoint p) {
+        try {
+            return Scenario.parse(apply(doc, p));
+        } catch (ScenarioException e) {
+            throw new ScenarioException("sweep point " + p.index() + " " + describe(p) + ": " + e.getMessage());
+        }
+    }
+
+    static String describe(ParameterPoint p) {
+        StringBuilder b = new StringBuilder("(");
+        for (int i = 0; i < p.size(); i++) {
+            b.append(i == 0 ? "" : ", ").append(p.names().get(i)).append(" = ").append(p.value(i));
+        }
+        return b.append(')').toString();
+    }
+}
