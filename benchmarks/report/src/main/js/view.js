@@ -371,7 +371,8 @@ function sweepView(data, root) {
   const svg = el('svg:svg', { viewBox: `0 0 ${w} ${h}`, width: w, height: h, id: 'map' }, left);
   const P = data.points;
   const xs = P.map((p) => p.x), ys = P.map((p) => p.y);
-  const sx = niceScale(Math.min(...xs), Math.max(...xs), 8), sy = niceScale(Math.min(...ys), Math.max(...ys), 8);
+  const padded = (v) => { const lo = Math.min(...v), hi = Math.max(...v), p = 0.05 * (hi - lo); return niceScale(lo - p, hi + p, 8); };
+  const sx = padded(xs), sy = padded(ys);
   const pw = w - m.l - m.r, ph = h - m.t - m.b;
   const X = (v) => m.l + (v - sx.lo) / (sx.hi - sx.lo || 1) * pw;
   const Y = (v) => m.t + ph - (v - sy.lo) / (sy.hi - sy.lo || 1) * ph;

@@ -15,7 +15,7 @@ import org.trundle.scenario.ScenarioPath;
 
 /** {@code trundle run SCENARIO.json --out DIR}: one run of a scenario. */
 @Command(name = "run", mixinStandardHelpOptions = true,
-    description = {"Runs one scenario and writes summary.json, trajectory.csv and run.png into --out.",
+    description = {"Runs one scenario and writes summary.json, trajectory.csv, run.png and report.html into --out.",
         "A sweep section, if any, is ignored (use the sweep command)."})
 final class RunCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "SCENARIO.json", description = "scenario file (JSON; SI units)")

@@ -24,13 +24,15 @@ import org.trundle.scenario.Scenario;
 import org.trundle.scenario.ScenarioFiles;
 import org.trundle.scenario.SweepSpec;
 import org.trundle.report.RegimeMap;
+import org.trundle.report.SweepReport;
 import org.trundle.scenario.Outcome;
 import org.trundle.scenario.ScenarioException;
 
 /** {@code trundle sweep SCENARIO.json --out DIR}: the runs of a scenario's sweep section. */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
     description = {"Runs the scenario once per point of its sweep section, in parallel, and writes sweep.csv (one row"
-        + " per run, the same rows on any thread count) and regime-map.png into --out."})
+        + " per run, the same rows on any thread count), regime-map.png and sweep-report.html (the regime map in a"
+        + " browser: click a point for its run's row) into --out."})
 final class SweepCommand implements Callable<Integer>, Main.ErrStream {
     @Parameters(index = "0", paramLabel = "SCENARIO.json", description = "scenario file with a sweep section (JSON; SI)")
     Path scenario;
@@ -87,6 +89,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         OutputFolder.create(out, false);
         Map<String, Integer> counts = new TreeMap<>();
         RegimeMap map = new RegimeMap(space.names(), sw.labels());
+        SweepReport html = new SweepReport(space.names(), sw.labels(), SweepTable.header(space.names()));
         SweepSummary summary;
         ProgressBar bar = noProgress ? null : new ProgressBarBuilder().setTaskName("sweep").setInitialMax(space.size())
             .setStyle(ProgressBarStyle.ASCII).setUpdateIntervalMillis(250)
@@ -101,6 +104,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
                 .run(p -> sw.scenario(doc, p).runSpec(), run -> {
                     table.accept(run);
                     map.add(run);
+                    html.add(run, SweepTable.row(run));
                     counts.merge(Outcome.of(run), 1, Integer::sum);
                 });
         } finally {
@@ -113,8 +117,10 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         if (drawn) {
             map.write(out.resolve("regime-map.png"), title, sw.random());
         }
-        PrintWriter w = spec.commandLine().getOut();
         Scenario base = Scenario.parse(doc);
+        html.write(out.resolve("sweep-report.html"), title, (base.description().isEmpty() ? "" : base.description() + " ")
+            + "Click a point to see its run's row of sweep.csv.");
+        PrintWriter w = spec.commandLine().getOut();
         if (!base.description().isEmpty()) {
             w.println("Scenario: " + base.description());
         }
@@ -123,7 +129,8 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         StringBuilder b = new StringBuilder();
         counts.forEach((k, v) -> b.append(b.length() == 0 ? "" : ", ").append(k).append(' ').append(v));
         w.println("Outcomes: " + b);
-        w.println("Files:    " + out.resolve("sweep.csv") + (drawn ? ", " + out.resolve("regime-map.png")
+        w.println("Files:    " + out.resolve("sweep.csv") + ", " + out.resolve("sweep-report.html")
+            + (drawn ? ", " + out.resolve("regime-map.png")
             : " (the regime map is drawn for one or two parameters only)"));
         w.flush();
         return 0;

@@ -19,6 +19,7 @@ import javax.imageio.ImageIO;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.openqa.selenium.By;
@@ -38,7 +39,8 @@ import org.openqa.selenium.support.ui.WebDriverWait;
  * chromedriver; no browser or driver is ever downloaded): the page loads with no console error,
  * the 3-D canvas draws (a share of its pixels differ from the background), moving the time slider
  * moves the ball, and a screenshot is saved under {@code target/report-screenshots}. Runs on the
- * demo, a funnel and a helical chute scenario (invented data, {@code benchmarks/scenarios}).
+ * demo, a funnel and a helical chute scenario (invented data, {@code benchmarks/scenarios}); and the
+ * sweep report of a 3 × 3 grid, whose points open their run's row.
  *
  * <p>Without Chromium the test is skipped with a message saying how to install it
  * ({@code apt-get install -y chromium chromium-driver}); {@code .ci/run} installs it when missing.
@@ -121,6 +123,32 @@ class ReportInBrowserTest {
         Files.write(shot, driver.getScreenshotAs(OutputType.BYTES));
         System.out.println("report screenshot: " + shot.toAbsolutePath());
 
+        assertNoConsoleErrors();
+    }
+
+    @Test
+    void sweepReportPointsOpenTheirRuns() throws IOException {
+        Path dir = OUT.resolve("sweep");
+        Files.createDirectories(OUT);
+        Path f = Cli.write(OUT, "sweep.json", SweepCommandTest.sweepOf("{\"start.speed\": {\"from\": 0.4, \"to\": 1.2,"
+            + " \"count\": 3}, \"start.elevation_deg\": {\"from\": -40, \"to\": -10, \"count\": 3}}"));
+        Cli.Result r = Cli.run("sweep", f.toString(), "--out", dir.toString(), "--force", "--no-progress");
+        assertEquals(0, r.code(), r.out() + r.err());
+        driver.get(dir.resolve("sweep-report.html").toAbsolutePath().toUri().toString());
+        new WebDriverWait(driver, Duration.ofSeconds(60)).until(d -> "true".equals(
+            ((JavascriptExecutor) d).executeScript("return document.body.dataset.ready")));
+        assertEquals(9, driver.findElements(By.cssSelector("#map circle.pt")).size(), "one point per run");
+        driver.findElement(By.id("first-point")).click();
+        String details = driver.findElement(By.id("details")).getText();
+        assertTrue(details.contains("end_time (s)") && details.contains("start.speed"), details);
+        assertTrue(details.contains("outcome"), details);
+        Path shot = SHOTS.resolve("sweep.png");
+        Files.write(shot, driver.getScreenshotAs(OutputType.BYTES));
+        System.out.println("report screenshot: " + shot.toAbsolutePath());
+        assertNoConsoleErrors();
+    }
+
+    private static void assertNoConsoleErrors() {
         List<String> errors = new ArrayList<>();
         for (LogEntry e : driver.manage().logs().get(LogType.BROWSER)) {
             if (e.getLevel().intValue() >= Level.SEVERE.intValue()) {
