@@ -66,7 +66,7 @@ public final class HtmlReport {
         data.set("palette", palette());
         SampleDigest d = rec.digest();
         data.set("samples", samples(d));
-        PatchMeshes pm = PatchMeshes.of(surface, d, ballRadius);
+        PatchMeshes pm = PatchMeshes.of(surface, d, ballRadius, PatchMeshes.VIEW_RESOLUTION);
         ObjectNode mesh = data.putObject("mesh");
         floats(mesh.putArray("vertices"), pm.mesh().vertices());
         ArrayNode tri = mesh.putArray("triangles");

@@ -18,16 +18,19 @@ import org.trundle.core.TriangleMesh;
  *     no mesh; null when there is nothing to say
  */
 record PatchMeshes(TriangleMesh mesh, String note) {
-    /** Mesh cells along each patch coordinate. */
-    static final int RESOLUTION = 48;
+    /** Mesh cells along each patch coordinate in run.png (a picture 900 px wide needs no more). */
+    static final int PICTURE_RESOLUTION = 24;
+    /** Mesh cells along each patch coordinate in report.html (the view can zoom). */
+    static final int VIEW_RESOLUTION = 48;
 
     /**
      * @param surface the surface
      * @param d the recorded samples (the path)
      * @param ballRadius ball radius (m), for the least margin
+     * @param resolution mesh cells along each patch coordinate
      * @return the mesh and its note
      */
-    static PatchMeshes of(Surface surface, SampleDigest d, double ballRadius) {
+    static PatchMeshes of(Surface surface, SampleDigest d, double ballRadius, int resolution) {
         if (d.size() == 0) {
             return new PatchMeshes(TriangleMesh.empty(), null);
         }
@@ -47,7 +50,7 @@ record PatchMeshes(TriangleMesh mesh, String note) {
         margin = margin > 0 ? margin : 1e-3;
         Box box = Box.around(path, margin);
         try {
-            TriangleMesh m = surface.mesh(box, RESOLUTION);
+            TriangleMesh m = surface.mesh(box, resolution);
             String note = m.isEmpty() ? "the surface does not reach the box around the path"
                 : surface.hasEdges() ? null : "surface cut to a box around the path (it has no edges)";
             return new PatchMeshes(m, note);

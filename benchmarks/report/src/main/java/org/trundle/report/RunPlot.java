@@ -71,7 +71,7 @@ public final class RunPlot {
             forcePanel(g, 2 * W / 3, top, d, t0, t1);
         }
         boolean wall = rec.coordinateTitles() != null && PhasePlot.range(d, SampleDigest.Column.U, false) != null;
-        PatchMeshes mesh = PatchMeshes.of(surface, d, ballRadius);
+        PatchMeshes mesh = PatchMeshes.of(surface, d, ballRadius, PatchMeshes.PICTURE_RESOLUTION);
         String note = mesh.note() != null ? mesh.note() : mesh.mesh().triangleCount() + " mesh triangles of " + surface.name();
         new SceneView(up).draw(g, 8, top + ROW1 + 4, wall ? 3 * W / 5 - 12 : W - 16, ROW2 - 8,
             "Path of the centre on the surface (3-D view)", mesh.mesh(), d, events, clip(note, 110));
@@ -79,7 +79,22 @@ public final class RunPlot {
             wallPanel(g, 3 * W / 5, top + ROW1, 2 * W / 5, ROW2, d, rec.coordinateTitles());
         }
         g.dispose();
-        ImageIO.write(img, "png", file.toFile());
+        writePng(img, file);
+    }
+
+    /** PNG with fast deflate (level about 1 instead of the writer's default 4): a few % larger, much quicker. */
+    private static void writePng(BufferedImage img, Path file) throws IOException {
+        javax.imageio.ImageWriter w = ImageIO.getImageWritersByFormatName("png").next();
+        javax.imageio.ImageWriteParam p = w.getDefaultWriteParam();
+        p.setCompressionMode(javax.imageio.ImageWriteParam.MODE_EXPLICIT);
+        p.setCompressionQuality(0.85f);
+        java.nio.file.Files.deleteIfExists(file);
+        try (javax.imageio.stream.ImageOutputStream out = ImageIO.createImageOutputStream(file.toFile())) {
+            w.setOutput(out);
+            w.write(null, new javax.imageio.IIOImage(img, null, null), p);
+        } finally {
+            w.dispose();
+        }
     }
 
     private static void timePanel(Graphics2D g, int x, int y, String title, String yTitle, SampleDigest d,

@@ -4,9 +4,9 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
+import java.awt.RenderingHints;
 import java.awt.Shape;
 import java.awt.geom.Line2D;
-import java.awt.geom.Path2D;
 import java.util.Arrays;
 import java.util.List;
 
@@ -18,11 +18,12 @@ import org.trundle.core.TriangleMesh;
  * The 3-D panel of {@code run.png}: an orthographic view from azimuth 35° and elevation 22° about
  * the up direction, showing the surface's triangle mesh (translucent, shaded by the angle to a
  * light from the viewer's upper left), the centre path coloured by phase, the events, and a world
- * axis triad with its length. Triangles and path segments are drawn far to near (painter's order),
- * so a path behind a wall shows through it dimmed.
+ * axis triad with its length. Triangles are drawn far to near (painter's order); the path is drawn
+ * over them, so it is never hidden by the patch.
  */
 final class SceneView {
     private static final Color PATCH = new Color(0x8f, 0xa8, 0xc4);
+    private static final int SHADES = 16;
 
     private final Vector3D sx;
     private final Vector3D sy;
@@ -128,52 +129,69 @@ final class SceneView {
 
         // items: triangles and path segments, sorted far to near
         int nt = mesh.triangleCount();
-        int ns = Math.max(0, n - 1);
-        double[] depth = new double[nt + ns];
-        Integer[] order = new Integer[nt + ns];
+        double[] depth = new double[nt];
+        Integer[] order = new Integer[nt];
         for (int t = 0; t < nt; t++) {
             depth[t] = (vz[mesh.corner(t, 0)] + vz[mesh.corner(t, 1)] + vz[mesh.corner(t, 2)]) / 3;
             order[t] = t;
         }
-        for (int s = 0; s < ns; s++) {
-            depth[nt + s] = 0.5 * (pz[s] + pz[s + 1]);
-            order[nt + s] = nt + s;
-        }
         Arrays.sort(order, (a, b) -> Double.compare(depth[a], depth[b]));
         Vector3D light = toViewer.add(0.5, sy).subtract(0.4, sx).normalize();
         BasicStroke pathStroke = new BasicStroke(2.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
-        BasicStroke edgeStroke = new BasicStroke(0.6f);
-        Path2D.Double tri = new Path2D.Double();
-        Line2D.Double seg = new Line2D.Double();
+        Color[] shades = new Color[SHADES];
+        for (int i = 0; i < SHADES; i++) {
+            float f = 0.55f + 0.45f * i / (SHADES - 1);
+            shades[i] = new Color(Math.min(1f, PATCH.getRed() / 255f * f), Math.min(1f, PATCH.getGreen() / 255f * f),
+                Math.min(1f, PATCH.getBlue() / 255f * f), 0.30f);
+        }
+        Color edge = new Color(0x50, 0x60, 0x78, 40);
+        int[] tx = new int[3];
+        int[] ty = new int[3];
+        Object aa = g.getRenderingHint(RenderingHints.KEY_ANTIALIASING);
+        // triangles far to near without antialiasing (neighbours share edges; several times cheaper)
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_OFF);
         for (Integer item : order) {
             int k = item;
-            if (k < nt) {
-                int a = mesh.corner(k, 0);
-                int b = mesh.corner(k, 1);
-                int c = mesh.corner(k, 2);
-                Vector3D va = mesh.vertex(a);
-                Vector3D nrm = Vector3D.crossProduct(mesh.vertex(b).subtract(va), mesh.vertex(c).subtract(va));
-                double lit = nrm.getNorm() > 0 ? Math.abs(nrm.normalize().dotProduct(light)) : 0.5;
-                float f = (float) (0.55 + 0.45 * lit);
-                tri.reset();
-                tri.moveTo(cx + scale * vx[a], cy - scale * vy[a]);
-                tri.lineTo(cx + scale * vx[b], cy - scale * vy[b]);
-                tri.lineTo(cx + scale * vx[c], cy - scale * vy[c]);
-                tri.closePath();
-                g.setColor(new Color(Math.min(1f, PATCH.getRed() / 255f * f), Math.min(1f, PATCH.getGreen() / 255f * f),
-                    Math.min(1f, PATCH.getBlue() / 255f * f), 0.30f));
-                g.fill(tri);
-                g.setColor(new Color(0x50, 0x60, 0x78, 40));
-                g.setStroke(edgeStroke);
-                g.draw(tri);
-            } else {
-                int s = k - nt;
-                seg.setLine(cx + scale * px[s], cy - scale * py[s], cx + scale * px[s + 1], cy - scale * py[s + 1]);
-                g.setColor(Palette.phase(PhasePlot.phaseAt(d, s)));
-                g.setStroke(pathStroke);
-                g.draw(seg);
-            }
+            int a = mesh.corner(k, 0);
+            int b = mesh.corner(k, 1);
+            int c = mesh.corner(k, 2);
+            Vector3D va = mesh.vertex(a);
+            Vector3D nrm = Vector3D.crossProduct(mesh.vertex(b).subtract(va), mesh.vertex(c).subtract(va));
+            double lit = nrm.getNorm() > 0 ? Math.abs(nrm.normalize().dotProduct(light)) : 0.5;
+            tx[0] = (int) Math.round(cx + scale * vx[a]);
+            tx[1] = (int) Math.round(cx + scale * vx[b]);
+            tx[2] = (int) Math.round(cx + scale * vx[c]);
+            ty[0] = (int) Math.round(cy - scale * vy[a]);
+            ty[1] = (int) Math.round(cy - scale * vy[b]);
+            ty[2] = (int) Math.round(cy - scale * vy[c]);
+            g.setColor(shades[(int) Math.round(lit * (SHADES - 1))]);
+            g.fillPolygon(tx, ty, 3);
+            g.setColor(edge);
+            g.drawPolygon(tx, ty, 3);
         }
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, aa);
+        // the path over the translucent patch, one polyline per stretch of one phase
+        g.setStroke(pathStroke);
+        java.awt.geom.Path2D.Double line = new java.awt.geom.Path2D.Double();
+        Color current = null;
+        for (int s = 0; s + 1 < n; s++) {
+            Color col = Palette.phase(PhasePlot.phaseAt(d, s));
+            if (!col.equals(current)) {
+                if (current != null) {
+                    g.setColor(current);
+                    g.draw(line);
+                }
+                line.reset();
+                line.moveTo(cx + scale * px[s], cy - scale * py[s]);
+                current = col;
+            }
+            line.lineTo(cx + scale * px[s + 1], cy - scale * py[s + 1]);
+        }
+        if (current != null) {
+            g.setColor(current);
+            g.draw(line);
+        }
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, aa);
         g.setStroke(new BasicStroke(1f));
         int shown = 0;
         for (RunEvent e : events) {
