@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import java.util.Map;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -178,10 +177,6 @@ class ScenarioParsingTest {
         assertEquals(0.4, p.get("start.speed"), 1e-15);
         assertEquals(-20, p.get("start.elevation_deg"));
         assertEquals("out of the top", grid.labels().get("exit_to"));
-        // edge names are snake_case; the camelCase spellings of earlier versions stay aliases
-        SweepSpec old = SweepSpec.parse(ScenarioFiles.parse(base.replace("SWEEP",
-            "{\"start.speed\": [0.5], \"labels\": {\"exit_angleFrom\": \"over the lip\", \"exit_polar_to\": \"rim\"}}")));
-        assertEquals(Map.of("exit_angle_from", "over the lip", "exit_polar_to", "rim"), old.labels());
         Scenario s3 = grid.scenario(ScenarioFiles.parse(base.replace("SWEEP", "{\"start.speed\": [1]}")), p);
         assertEquals(0.4 * Math.sin(Math.toRadians(-20)), s3.start().velocity().getZ(), 1e-16);
 

@@ -52,6 +52,7 @@ class CustomSurfaceExampleTest {
         shortTube.query(0, new double[] {0.025, 0, 0.01}, g);
         assertEquals("bottom", shortTube.edgeName(g.edge));
         assertEquals(0.01, g.patchMargin, 1e-12);
+        g.hintValid = false;  // a new point far from the last: no Newton seed
         shortTube.query(0, new double[] {0.0, 0.015, 0.29}, g);
         assertEquals("top", shortTube.edgeName(g.edge));
         assertEquals(0.01, g.patchMargin, 1e-12);
