@@ -71,6 +71,9 @@ final class RunOutputs {
     static Report execute(Scenario sc, Path dir, boolean demo, boolean plot) throws IOException {
         Simulation sim = sc.simulation();
         checkRows(sc);
+        if (plot) {
+            RunPlot.warmUp(); // loads Java 2D on another core while the run goes on
+        }
         Vector3D up = up(sc);
         RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo),
             sim.surface());
