@@ -65,9 +65,19 @@ final class RunOutputs {
         RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo));
         RunResult result = null;
         String failure = null;
+        org.trundle.core.BallState lastGood = null;
         try {
             result = sim.run(sc.start(), sc.duration(), rec);
         } catch (SimulationException e) {
+            if (e.getCause() instanceof java.io.UncheckedIOException) {
+                // the recorder could not write: an output error, not a failure of the run
+                throw ((java.io.UncheckedIOException) e.getCause()).getCause();
+            }
+            lastGood = e.lastGoodState();
+            if (rec.validatedStart() == null) {
+                // the run failed while checking its start: the outputs are opened here instead
+                rec.start(lastGood);
+            }
             rec.close();
             failure = e.getMessage();
         } catch (IllegalArgumentException e) {
@@ -84,7 +94,8 @@ final class RunOutputs {
         if (result != null) {
             summary = SummaryJson.of(sc.description(), result);
         } else {
-            summary = SummaryJson.failed(sc.description(), failure, rec.lastState() != null ? rec.lastState() : rec.validatedStart(), rec.events());
+            summary = SummaryJson.failed(sc.description(), failure, lastGood != null ? lastGood
+                : rec.lastState() != null ? rec.lastState() : rec.validatedStart(), rec.events());
         }
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
