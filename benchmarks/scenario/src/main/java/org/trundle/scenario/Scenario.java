@@ -1,14 +1,18 @@
 package org.trundle.scenario;
 
 import java.util.List;
+import java.util.Optional;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.contact.WallLoads;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
 import org.trundle.core.ContactLaw;
+import org.trundle.core.Material;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
+import org.trundle.core.StartPlacement;
 import org.trundle.core.Surface;
 import org.trundle.core.sweep.RunSpec;
 
@@ -25,8 +29,12 @@ import org.trundle.core.sweep.RunSpec;
  * @param simulation the configured simulation
  * @param start the start state
  * @param duration simulated time (s)
+ * @param warnings values that are legal but implausible ({@link Plausibility}), one line each
+ * @param placement how {@code start.on_surface: true} moved the start centre, or null when it did
+ *     not apply (the start state already holds the placed centre)
  */
-public record Scenario(JsonNode document, String description, Simulation simulation, BallState start, double duration) {
+public record Scenario(JsonNode document, String description, Simulation simulation, BallState start, double duration,
+    List<String> warnings, StartPlacement placement) {
     /** Keys allowed at the top level. */
     static final List<String> TOP_KEYS = List.of("description", "ball", "surface", "contact", "gravity", "start", "run",
         "sweep");
@@ -40,22 +48,48 @@ public record Scenario(JsonNode document, String description, Simulation simulat
      * @throws ScenarioException naming the key and value of the first problem
      */
     public static Scenario parse(JsonNode doc) {
+        try {
+            return build(doc);
+        } catch (IllegalArgumentException e) {
+            // a value the checks here let through and the library refused: still bad input
+            throw new ScenarioException("invalid scenario: " + e.getMessage());
+        }
+    }
+
+    /** Shortest run duration (s): a thousand times the solver's event-time tolerance (1e-12 s). */
+    public static final double MIN_DURATION = 1e-9;
+    /** Smallest relative tolerance: about 50 times the double precision (2.2e-16). */
+    public static final double MIN_TOLERANCE = 1e-14;
+
+    private static Scenario build(JsonNode doc) {
         Section root = Section.root(doc);
         root.allow(TOP_KEYS.toArray(new String[0]));
         String description = root.text("description", "");
         Ball ball = ball(root.section("ball"));
-        Surface surface = SurfaceFactory.create(root.section("surface"));
+        Surface surface = SurfaceFactory.create(root.section("surface").without("material"));
+        wallLoadMaterials(root);
         ContactLaw law = ContactFactory.create(root.section("contact"));
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
         Section run = root.section("run");
-        run.allow("duration", "tolerance", "sample_interval", "stop_at_exit", "max_check_interval");
+        run.allow("duration", "tolerance", "sample_interval", "stop_at_exit", "max_check_interval", "max_rows");
+        if (run.has("max_rows")) {
+            maxRows(run);
+        }
         double duration = run.positive("duration", "s");
+        if (duration < MIN_DURATION) {
+            throw new ScenarioException("run.duration must be at least " + MIN_DURATION + " s (a thousand times the"
+                + " event-time tolerance), got " + duration);
+        }
         SolverSettings set = SolverSettings.defaults();
         if (run.has("tolerance")) {
             double tol = run.positive("tolerance", "");
             if (!(tol < 1e-2)) {
                 throw new ScenarioException("run.tolerance must be below 1e-2, got " + tol);
+            }
+            if (tol < MIN_TOLERANCE) {
+                throw new ScenarioException("run.tolerance must be at least " + MIN_TOLERANCE + " (finer than double"
+                    + " precision allows), got " + tol);
             }
             set = set.withTolerance(tol);
         }
@@ -71,12 +105,14 @@ public record Scenario(JsonNode document, String description, Simulation simulat
             String m = e.getMessage();
             throw new ScenarioException((m.contains("does not fit") ? "ball does not fit: " : "") + m);
         }
-        BallState start = startSpec.state(sim);
-        return new Scenario(doc, description, sim, start, duration);
+        StartPlacement placement = startSpec.placement(sim);
+        BallState start = (placement == null ? startSpec : startSpec.at(placement.centre())).state(sim);
+        List<String> warnings = Plausibility.warnings(doc, ball.radius(), ball.mass(), gravity);
+        return new Scenario(doc, description, sim, start, duration, List.copyOf(warnings), placement);
     }
 
     private static Ball ball(Section s) {
-        s.allow("radius", "mass", "inertia");
+        s.allow("radius", "mass", "inertia", "material");
         double r = s.positive("radius", "m");
         double m = s.positive("mass", "kg");
         double k = Ball.SOLID;
@@ -96,6 +132,75 @@ public record Scenario(JsonNode document, String description, Simulation simulat
             }
         }
         return Ball.of(r, m, k);
+    }
+
+    /** The id of the scenario's one patch (its {@code surface} section) in wall loads. */
+    public static final String PATCH_ID = "surface";
+
+    /**
+     * Reads {@code ball.material} and {@code surface.material}: both or neither.
+     *
+     * @return the two materials (ball, wall), or empty when neither is given
+     */
+    private static Optional<Material[]> wallLoadMaterials(Section root) {
+        Section ball = root.section("ball");
+        Section surface = root.section("surface");
+        if (!ball.has("material") && !surface.has("material")) {
+            return Optional.empty();
+        }
+        if (!ball.has("material") || !surface.has("material")) {
+            throw new ScenarioException("wall loads need both ball.material and surface.material; "
+                + (ball.has("material") ? "surface.material" : "ball.material") + " is missing");
+        }
+        return Optional.of(new Material[] {material(ball.section("material")), material(surface.section("material"))});
+    }
+
+    /** A material from {@code {"youngs_modulus": Pa, "poisson_ratio": ...}}. */
+    private static Material material(Section s) {
+        s.allow("youngs_modulus", "poisson_ratio");
+        double e = s.positive("youngs_modulus", "Pa");
+        double nu = s.number("poisson_ratio", "");
+        if (!(nu >= 0 && nu <= 0.5)) {
+            throw new ScenarioException(s.where("poisson_ratio") + " must lie in [0, 0.5], got " + nu);
+        }
+        return Material.of(e, nu);
+    }
+
+    /**
+     * The loads the wall sees, when the scenario gives {@code ball.material} and {@code surface.material}
+     * (each {@code {"youngs_modulus": Pa, "poisson_ratio": ν}}); the patch id is {@link #PATCH_ID}.
+     *
+     * @return a fresh calculator for one run, or empty without materials
+     */
+    public Optional<WallLoads> wallLoads() {
+        return wallLoadMaterials(Section.root(document)).map(m -> new WallLoads(PATCH_ID, simulation.surface(),
+            simulation.ball().radius(), m[0], m[1]));
+    }
+
+    /** Default cap on the rows of {@code trajectory.csv} (about 600 MB of text). */
+    public static final long DEFAULT_MAX_ROWS = 2_000_000L;
+
+    private static long maxRows(Section run) {
+        double v = run.number("max_rows", "");
+        JsonNode n = run.raw("max_rows");
+        if (!n.canConvertToExactIntegral() || !(v >= 1) || v > 1e15) {
+            throw new ScenarioException("run.max_rows must be a whole number from 1 to 1e15, got " + n.asText());
+        }
+        return (long) v;
+    }
+
+    /**
+     * @return the most trajectory rows a run of this scenario may write: {@code run.max_rows}, by
+     *     default {@link #DEFAULT_MAX_ROWS}
+     */
+    public long maxRows() {
+        Section run = Section.root(document).section("run");
+        return run.has("max_rows") ? maxRows(run) : DEFAULT_MAX_ROWS;
+    }
+
+    /** @return whether {@code start.on_surface: true} moved the start centre */
+    public boolean placed() {
+        return placement != null && placement.distance() > 0;
     }
 
     /** @return this scenario as a run of the core sweep API */

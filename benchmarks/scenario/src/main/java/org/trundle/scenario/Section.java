@@ -62,7 +62,7 @@ final class Section {
         while (it.hasNext()) {
             String k = it.next();
             if (!ok.contains(k)) {
-                throw new ScenarioException("unknown key " + where(k) + "; valid keys"
+                throw new ScenarioException("unknown key " + Texts.clip(where(k)) + "; valid keys"
                     + (path.isEmpty() ? " at the top level" : " in " + path) + ": " + String.join(", ", ok));
             }
         }
@@ -89,6 +89,19 @@ final class Section {
             throw new ScenarioException(where(key) + " must be an object { ... }, got " + kind(n));
         }
         return new Section(where(key), (ObjectNode) n);
+    }
+
+    /**
+     * @param key a key to leave out
+     * @return this section, at the same path, without {@code key} (a copy; this section is unchanged)
+     */
+    Section without(String key) {
+        if (!node.has(key)) {
+            return this;
+        }
+        ObjectNode copy = node.deepCopy();
+        copy.remove(key);
+        return new Section(path, copy);
     }
 
     Optional<Section> optionalSection(String key) {
@@ -287,7 +300,7 @@ final class Section {
         }
         String s = n.textValue();
         if (!ok.contains(s)) {
-            throw new ScenarioException(where(key) + " must be one of " + quoteAll(ok) + ", got \"" + s + "\"");
+            throw new ScenarioException(where(key) + " must be one of " + quoteAll(ok) + ", got \"" + Texts.clip(s) + "\"");
         }
         return s;
     }
@@ -362,7 +375,7 @@ final class Section {
         }
         if (n.isTextual()) {
             String t = n.textValue();
-            return "the string \"" + (t.length() > 40 ? t.substring(0, 40) + "..." : t) + "\"";
+            return "the string \"" + Texts.clip(t) + "\"";
         }
         if (n.isNumber()) {
             return "the number " + n.asText();
