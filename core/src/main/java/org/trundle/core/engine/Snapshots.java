@@ -142,6 +142,11 @@ final class Snapshots {
             v.normalForce = dyn.normalForce;
             v.gripMargin = dyn.grip - dyn.neededTangential;
             v.slipSpeed = dyn.slipSpeed;
+            if (phase == Phase.SLIDING) {
+                v.slip[0] = dyn.slip[0];
+                v.slip[1] = dyn.slip[1];
+                v.slip[2] = dyn.slip[2];
+            }
             v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
             v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
                 + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
