@@ -36,13 +36,13 @@ public final class RunPlot {
     }
 
     /**
-     * Starts a daemon thread that draws and encodes a tiny throw-away picture with the same fonts,
-     * strokes and PNG writer, so the Java 2D classes, font files and code paths are loaded and
-     * compiled while the simulation runs on the calling thread (a cold first picture costs a few
-     * hundred milliseconds). Draws nothing anyone sees and changes no output; safe to skip.
+     * Loads and initialises what {@link #write} needs (Java 2D's rasteriser, the fonts, the PNG
+     * encoder) by drawing and encoding a tiny throw-away picture, so that a caller can do it on a
+     * second thread while the run is computed (a cold first picture costs a few hundred
+     * milliseconds). Writes no file; the picture {@link #write} draws does not depend on it.
      */
-    public static void warmUp() {
-        Thread t = new Thread(() -> {
+    public static void prepare() {
+        {
             try {
                 BufferedImage img = new BufferedImage(64, 48, BufferedImage.TYPE_INT_RGB);
                 Graphics2D g = img.createGraphics();
@@ -66,9 +66,7 @@ public final class RunPlot {
             } catch (IOException | RuntimeException e) {
                 // only a warm-up: the real picture reports its own errors
             }
-        }, "trundle-picture-warm-up");
-        t.setDaemon(true);
-        t.start();
+        }
     }
 
     /**
