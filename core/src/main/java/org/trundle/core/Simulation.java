@@ -31,6 +31,7 @@ import org.trundle.core.engine.Model;
 public final class Simulation {
     private final Ball ball;
     private final Surface surface;
+    private final SurfaceMotion motion;
     private final ContactLaw law;
     private final Vector3D gravity;
     private final AppliedLoad load;
@@ -50,6 +51,7 @@ public final class Simulation {
         }
         this.ball = b.ball;
         this.surface = b.surface;
+        this.motion = b.motion == null ? SurfaceMotion.NONE : b.motion;
         this.law = b.law;
         this.gravity = Checks.finite("gravity", b.gravity);
         this.load = b.load == null ? AppliedLoad.NONE : b.load;
@@ -66,7 +68,7 @@ public final class Simulation {
                 throw new IllegalArgumentException("restitution must lie in [0, 1], got " + e);
             }
         });
-        this.model = new Model(ball, surface, law, gravity, load, settings, ContextAccessor.INSTANCE);
+        this.model = new Model(ball, surface, motion, law, gravity, load, settings, ContextAccessor.INSTANCE);
     }
 
     /** @return the immutable model the engine runs (internal use: {@code RightHandSide}) */
@@ -81,7 +83,7 @@ public final class Simulation {
 
     /** @return a builder holding this simulation's configuration */
     public Builder toBuilder() {
-        return new Builder().ball(ball).surface(surface).law(law).gravity(gravity).load(load).settings(settings);
+        return new Builder().ball(ball).surface(surface).motion(motion).law(law).gravity(gravity).load(load).settings(settings);
     }
 
     /** @return the ball */
@@ -92,6 +94,11 @@ public final class Simulation {
     /** @return the surface */
     public Surface surface() {
         return surface;
+    }
+
+    /** @return the surface's rigid motion ({@link SurfaceMotion#NONE} when it stands still) */
+    public SurfaceMotion motion() {
+        return motion;
     }
 
     /** @return the contact law */
@@ -166,11 +173,14 @@ public final class Simulation {
     }
 
     /**
-     * A consistent rolling start at time 0 with a given spin about the normal.
+     * A consistent rolling start at time 0 with a given spin about the normal. On a moving surface
+     * the spin rolls relative to the surface under the ball: {@code ω = Ω + (n × (v − u(c)))/r + ω_n n},
+     * so that the contact point moves with the surface, {@code v − r ω × n = u(p)}, with {@code Ω} the
+     * surface's spin and {@code u} its velocity field at time 0.
      *
      * @param centre centre (m), at distance r from the surface
      * @param velocity centre velocity (m/s), tangent to the surface
-     * @param normalSpin spin about the normal {@code ω·n} (rad/s)
+     * @param normalSpin spin about the normal relative to the surface, {@code (ω − Ω)·n} (rad/s)
      * @return the start state
      */
     public BallState rollingStart(Vector3D centre, Vector3D velocity, double normalSpin) {
@@ -184,14 +194,24 @@ public final class Simulation {
             throw new IllegalArgumentException("centre " + centre + " has no contact normal: " + e.getMessage(), e);
         }
         Vector3D n = new Vector3D(g.normal[0], g.normal[1], g.normal[2]);
-        Vector3D spin = Vector3D.crossProduct(n, velocity).scalarMultiply(1.0 / ball.radius())
-            .add(normalSpin, n);
+        Vector3D relative = velocity;
+        Vector3D surfaceSpin = Vector3D.ZERO;
+        if (!motion.stationary()) {
+            MotionState pose = new MotionState();
+            motion.at(0.0, pose);
+            double[] u = new double[3];
+            pose.velocityAt(centre.toArray(), u);
+            relative = velocity.subtract(new Vector3D(u));
+            surfaceSpin = new Vector3D(pose.spin);
+        }
+        Vector3D spin = Vector3D.crossProduct(n, relative).scalarMultiply(1.0 / ball.radius())
+            .add(normalSpin, n).add(surfaceSpin);
         return BallState.of(0.0, centre, velocity, org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY,
             spin, Phase.ROLLING);
     }
 
     /**
-     * Queries the surface at a point (convenience for setup code; allocates).
+     * Queries the surface, where it is at time {@code t}, at a point (convenience for setup code; allocates).
      *
      * @param x query point (m)
      * @param t time (s)
@@ -200,7 +220,13 @@ public final class Simulation {
     public ContactGeometry geometryAt(Vector3D x, double t) {
         ContactGeometry g = new ContactGeometry();
         g.scratch = surface.newScratch();
-        surface.query(t, x.toArray(), g);
+        if (motion.stationary()) {
+            surface.query(t, x.toArray(), g);
+        } else {
+            MotionState pose = new MotionState();
+            motion.at(t, pose);
+            pose.query(surface, t, x.toArray(), g);
+        }
         return g;
     }
 
@@ -218,6 +244,7 @@ public final class Simulation {
     public static final class Builder {
         private Ball ball;
         private Surface surface;
+        private SurfaceMotion motion = SurfaceMotion.NONE;
         private ContactLaw law;
         private Vector3D gravity = Vector3D.ZERO;
         private AppliedLoad load = AppliedLoad.NONE;
@@ -241,6 +268,16 @@ public final class Simulation {
          */
         public Builder surface(Surface s) {
             this.surface = s;
+            return this;
+        }
+
+        /**
+         * @param m the surface's rigid motion (the surface is given at its rest pose, where it is at
+         *     {@code m}'s identity); {@link SurfaceMotion#NONE} or null for a still surface
+         * @return this builder
+         */
+        public Builder motion(SurfaceMotion m) {
+            this.motion = m;
             return this;
         }
 

@@ -23,7 +23,7 @@ import org.trundle.scenario.ScenarioFiles;
  * {@code spin} at the instant, {@code phase_after}, {@code impulse} N·s, and for an exit the
  * {@code edge} crossed); {@code energy} (J: {@code initial}, {@code final}, {@code friction_loss},
  * {@code rolling_resistance_loss}, {@code pivoting_resistance_loss}, {@code impact_loss},
- * {@code other_loss}, {@code applied_work}, {@code residual}, {@code relative_residual});
+ * {@code other_loss}, {@code applied_work}, {@code drive_work} (work done by moving surfaces), {@code residual}, {@code relative_residual});
  * {@code max_distance_error} (m), {@code max_normal_force} (N);
  * {@code phases} (each {@code phase}, {@code start}, {@code end}, {@code duration} s and
  * {@code centre_path} m, the path length of the centre in that phase); {@code evaluations},
@@ -67,6 +67,7 @@ final class SummaryJson {
         en.put("impact_loss", e.impactLoss());
         en.put("other_loss", e.otherCoupleLoss());
         en.put("applied_work", e.appliedWork());
+        en.put("drive_work", e.driveWork());
         en.put("residual", e.residual());
         en.put("relative_residual", e.relativeResidual());
         o.put("max_distance_error", r.maxDistanceError());

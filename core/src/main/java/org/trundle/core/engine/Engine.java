@@ -2,6 +2,7 @@ package org.trundle.core.engine;
 
 import static org.trundle.core.engine.StateMapper.APPLIED;
 import static org.trundle.core.engine.StateMapper.DIM;
+import static org.trundle.core.engine.StateMapper.DRIVE;
 import static org.trundle.core.engine.StateMapper.LOSS;
 import static org.trundle.core.engine.StateMapper.PATH;
 import static org.trundle.core.engine.StateMapper.Q;
@@ -234,7 +235,7 @@ public final class Engine {
             y[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.OTHER.ordinal()],
-            run.impactLoss, y[APPLIED], scale);
+            run.impactLoss, y[APPLIED], y[DRIVE] + run.impulseDrive, scale);
         RunResult result = new RunResult(reason, message, endState, run.events, run.spans, budget,
             run.maxDistanceError, run.maxNormalForce, run.dyn.evaluations, run.steps);
         run.observer.finish(result);

@@ -51,7 +51,7 @@ final class ExitRule extends SwitchRule {
 
     @Override
     EndReason react(Transitions x, BallState before) {
-        run.surface.query(run.t, run.centreOf(run.y), run.dyn.geo);
+        run.slot.query(run.t, run.centreOf(run.y));
         String edge = run.surface.edgeName(run.dyn.geo.edge);
         if (run.phase() == Phase.ROLLING) {
             x.setDerivedVelocity();

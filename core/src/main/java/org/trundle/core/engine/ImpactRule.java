@@ -1,7 +1,5 @@
 package org.trundle.core.engine;
 
-import static org.trundle.core.engine.StateMapper.V;
-
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.trundle.core.BallState;
@@ -40,8 +38,8 @@ final class ImpactRule extends SwitchRule {
     boolean confirms(ODEStateAndDerivative s) {
         // flight integrates the full mechanical state: c, v sit at their full indices
         double[] ys = s.getPrimaryState();
-        run.surface.query(s.getTime(), run.centreOf(ys), run.dyn.geo);
-        double vn = ContactKinematics.normalPart(ys, V, run.dyn.geo.normal);
+        run.slot.query(s.getTime(), run.centreOf(ys));
+        double vn = ContactKinematics.relativeNormalSpeed(run.slot, s.getTime(), run.dyn.geo.normal, ys);
         return !(run.dyn.geo.patchMargin < 0 || vn >= 0);
     }
 

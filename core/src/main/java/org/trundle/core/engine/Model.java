@@ -7,6 +7,7 @@ import org.trundle.core.BallState;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceMotion;
 
 /**
  * The immutable problem a run solves: ball, patch, contact law, gravity, applied load and solver
@@ -14,14 +15,15 @@ import org.trundle.core.Surface;
  * checked every part. Internal.
  *
  * @param ball the ball
- * @param surface the patch
+ * @param surface the patch at its rest pose
+ * @param motion the patch's rigid motion ({@link SurfaceMotion#NONE} for a still patch)
  * @param law the contact law
  * @param gravity gravitational acceleration (m/s²)
  * @param load the applied load
  * @param settings solver settings
  * @param access write access to contact contexts
  */
-public record Model(Ball ball, Surface surface, ContactLaw law, Vector3D gravity, AppliedLoad load,
+public record Model(Ball ball, Surface surface, SurfaceMotion motion, ContactLaw law, Vector3D gravity, AppliedLoad load,
                     SolverSettings settings, ContextAccess access) {
 
     /**

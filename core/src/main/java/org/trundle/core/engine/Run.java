@@ -77,6 +77,8 @@ final class Run {
     double extent;
     double[] c0;
     double impactLoss;
+    /** Drive work received in impulses (impacts, sticking, settling) from a moving patch (J). */
+    double impulseDrive;
     long steps;
     /** Step size (s) the next segment starts with, after a projection restart; 0: Hipparchus' own estimate. */
     double restartStep;
@@ -100,7 +102,7 @@ final class Run {
         this.k = ball.inertiaFactor();
         this.inertia = ball.momentOfInertia();
         this.g = model.gravity().toArray();
-        this.slot = new ContactSlot(model.surface(), model.law());
+        this.slot = new ContactSlot(model.surface(), model.motion(), model.law());
         this.contacts = new ContactSet(slot);
         this.surface = slot.surface;
         this.law = slot.law;

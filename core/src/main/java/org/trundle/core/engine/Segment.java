@@ -48,7 +48,8 @@ final class Segment {
         dyn.phase = phase;
         int[] layout = layouts[phase.ordinal()];
         if (layout == null) {
-            layout = StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE);
+            layout = StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE,
+                run.slot.moving);
             layouts[phase.ordinal()] = layout;
         }
         double[] abs = new double[layout.length];
@@ -67,7 +68,7 @@ final class Segment {
         if (phase.inContact()) {
             // a switch may hand over a drifted state: start each contact segment well within the
             // projection thresholds (the step observer checks them only at step ends)
-            run.surface.query(run.t, run.centreOf(run.y), dyn.geo);
+            run.slot.query(run.t, run.centreOf(run.y));
             if (run.snapshots.drift(run.y, dyn.geo.distance) >= 0.5) {
                 run.y = transitions.projected(run.t, run.y);
             }

@@ -121,7 +121,7 @@ final class Snapshots {
         if (phase.inContact()) {
             dyn.evaluate(ts, ys);
         } else {
-            run.surface.query(ts, run.centreOf(ys), dyn.geo);
+            run.slot.query(ts, run.centreOf(ys));
         }
         fill(ys, dyn.lastDerivative(), v, phase);
     }
@@ -133,9 +133,23 @@ final class Snapshots {
             v.normalForce = dyn.normalForce;
             v.gripMargin = dyn.grip - dyn.neededTangential;
             v.slipSpeed = dyn.slipSpeed;
-            v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
-            v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
-                + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
+            if (run.slot.moving) {
+                // relative to the patch: |v − u(c)| + r|ω − Ω| and |a − du(c)/dt| + r|α − Ω̇|
+                v.speed = dyn.relativeSpeed;
+                double[] as = dyn.surfaceAcceleration;
+                double[] sr = run.slot.pose.spinRate;
+                double ax = yd[V] - as[0];
+                double ay = yd[V + 1] - as[1];
+                double az = yd[V + 2] - as[2];
+                double bx = yd[W] - sr[0];
+                double by = yd[W + 1] - sr[1];
+                double bz = yd[W + 2] - sr[2];
+                v.acceleration = Math.sqrt(ax * ax + ay * ay + az * az) + r * Math.sqrt(bx * bx + by * by + bz * bz);
+            } else {
+                v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
+                v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
+                    + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
+            }
         }
         v.patchMargin = dyn.geo.patchMargin;
         v.distance = dyn.geo.distance;
@@ -174,7 +188,7 @@ final class Snapshots {
         double[] out = dyn.expand(s.getPrimaryState(), new double[DIM]);
         if (dyn.derivedVelocity()) {
             Snapshot sn = at(s);
-            ContactKinematics.noSlipVelocity(r, out[W], out[W + 1], out[W + 2], sn.normal, out, V);
+            ContactKinematics.rollingVelocity(run.slot, s.getTime(), r, sn.normal, out);
         }
         return out;
     }

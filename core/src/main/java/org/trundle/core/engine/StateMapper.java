@@ -12,7 +12,7 @@ import org.trundle.core.Phase;
  *
  * <p>Full layout ({@link #DIM} = 19): centre c (m) [0,3), velocity v (m/s) [3,6), quaternion q
  * [6,10), spin ω (rad/s) [10,13), dissipated work by {@link LossKind} (J) [13,17), applied-load work
- * (J) [17], centre path length (m) [18].
+ * (J) [17], centre path length (m) [18], work done on the ball by moving patches (J) [19].
  *
  * <p>Quaternion convention: the array holds the Hamilton quaternion, scalar first, body to world
  * ({@code x_world = q x_body q*}, {@code q̇ = ½ (0, ω) ⊗ q}); Hipparchus' {@link Rotation} stores the
@@ -35,8 +35,10 @@ public final class StateMapper {
     public static final int APPLIED = 17;
     /** Index of the centre path length. */
     public static final int PATH = 18;
+    /** Index of the drive work of moving patches. */
+    public static final int DRIVE = 19;
     /** Length of the full layout. */
-    public static final int DIM = 19;
+    public static final int DIM = 20;
 
     private static final int[] IDENTITY = java.util.stream.IntStream.range(0, DIM).toArray();
 
@@ -89,15 +91,16 @@ public final class StateMapper {
     /**
      * The components integrated in a phase (full indices, in compact order): centre, velocity
      * (not while rolling), quaternion, spin, then the sliding loss (sliding), the couple losses
-     * (contact phases, when the law has couples), the applied work (when there is a load) and the
-     * path length.
+     * (contact phases, when the law has couples), the applied work (when there is a load), the
+     * path length and the drive work (contact phases on a moving patch).
      *
      * @param phase the phase
      * @param couples whether the law adds couples
      * @param loaded whether there is an applied load
+     * @param moving whether the patch moves
      * @return the layout (the shared identity array when it is the full layout)
      */
-    static int[] layout(Phase phase, boolean couples, boolean loaded) {
+    static int[] layout(Phase phase, boolean couples, boolean loaded, boolean moving) {
         int[] out = new int[DIM];
         int n = 0;
         for (int i = C; i < LOSS; i++) {
@@ -117,6 +120,9 @@ public final class StateMapper {
             out[n++] = APPLIED;
         }
         out[n++] = PATH;
+        if (moving && phase.inContact()) {
+            out[n++] = DRIVE;
+        }
         return n == DIM ? IDENTITY : java.util.Arrays.copyOf(out, n);
     }
 
