@@ -52,6 +52,9 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         description = "simulated time per run in seconds (s), replacing run.duration")
     Double duration;
 
+    @Option(names = "--no-plot", description = "draw no picture (regime-map.png); sweep.csv is the same")
+    boolean noPlot;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -72,6 +75,11 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
 
     @Override
     public Integer call() throws Exception {
+        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        if (n < 1) {
+            throw new ScenarioException("--threads must be at least 1, got " + n);
+        }
+        OutputFolder.check(out, force); // before the points are checked: that may take a while
         JsonNode doc = RunCommand.override(ScenarioFiles.read(scenario), duration, null);
         Scenario.parse(doc);
         SweepSpec sw = SweepSpec.parse(doc);
@@ -79,14 +87,9 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         for (int i = 0; i < space.size(); i++) {
             sw.scenario(doc, space.point(i)); // every point checked before anything is written
         }
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
-        if (n < 1) {
-            throw new ScenarioException("--threads must be at least 1, got " + n);
-        }
-        OutputFolder.check(out, force);
         OutputFolder.create(out, false);
         Map<String, Integer> counts = new TreeMap<>();
-        RegimeMap map = new RegimeMap(space.names(), sw.labels());
+        RegimeMap map = noPlot ? null : new RegimeMap(space.names(), sw.labels());
         SweepSummary summary;
         ProgressBar bar = noProgress ? null : new ProgressBarBuilder().setTaskName("sweep").setInitialMax(space.size())
             .setStyle(ProgressBarStyle.ASCII).setUpdateIntervalMillis(250)
@@ -100,7 +103,9 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
                 })
                 .run(p -> sw.scenario(doc, p).runSpec(), run -> {
                     table.accept(run);
-                    map.add(run);
+                    if (map != null) {
+                        map.add(run);
+                    }
                     counts.merge(Outcome.of(run), 1, Integer::sum);
                 });
         } finally {
@@ -109,7 +114,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
             }
         }
         String title = "Regime map: " + String.join(" x ", space.names()) + " (" + space.size() + " runs)";
-        boolean drawn = space.names().size() <= 2;
+        boolean drawn = !noPlot && space.names().size() <= 2;
         if (drawn) {
             map.write(out.resolve("regime-map.png"), title, sw.random());
         }
@@ -124,7 +129,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         counts.forEach((k, v) -> b.append(b.length() == 0 ? "" : ", ").append(k).append(' ').append(v));
         w.println("Outcomes: " + b);
         w.println("Files:    " + out.resolve("sweep.csv") + (drawn ? ", " + out.resolve("regime-map.png")
-            : " (the regime map is drawn for one or two parameters only)"));
+            : noPlot ? " (no picture: --no-plot)" : " (the regime map is drawn for one or two parameters only)"));
         w.flush();
         return 0;
     }

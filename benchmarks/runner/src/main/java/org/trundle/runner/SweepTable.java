@@ -21,7 +21,8 @@ import org.trundle.scenario.Outcome;
  * {@code exit_edge}, {@code end_time} (s), {@code exit_time} (s), {@code exit_x,exit_y,exit_z} (m),
  * {@code exit_vx,exit_vy,exit_vz} (m/s), {@code exit_speed} (m/s), {@code end_x,end_y,end_z} (m),
  * {@code events} (count), {@code message} (failure reason, quoted). Exit columns are empty when the
- * ball did not leave the patch. Numbers are exact (shortest round-trip decimals).
+ * ball did not leave the patch. Numbers are exact (shortest round-trip decimals; the parameters
+ * through {@link Decimals#shortest}).
  */
 final class SweepTable implements Consumer<SweepRun>, AutoCloseable {
     private final BufferedWriter out;
@@ -52,7 +53,7 @@ final class SweepTable implements Consumer<SweepRun>, AutoCloseable {
         StringBuilder b = new StringBuilder();
         b.append(run.index());
         for (int i = 0; i < run.point().size(); i++) {
-            b.append(',').append(run.point().value(i));
+            b.append(',').append(Decimals.shortest(run.point().value(i)));
         }
         b.append(',').append(Outcome.of(run));
         if (!run.isSuccess()) {
