@@ -64,14 +64,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final double coupleFactor;
     private final double rollingMass;
     private final double[] g;
-    private final ContactSlot slot;
+    /** The contact slot evaluated (the active one; see {@link #setSlot}). */
+    private ContactSlot slot;
     /** Whether the patch moves (then the motion terms of design notes §9 enter). */
-    private final boolean moving;
-    private final ContactLaw law;
+    private boolean moving;
+    private ContactLaw law;
     private final AppliedLoad load;
 
-    final ContactGeometry geo;
-    final ContactContext ctx;
+    ContactGeometry geo;
+    ContactContext ctx;
     private final Ball ball;
     private final ContextAccess access;
 
@@ -120,7 +121,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     /** Whether there is an applied load (without one, the load arrays stay zero and are never asked). */
     private final boolean loaded;
     /** Whether the law may add couples (without, the couple calls and loss reads are skipped while rolling). */
-    private final boolean couples;
+    private boolean couples;
     /** Receives the state and results of an integrator stage evaluated at the same time as the one before. */
     interface StageObserver {
         void stage(double t, double[] compact, double[] full, double[] fullDot);
@@ -153,7 +154,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * @param stickSpeed the stick threshold ε of the sliding phase (m/s)
      */
     public Dynamics(Model model, Phase phase, double stickSpeed) {
-        this(model, new ContactSlot(model.surface(), model.motion(), model.law()));
+        this(model, new ContactSlot(0, model.patches().get(0)));
         this.phase = phase;
         this.stickEps = stickSpeed;
     }
@@ -173,17 +174,29 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         this.coupleFactor = 1.0 / (k * m * r);
         this.rollingMass = k * m / (1 + k);
         this.g = gravity.clone();
-        this.slot = slot;
-        this.moving = slot.moving;
-        this.law = slot.law;
-        this.geo = slot.geo;
-        this.ctx = slot.ctx;
         this.access = access;
         this.load = load;
         this.loaded = load != AppliedLoad.NONE;
-        this.couples = slot.couples;
-        // the ball and the geometry workspace never change: the hot path sets only the contact values
-        access.set(ctx, ball, geo, 0.0, Phase.ROLLING, slip, w, false);
+        setSlot(slot);
+    }
+
+    /**
+     * Evaluates another contact slot from now on (a hand-over, an impact on another patch).
+     *
+     * @param s the slot
+     */
+    void setSlot(ContactSlot s) {
+        this.slot = s;
+        this.moving = s.moving;
+        this.law = s.law;
+        this.geo = s.geo;
+        this.ctx = s.ctx;
+        this.couples = s.couples;
+        if (!s.contextReady) {
+            // the ball and the geometry workspace never change: the hot path sets only the contact values
+            access.set(ctx, ball, geo, 0.0, Phase.ROLLING, slip, w, false);
+            s.contextReady = true;
+        }
     }
 
     @Override
@@ -298,6 +311,13 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     /** @return the normal force (N) of the last evaluation */
     public double normalForce() {
         return normalForce;
+    }
+
+    /** Counts one unit of work that is not an evaluation (an event check in flight) against the budget. */
+    void countCheck() {
+        if (++evaluations > budget) {
+            throw new BudgetExhausted();
+        }
     }
 
     /** Evaluates the phase's forces without keeping derivatives (event functions, samples). */

@@ -190,8 +190,10 @@ public final class Engine {
         run.impactSlack = 1e-9 * r;
         run.restSpeed = run.set.restSpeedFraction() * run.speedScale;
         run.dyn.stickEps = run.stickEps;
-        run.model.access().setSpins(run.slot.ctx, run.set.smoothingSpinFraction() * run.speedScale / r,
-            run.stickEps / r);
+        for (ContactSlot slot : run.slots) {
+            run.model.access().setSpins(slot.ctx, run.set.smoothingSpinFraction() * run.speedScale / r,
+                run.stickEps / r);
+        }
         double tol = run.set.tolerance();
         double eScale = run.m * run.speedScale * run.speedScale + run.m * gn * r;
         run.absTol = new double[DIM];

@@ -6,22 +6,28 @@ import org.trundle.core.BallState;
 import org.trundle.core.EndReason;
 import org.trundle.core.EventKind;
 import org.trundle.core.Phase;
+import org.trundle.core.SurfaceDomainException;
 
 /**
- * Impact in flight: the distance minus the radius, {@code d − r} (m), falls to zero while the ball
- * approaches, on the patch (a ball that left a tube through its end does not hit the wall's
+ * Impact in flight on one patch of the scene (one rule per patch, so that a patch whose unbounded
+ * continuation the ball is inside cannot hide the others): the distance minus the radius,
+ * {@code d − r} (m), falls to zero while the ball approaches, on the patch (a ball that left a tube through its end does not hit the wall's
  * continuation). The function is offset by a slack of {@code 1e-9 r} so that it is strictly
  * positive when a flight starts on the surface; the reaction rewinds to {@code d = r} and applies
  * the impact impulses (design notes §6).
  */
 final class ImpactRule extends SwitchRule {
-    ImpactRule(Run run) {
+    /** The patch this rule watches (one impact rule per patch of the scene). */
+    private final ContactSlot slot;
+
+    ImpactRule(Run run, ContactSlot slot) {
         super(run);
+        this.slot = slot;
     }
 
     @Override
     String label() {
-        return "impact";
+        return "impact on " + slot.id;
     }
 
     @Override
@@ -31,20 +37,25 @@ final class ImpactRule extends SwitchRule {
 
     @Override
     double value(Snapshot s) {
-        return s.distance - run.r + run.impactSlack;
+        return s.slotDistance[slot.index] - run.r + run.impactSlack;
     }
 
     @Override
     boolean confirms(ODEStateAndDerivative s) {
         // flight integrates the full mechanical state: c, v sit at their full indices
         double[] ys = s.getPrimaryState();
-        run.slot.query(s.getTime(), run.centreOf(ys));
-        double vn = ContactKinematics.relativeNormalSpeed(run.slot, s.getTime(), run.dyn.geo.normal, ys);
-        return !(run.dyn.geo.patchMargin < 0 || vn >= 0);
+        try {
+            slot.query(s.getTime(), run.centreOf(ys));
+        } catch (SurfaceDomainException e) {
+            return false;
+        }
+        double vn = ContactKinematics.relativeNormalSpeed(slot, s.getTime(), slot.geo.normal, ys);
+        return !(slot.geo.patchMargin < 0 || vn >= 0);
     }
 
     @Override
     void prepare(Transitions x) {
+        run.activate(slot);
         x.rewindToContact();
     }
 

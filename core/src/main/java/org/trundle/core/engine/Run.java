@@ -39,10 +39,12 @@ final class Run {
     final double inertia;
     final double[] g;
     final ContactSet contacts;
-    /** The slot of the single patch (its surface and law). */
-    final ContactSlot slot;
-    final Surface surface;
-    final ContactLaw law;
+    /** Every patch's slot, in scene order. */
+    final ContactSlot[] slots;
+    /** The active slot (the patch touched, or last touched) and its surface and law. */
+    ContactSlot slot;
+    Surface surface;
+    ContactLaw law;
     final Dynamics dyn;
     final Snapshots snapshots;
     private final double[] centreWork = new double[3];
@@ -53,7 +55,7 @@ final class Run {
     double settleSpeed;
     double impactSlack;
     double restSpeed;
-    final double restitution;
+    double restitution;
     double[] absTol;
     double[] relTol;
 
@@ -102,14 +104,36 @@ final class Run {
         this.k = ball.inertiaFactor();
         this.inertia = ball.momentOfInertia();
         this.g = model.gravity().toArray();
-        this.slot = new ContactSlot(model.surface(), model.motion(), model.law());
-        this.contacts = new ContactSet(slot);
+        this.slots = new ContactSlot[model.patches().size()];
+        for (int i = 0; i < slots.length; i++) {
+            slots[i] = new ContactSlot(i, model.patches().get(i));
+        }
+        this.contacts = new ContactSet(slots);
+        this.slot = slots[0];
         this.surface = slot.surface;
         this.law = slot.law;
         this.dyn = new Dynamics(model, slot);
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
         this.dyn.stageObserver = snapshots::stageAtStepEnd;
+    }
+
+    /**
+     * Makes {@code s} the active slot (the patch touched next): the contact set, the right-hand
+     * side and the run's surface, law and restitution follow.
+     *
+     * @param s the slot
+     */
+    void activate(ContactSlot s) {
+        if (s == slot) {
+            return;
+        }
+        contacts.activate(s);
+        dyn.setSlot(s);
+        slot = s;
+        surface = s.surface;
+        law = s.law;
+        restitution = law.restitution().orElse(0.0);
     }
 
     /** @return the global phase (summary of the contact set) */
@@ -225,9 +249,14 @@ final class Run {
     }
 
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse, String edge) {
+        log(kind, before, after, impulse, edge, null);
+    }
+
+    /** Logs an event on the active patch; {@code from} is the patch left by a hand-over, else null. */
+    void log(EventKind kind, BallState before, BallState after, Vector3D impulse, String edge, String from) {
         Phase phase = phase();
         BallState a = after != null ? after : toState(t, y, phase);
-        RunEvent e = new RunEvent(kind, before, a, edge, impulse);
+        RunEvent e = new RunEvent(kind, before, a, edge, impulse, slot.id, from, from != null ? slot.id : null);
         events.add(e);
         trackForce(t, y, phase);
         emitSample(t, y, phase, true);

@@ -21,17 +21,22 @@ final class Segment {
     private final Transitions transitions;
     /** Every rule, in the order their detectors are added (which orders simultaneous events). */
     private final SwitchRule[] rules;
-    /** Integrated layout per phase, built on first use. */
-    private final int[][] layouts = new int[Phase.values().length][];
+    /** Integrated layout per patch and phase, built on first use. */
+    private final int[][][] layouts;
     /** The rule whose switch stopped the segment, or null. */
     SwitchRule fired;
 
     Segment(Run run, Transitions transitions) {
         this.run = run;
         this.transitions = transitions;
-        this.rules = new SwitchRule[] {
+        java.util.List<SwitchRule> list = new java.util.ArrayList<>(java.util.List.of(
             new LiftOffRule(run), new RestRule(run), new FitRule(run), new ExitRule(run),
-            new SlipRule(run), new StickRule(run), new ImpactRule(run)};
+            new SlipRule(run), new StickRule(run)));
+        for (ContactSlot s : run.slots) {
+            list.add(new ImpactRule(run, s));
+        }
+        this.rules = list.toArray(new SwitchRule[0]);
+        this.layouts = new int[run.slots.length][Phase.values().length][];
     }
 
     /**
@@ -46,11 +51,12 @@ final class Segment {
         Phase phase = run.phase();
         Dynamics dyn = run.dyn;
         dyn.phase = phase;
-        int[] layout = layouts[phase.ordinal()];
+        int[][] perPhase = layouts[run.slot.index];
+        int[] layout = perPhase[phase.ordinal()];
         if (layout == null) {
             layout = StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE,
                 run.slot.moving);
-            layouts[phase.ordinal()] = layout;
+            perPhase[phase.ordinal()] = layout;
         }
         double[] abs = new double[layout.length];
         double[] rel = new double[layout.length];
@@ -74,7 +80,9 @@ final class Segment {
             }
         } else {
             // a flight may end far from where it began: let Newton-based surfaces start afresh
-            dyn.geo.resetHint();
+            for (ContactSlot s : run.slots) {
+                s.geo.resetHint();
+            }
         }
         for (SwitchRule rule : rules) {
             if (rule.watches(phase)) {

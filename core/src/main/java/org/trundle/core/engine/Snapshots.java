@@ -49,7 +49,7 @@ final class Snapshots {
         this.dyn = run.dyn;
         this.r = run.r;
         for (int i = 0; i < CACHE; i++) {
-            values[i] = new Snapshot();
+            values[i] = new Snapshot(run.slots.length);
         }
     }
 
@@ -121,7 +121,12 @@ final class Snapshots {
         if (phase.inContact()) {
             dyn.evaluate(ts, ys);
         } else {
-            run.slot.query(ts, run.centreOf(ys));
+            // an event check in flight is work too: it counts against the evaluation budget
+            dyn.countCheck();
+            double[] c = run.centreOf(ys);
+            for (ContactSlot s : run.slots) {
+                v.slotDistance[s.index] = s.distanceBound(ts, c, 2 * r, 1e-3 * r);
+            }
         }
         fill(ys, dyn.lastDerivative(), v, phase);
     }

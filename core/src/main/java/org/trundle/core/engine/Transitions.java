@@ -49,18 +49,26 @@ final class Transitions {
     Phase startPhase(Phase requested) {
         double t = run.t;
         double[] y = run.y;
-        run.slot.query(t, run.centreOf(y));
-        double gap = dyn.geo.distance - r;
         double tolLen = run.set.contactTolerance() * r;
-        String name = run.surface.name();
         if (requested == Phase.FLIGHT) {
-            if (gap < -tolLen) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
-                    name, dyn.geo.distance, r));
+            // a flight start needs no closest point: only a bound that shows no patch is penetrated
+            for (ContactSlot s : run.slots) {
+                double d = s.distanceBound(t, run.centreOf(y), r - tolLen, 1e-3 * r);
+                if (d - r < -tolLen) {
+                    throw new IllegalArgumentException(String.format(Locale.ROOT,
+                        "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
+                        s.surface.name(), d, r));
+                }
             }
             return Phase.FLIGHT;
         }
+        ContactSlot touched = run.slots.length > 1 ? touching(t, y, tolLen) : null;
+        if (touched != null) {
+            run.activate(touched);
+        }
+        run.slot.query(t, run.centreOf(y));
+        double gap = dyn.geo.distance - r;
+        String name = run.surface.name();
         if (Math.abs(gap) > tolLen) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                 "start centre is %s m from surface %s, but a %s start needs distance r = %s m (tolerance %s m);"
@@ -95,13 +103,70 @@ final class Transitions {
         if (p == Phase.FLIGHT) {
             BallState s0 = run.toState(t, run.y, requested == Phase.SLIDING ? Phase.SLIDING : Phase.ROLLING);
             run.events.add(new RunEvent(EventKind.LIFT_OFF, s0, run.toState(t, run.y, Phase.FLIGHT), null,
-                Vector3D.ZERO));
+                Vector3D.ZERO, run.slot.id, null, null));
         } else if (p == Phase.SLIDING && requested != Phase.SLIDING) {
             BallState s0 = run.toState(t, run.y, Phase.ROLLING);
             run.events.add(new RunEvent(EventKind.SLIP, s0, run.toState(t, run.y, Phase.SLIDING), null,
-                Vector3D.ZERO));
+                Vector3D.ZERO, run.slot.id, null, null));
         }
         return p;
+    }
+
+    /**
+     * The first patch the centre touches (distance r within {@code tol}, contact point on the
+     * patch), or null.
+     */
+    private ContactSlot touching(double t, double[] y, double tol) {
+        for (ContactSlot s : run.slots) {
+            try {
+                s.query(t, run.centreOf(y));
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                continue;
+            }
+            if (Math.abs(s.geo.distance - r) <= tol && s.geo.patchMargin >= 0) {
+                return s;
+            }
+        }
+        return null;
+    }
+
+    /**
+     * The neighbour that continues the surface where the contact point leaves the active patch: a
+     * patch other than the active one whose surface is at distance r from the centre (within the
+     * contact tolerance) and whose patch holds the contact point a little ahead along the centre's
+     * motion (one millionth of a radius, so that a join exactly on both edges hands over forward).
+     *
+     * @return the neighbour, or null when the ball leaves every patch there
+     */
+    ContactSlot neighbour() {
+        double t = run.t;
+        double[] y = run.y;
+        double tol = run.set.contactTolerance() * r;
+        double[] c = {y[C], y[C + 1], y[C + 2]};
+        double vx = y[V];
+        double vy = y[V + 1];
+        double vz = y[V + 2];
+        double sp = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        double step = sp > 0 ? 1e-6 * r / sp : 0.0;
+        double[] ahead = {c[0] + vx * step, c[1] + vy * step, c[2] + vz * step};
+        for (ContactSlot s : run.slots) {
+            if (s == run.slot) {
+                continue;
+            }
+            try {
+                s.query(t, c);
+                if (!(Math.abs(s.geo.distance - r) <= tol)) {
+                    continue;
+                }
+                s.query(t, ahead);
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                continue;
+            }
+            if (s.geo.patchMargin >= 0) {
+                return s;
+            }
+        }
+        return null;
     }
 
     // ---------------------------------------------------------------- modes
