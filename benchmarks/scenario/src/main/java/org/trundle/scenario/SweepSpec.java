@@ -153,14 +153,16 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
      */
     static List<String> outcomes(Section root) {
         List<String> out = new ArrayList<>();
-        org.trundle.core.Surface surface = SurfaceFactory.create(root.section("surface"));
-        if (surface.hasEdges()) {
-            for (int i = 0; i < 16; i++) {
-                String o = "exit_" + surface.edgeName(i);
-                if (out.contains(o)) {
-                    break; // edge indices past the last repeat its name
+        for (org.trundle.core.Patch p : SceneFactory.patches(root)) {
+            org.trundle.core.Surface surface = p.surface();
+            if (surface.hasEdges()) {
+                for (int i = 0; i < 16; i++) {
+                    String o = "exit_" + surface.edgeName(i);
+                    if (out.contains(o)) {
+                        break; // edge indices past the last repeat its name
+                    }
+                    out.add(o);
                 }
-                out.add(o);
             }
         }
         out.addAll(List.of("duration", "rest", "budget", "failed"));

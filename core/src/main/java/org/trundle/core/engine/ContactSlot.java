@@ -20,6 +20,8 @@ final class ContactSlot {
     final int index;
     /** The patch's id. */
     final String id;
+    /** The patch's id as the one-element contact list of a sample. */
+    final java.util.List<String> contactIds;
     /** The patch's surface at its rest pose. */
     final Surface surface;
     /** The patch's motion. */
@@ -51,6 +53,7 @@ final class ContactSlot {
     ContactSlot(int index, Patch patch) {
         this.index = index;
         this.id = patch.id();
+        this.contactIds = java.util.List.of(id);
         this.surface = patch.surface();
         this.motion = patch.motion();
         this.moving = !motion.stationary();

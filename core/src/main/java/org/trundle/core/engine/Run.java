@@ -241,7 +241,8 @@ final class Run {
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
             onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         }
-        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent));
+        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent,
+            touching ? slot.contactIds : java.util.List.of()));
     }
 
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse) {
