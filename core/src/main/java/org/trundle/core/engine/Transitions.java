@@ -55,7 +55,7 @@ final class Transitions {
             for (ContactSlot s : run.slots) {
                 double d = s.distanceBound(t, run.centreOf(y), r - tolLen, 1e-3 * r);
                 if (d - r < -tolLen) {
-                    throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    throw run.reject(String.format(Locale.ROOT,
                         "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
                         s.surface.name(), d, r));
                 }
@@ -70,20 +70,20 @@ final class Transitions {
         double gap = dyn.geo.distance - r;
         String name = run.surface.name();
         if (Math.abs(gap) > tolLen) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
+            throw run.reject(String.format(Locale.ROOT,
                 "start centre is %s m from surface %s, but a %s start needs distance r = %s m (tolerance %s m);"
                     + " use a flight start for a ball off the surface",
                 dyn.geo.distance, name, requested.label(), r, tolLen));
         }
         if (dyn.geo.patchMargin < 0) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
+            throw run.reject(String.format(Locale.ROOT,
                 "start contact point lies outside the patch of surface %s by %s m (edge %s)",
                 name, -dyn.geo.patchMargin, run.surface.edgeName(dyn.geo.edge)));
         }
         double vn = ContactKinematics.relativeNormalSpeed(run.slot, t, dyn.geo.normal, y);
         double tolSpeed = run.set.contactTolerance() * run.speedScale;
         if (Math.abs(vn) > tolSpeed) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
+            throw run.reject(String.format(Locale.ROOT,
                 "start velocity has a normal component %s m/s on surface %s (tolerance %s m/s);"
                     + " a contact start must move tangentially",
                 vn, name, tolSpeed));
@@ -93,7 +93,7 @@ final class Transitions {
         double slip = Vec.norm(s);
         if (requested == Phase.ROLLING || requested == Phase.REST) {
             if (slip > tolSpeed) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                throw run.reject(String.format(Locale.ROOT,
                     "start velocity violates the no-slip condition v = r w x n by %s m/s (tolerance %s m/s);"
                         + " build a rolling start with Simulation.rollingStart(centre, velocity)",
                     slip, tolSpeed));
@@ -307,9 +307,15 @@ final class Transitions {
         }
         run.model.access().set(dyn.ctx, run.ball, dyn.geo, jn, Phase.SLIDING, s, w, true);
         double gripJ = run.law.gripLimit(dyn.ctx);
+        if (!(gripJ >= 0)) {
+            throw dyn.badBound("grip limit", gripJ, "N·s");
+        }
         double jtn = Vec.norm(jt);
         if (jtn > gripJ) {
             double slideJ = run.law.slidingFriction(dyn.ctx);
+            if (!(slideJ >= 0 && slideJ < Double.POSITIVE_INFINITY)) {
+                throw dyn.badBound("sliding friction", slideJ, "N·s");
+            }
             double sp = Vec.norm(s);
             for (int i = 0; i < 3; i++) {
                 jt[i] = sp > 0 ? -slideJ * s[i] / sp : 0.0;
