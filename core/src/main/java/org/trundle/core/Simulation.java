@@ -50,6 +50,8 @@ public final class Simulation {
     private final Vector3D gravity;
     private final AppliedLoad load;
     private final SolverSettings settings;
+    /** The patch's compliant contact, or null for the rigid contact. */
+    private final Compliance compliance;
     /** The immutable problem handed to the engine. */
     private final Model model;
 
@@ -83,6 +85,17 @@ public final class Simulation {
         this.gravity = Checks.finite("gravity", b.gravity);
         this.load = b.load == null ? AppliedLoad.NONE : b.load;
         this.settings = b.settings == null ? SolverSettings.defaults() : b.settings;
+        this.compliance = b.compliance;
+        if (compliance != null) {
+            if (patches.size() > 1) {
+                throw new IllegalArgumentException("a compliant contact needs a scene of one patch, got "
+                    + patches.size() + " patches");
+            }
+            if (!motion.stationary()) {
+                throw new IllegalArgumentException("a compliant patch must not move: patch " + patches.get(0).id()
+                    + " has a motion and a compliant contact");
+            }
+        }
         for (Patch p : patches) {
             double kmax = p.surface().maxConcaveCurvature();
             if (Double.isFinite(kmax) && ball.radius() * kmax >= 1.0) {
@@ -102,7 +115,7 @@ public final class Simulation {
             });
             resolved.add(p.withLaw(l));
         }
-        this.model = new Model(ball, resolved, law, gravity, load, settings, ContextAccessor.INSTANCE);
+        this.model = new Model(ball, resolved, law, gravity, load, settings, compliance, ContextAccessor.INSTANCE);
     }
 
     /** @return the immutable model the engine runs (internal use: {@code RightHandSide}) */
@@ -117,7 +130,8 @@ public final class Simulation {
 
     /** @return a builder holding this simulation's configuration */
     public Builder toBuilder() {
-        Builder b = new Builder().ball(ball).law(law).gravity(gravity).load(load).settings(settings);
+        Builder b = new Builder().ball(ball).law(law).gravity(gravity).load(load).settings(settings)
+            .compliance(compliance);
         if (scene) {
             patches.forEach(b::patch);
         } else {
@@ -147,6 +161,11 @@ public final class Simulation {
     /** @return the surface's rigid motion (of the first patch in a scene; {@link SurfaceMotion#NONE} when it stands still) */
     public SurfaceMotion motion() {
         return motion;
+    }
+
+    /** @return the patch's compliant contact, or empty for the rigid contact */
+    public java.util.Optional<Compliance> compliance() {
+        return java.util.Optional.ofNullable(compliance);
     }
 
     /** @return the contact law */
@@ -330,8 +349,24 @@ public final class Simulation {
         private Vector3D gravity = Vector3D.ZERO;
         private AppliedLoad load = AppliedLoad.NONE;
         private SolverSettings settings = SolverSettings.defaults();
+        private Compliance compliance;
 
         private Builder() {
+        }
+
+        /**
+         * Makes the patch's contact compliant: instead of the rigid constraints, the ball moves as in flight
+         * under gravity, applied loads and the compliant contact's force ({@link Compliance}: Hertz law with
+         * Hunt–Crossley damping; the law gives the friction, regularised below the settle speed, and its
+         * couples). The contact starts and ends with {@code impact} and {@code lift_off} events; the phase
+         * stays {@code flight}; samples report the contact force while the ball presses the wall.
+         *
+         * @param c the compliant contact, or null for the rigid contact (the default)
+         * @return this builder
+         */
+        public Builder compliance(Compliance c) {
+            this.compliance = c;
+            return this;
         }
 
         /**

@@ -67,6 +67,7 @@ final class SummaryJson {
         en.put("pivoting_resistance_loss", e.pivotingResistanceLoss());
         en.put("impact_loss", e.impactLoss());
         en.put("other_loss", e.otherCoupleLoss());
+        en.put("contact_damping_loss", e.contactDampingLoss());
         en.put("applied_work", e.appliedWork());
         en.put("drive_work", e.driveWork());
         en.put("residual", e.residual());

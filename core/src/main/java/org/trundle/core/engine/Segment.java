@@ -35,6 +35,7 @@ final class Segment {
         for (ContactSlot s : run.slots) {
             list.add(new ImpactRule(run, s));
         }
+        list.add(new ReleaseRule(run));
         this.rules = list.toArray(new SwitchRule[0]);
         this.layouts = new int[run.slots.length][Phase.values().length][];
     }
@@ -54,8 +55,10 @@ final class Segment {
         int[][] perPhase = layouts[run.slot.index];
         int[] layout = perPhase[phase.ordinal()];
         if (layout == null) {
-            layout = StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE,
-                run.slot.moving);
+            // a compliant contact integrates flight with every loss (its friction, couples and damping)
+            layout = run.compliance != null ? StateMapper.identity()
+                : StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE,
+                    run.slot.moving);
             perPhase[phase.ordinal()] = layout;
         }
         double[] abs = new double[layout.length];
@@ -171,6 +174,9 @@ final class Segment {
             }
             run.lastGoodT = tc;
             run.lastGoodPhase = phase;
+            if (phase == Phase.FLIGHT && run.compliance != null) {
+                run.trackForce(tc, yc != null ? yc : run.snapshots.fullState(cur), phase);
+            }
             if (phase.inContact()) {
                 trackResiduals(run.snapshots.at(cur));
                 // a whole step (no event cut it short) whose end drifted past the thresholds: leave

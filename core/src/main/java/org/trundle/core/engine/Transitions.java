@@ -50,6 +50,20 @@ final class Transitions {
         double t = run.t;
         double[] y = run.y;
         double tolLen = run.set.contactTolerance() * r;
+        if (run.compliance != null) {
+            // a compliant contact (a one-patch scene that stands still) is a force in flight: any start
+            // integrates as flight; a start pressing the wall is a contact already under way (its damping
+            // set from the settle speed)
+            run.slot.query(t, run.centreOf(y));
+            double gap = dyn.geo.distance - r;
+            if (gap < -tolLen) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
+                    run.surface.name(), dyn.geo.distance, r));
+            }
+            run.touching = gap < 0 && dyn.geo.patchMargin >= 0;
+            return Phase.FLIGHT;
+        }
         if (requested == Phase.FLIGHT) {
             // a flight start needs no closest point: only a bound that shows no patch is penetrated
             for (ContactSlot s : run.slots) {
