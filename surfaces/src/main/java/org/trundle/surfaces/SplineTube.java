@@ -13,10 +13,10 @@ import org.trundle.core.SurfaceDomainException;
 import org.trundle.core.TriangleMesh;
 
 /**
- * A tube of constant or smoothly varying radius about a C² centreline: bent tubes, helical chutes.
- * The centreline {@code C(u)} is the natural cubic spline ({@link CubicSpline}, per coordinate)
+ * A tube of constant or smoothly varying radius about a C⁴ centreline: bent tubes, helical chutes.
+ * The centreline {@code C(u)} is the natural quintic spline ({@link QuinticSpline}, per coordinate)
  * through the given points, parameterised by cumulative chord length {@code u} (m); the radius
- * {@code R(u)} is the natural cubic spline through the radii given at the points. The ball is
+ * {@code R(u)} is the natural quintic spline through the radii given at the points. The ball is
  * {@link Side#INSIDE} the tube or {@link Side#OUTSIDE} it (a bent rod); the patch runs from the
  * first point to the last (edges {@code "from"}, {@code "to"}, open ends).
  *
@@ -28,7 +28,8 @@ import org.trundle.core.TriangleMesh;
  * with a constant radius the foot is radial from the nearest centreline point). It is solved by
  * Newton's method, {@code G' = −|C'|² + (x − C)·C'' + R'' ℓ − R' (e·C')}, seeded from the previous
  * foot of the run ({@link ContactGeometry#hint}{@code [0]}), so a query costs O(1); without a seed,
- * from the nearest knot or interval midpoint.
+ * from the knot or interval midpoint with the smallest signed {@code ℓ − R} (the cross-section the
+ * point lies in, not the wall of a neighbouring turn of a helix).
  *
  * <p>Geometry with {@code e = (x − C)/ℓ}, {@code σ = +1} outside and {@code −1} inside:
  * {@code p = C + R e}, {@code n = σ e}, {@code d = σ (ℓ − R)}, and, differentiating {@code e} with
@@ -69,10 +70,10 @@ public final class SplineTube implements Surface {
     private static final int FRAME_SAMPLES = 16;
     private static final int MAX_ITER = 50;
 
-    private final CubicSpline cx;
-    private final CubicSpline cy;
-    private final CubicSpline cz;
-    private final CubicSpline radius;
+    private final QuinticSpline cx;
+    private final QuinticSpline cy;
+    private final QuinticSpline cz;
+    private final QuinticSpline radius;
     private final boolean constantRadius;
     private final double constRadius;
     private final Side side;
@@ -197,10 +198,10 @@ public final class SplineTube implements Surface {
                 u[i] = u[i - 1] + chord;
             }
         }
-        this.cx = new CubicSpline(u, xs, "spline tube x");
-        this.cy = new CubicSpline(u, ys, "spline tube y");
-        this.cz = new CubicSpline(u, zs, "spline tube z");
-        this.radius = new CubicSpline(u, radii, "spline tube radius");
+        this.cx = new QuinticSpline(u, xs, "spline tube x");
+        this.cy = new QuinticSpline(u, ys, "spline tube y");
+        this.cz = new QuinticSpline(u, zs, "spline tube z");
+        this.radius = new QuinticSpline(u, radii, "spline tube radius");
         this.constantRadius = constant;
         this.constRadius = radii[0];
         this.side = side;
@@ -518,7 +519,9 @@ public final class SplineTube implements Surface {
                 double dx = x[0] - w[0];
                 double dy = x[1] - w[3];
                 double dz = x[2] - w[6];
-                double dd = Math.abs(Math.sqrt(dx * dx + dy * dy + dz * dz) - w[9]);
+                // signed ℓ − R: the cross-section the point lies in (or nearest outside), not the
+                // nearest wall of a neighbouring turn
+                double dd = Math.sqrt(dx * dx + dy * dy + dz * dz) - w[9];
                 if (dd < best) {
                     best = dd;
                     u = ui;

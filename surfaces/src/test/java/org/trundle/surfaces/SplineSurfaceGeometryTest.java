@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.SplittableRandom;
 
-import org.hipparchus.analysis.interpolation.SplineInterpolator;
-import org.hipparchus.analysis.polynomials.PolynomialSplineFunction;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -16,38 +14,11 @@ import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
 
 /**
- * Spline-based surfaces: the spline against Hipparchus' natural cubic {@link SplineInterpolator}
- * (a general-purpose reference library), the surfaces against the closed-form cylinder and against
- * finite differences of their own distance fields.
+ * Spline-based surfaces against the closed-form cylinder and against finite differences of their
+ * own distance fields (the spline itself: {@link QuinticSplineTest}).
  */
 class SplineSurfaceGeometryTest {
     static final long SEED = 777L;
-
-    @Test
-    void splineMatchesHipparchusNaturalCubic() {
-        SplittableRandom rnd = new SplittableRandom(SEED);
-        double[] u = new double[9];
-        double[] y = new double[9];
-        for (int i = 0; i < u.length; i++) {
-            u[i] = (i == 0 ? 0 : u[i - 1]) + rnd.nextDouble(0.1, 1.0);
-            y[i] = rnd.nextDouble(-1, 1);
-        }
-        CubicSpline ours = new CubicSpline(u, y, "test");
-        PolynomialSplineFunction ref = new SplineInterpolator().interpolate(u, y);
-        PolynomialSplineFunction d1 = ref.polynomialSplineDerivative();
-        PolynomialSplineFunction d2 = d1.polynomialSplineDerivative();
-        double[] e = new double[3];
-        for (int i = 0; i < 200; i++) {
-            double t = rnd.nextDouble(u[0], u[u.length - 1]);
-            ours.evaluate(t, e, 0);
-            assertEquals(ref.value(t), e[0], 1e-13);
-            assertEquals(d1.value(t), e[1], 1e-12);
-            assertEquals(d2.value(t), e[2], 1e-11);
-        }
-        IllegalArgumentException bad = assertThrows(IllegalArgumentException.class,
-            () -> new CubicSpline(new double[] {0, 1, 1}, new double[] {0, 0, 0}, "profile"));
-        assertTrue(bad.getMessage().contains("profile") && bad.getMessage().contains("index 2"), bad.getMessage());
-    }
 
     static void assertSameGeometry(Surface a, Surface b, double[] x, double len) {
         ContactGeometry ga = GeometryAssertions.query(a, x);
@@ -94,7 +65,7 @@ class SplineSurfaceGeometryTest {
         Vector3D a = new Vector3D(0, 0.2, 1).normalize();
         Vector3D e1 = a.orthogonal();
         Vector3D e2 = Vector3D.crossProduct(a, e1);
-        CubicSpline profile = new CubicSpline(z, r, "cup");
+        QuinticSpline profile = new QuinticSpline(z, r, "cup");
         double[] e = new double[3];
         for (int i = 0; i < 20; i++) {
             double zz = rnd.nextDouble(0.005, 0.095);
