@@ -209,6 +209,7 @@ public final class SplineTube implements Surface {
         // fit check data, sampled at 64 points per interval: the centreline curvature κ_c must
         // satisfy R κ_c < 1; concave curvatures are 1/R inside and κ_c/(1 − R κ_c) outside
         double[] w = new double[12];
+        double[] prev = new double[6];
         double kmax = 0;
         for (int i = 0; i < n - 1; i++) {
             for (int j = 0; j <= 64; j++) {
@@ -226,6 +227,30 @@ public final class SplineTube implements Surface {
                         r, t, 1 / kc));
                 }
                 kmax = Math.max(kmax, side == Side.INSIDE ? 1 / r : kc / (1 - r * kc));
+                // between samples: the turn of the tangent over the chord must also stay below 1/R,
+                // which catches a centreline that stops and turns back (collinear points that double
+                // back have κ_c = 0 at every sample, yet a half turn between two of them)
+                double sp = Math.sqrt(sp2);
+                if (j > 0) {
+                    double dot = (prev[3] * w[1] + prev[4] * w[4] + prev[5] * w[7]) / sp;
+                    double qx = (prev[4] * w[7] - prev[5] * w[4]) / sp;
+                    double qy = (prev[5] * w[1] - prev[3] * w[7]) / sp;
+                    double qz = (prev[3] * w[4] - prev[4] * w[1]) / sp;
+                    double ds = Math.sqrt((w[0] - prev[0]) * (w[0] - prev[0]) + (w[3] - prev[1]) * (w[3] - prev[1])
+                        + (w[6] - prev[2]) * (w[6] - prev[2]));
+                    double turn = Math.atan2(Math.sqrt(qx * qx + qy * qy + qz * qz), dot);
+                    if (r * turn > ds) {
+                        throw new IllegalArgumentException(String.format(Locale.ROOT,
+                            "spline tube centreline turns by %g degrees within %g m near u = %g m: it turns back or bends "
+                                + "more sharply than its radius %g m allows", Math.toDegrees(turn), ds, t, r));
+                    }
+                }
+                prev[0] = w[0];
+                prev[1] = w[3];
+                prev[2] = w[6];
+                prev[3] = w[1] / sp;
+                prev[4] = w[4] / sp;
+                prev[5] = w[7] / sp;
             }
         }
         this.maxConcave = constant ? kmax : Double.NaN;

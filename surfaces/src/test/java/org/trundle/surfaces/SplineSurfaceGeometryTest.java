@@ -133,4 +133,13 @@ class SplineSurfaceGeometryTest {
         assertTrue(chute.edgeName(h.edge).startsWith("angle"), chute.edgeName(h.edge));
         assertTrue(chute.hasEdges());
     }
+
+    @Test
+    void aCentrelineThatTurnsBackIsRejected() {
+        // collinear points that double back: the curvature is zero at every sample, yet the
+        // centreline stops and reverses (issue 18 item 6's input); the tube would overlap itself
+        Vector3D[] back = {Vector3D.ZERO, new Vector3D(0.1, 0, 0), Vector3D.ZERO, new Vector3D(0.1, 0, 0)};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new SplineTube(back, 0.012, Side.INSIDE));
+        assertTrue(e.getMessage().contains("turns back"), e.getMessage());
+    }
 }
