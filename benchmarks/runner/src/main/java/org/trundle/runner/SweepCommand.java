@@ -81,7 +81,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         }
         OutputFolder.check(out, force); // before the points are checked: that may take a while
         JsonNode doc = RunCommand.override(ScenarioFiles.read(scenario), duration, null);
-        Scenario.parse(doc);
+        RunOutputs.warn(spec.commandLine().getErr(), Scenario.parse(doc));
         SweepSpec sw = SweepSpec.parse(doc);
         ParameterSpace space = sw.space();
         for (int i = 0; i < space.size(); i++) {
