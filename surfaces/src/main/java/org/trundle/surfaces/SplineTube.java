@@ -16,7 +16,8 @@ import org.trundle.core.TriangleMesh;
  * A tube of constant or smoothly varying radius about a C⁴ centreline: bent tubes, helical chutes.
  * The centreline {@code C(u)} is the natural quintic spline ({@link QuinticSpline}, per coordinate)
  * through the given points, parameterised by cumulative chord length {@code u} (m); the radius
- * {@code R(u)} is the natural quintic spline through the radii given at the points. The ball is
+ * {@code R(u)} is the natural cubic spline ({@link CubicSpline}, C²; a varying radius keeps curvature
+ * steps at the knots, the quintic is not used for it yet: see the README's limits) through the radii given at the points. The ball is
  * {@link Side#INSIDE} the tube or {@link Side#OUTSIDE} it (a bent rod); the patch runs from the
  * first point to the last (edges {@code "from"}, {@code "to"}, open ends).
  *
@@ -73,7 +74,7 @@ public final class SplineTube implements Surface {
     private final QuinticSpline cx;
     private final QuinticSpline cy;
     private final QuinticSpline cz;
-    private final QuinticSpline radius;
+    private final CubicSpline radius;
     private final boolean constantRadius;
     private final double constRadius;
     private final Side side;
@@ -201,7 +202,7 @@ public final class SplineTube implements Surface {
         this.cx = new QuinticSpline(u, xs, "spline tube x");
         this.cy = new QuinticSpline(u, ys, "spline tube y");
         this.cz = new QuinticSpline(u, zs, "spline tube z");
-        this.radius = new QuinticSpline(u, radii, "spline tube radius");
+        this.radius = new CubicSpline(u, radii, "spline tube radius");
         this.constantRadius = constant;
         this.constRadius = radii[0];
         this.side = side;
@@ -614,10 +615,11 @@ public final class SplineTube implements Surface {
             f * (1 - ex * ex) + c * vx * vx, -f * ex * ey + c * vx * vy, -f * ex * ez + c * vx * vz,
             f * (1 - ey * ey) + c * vy * vy, -f * ey * ez + c * vy * vz,
             f * (1 - ez * ez) + c * vz * vz);
-        double h1 = f;
-        double h2 = f * (1 + (vx * vx + vy * vy + vz * vz) / gp);
-        double k1 = -h1 / (1 - d * h1);
-        double k2 = -h2 / (1 - d * h2);
+        // κ = −h/(1 − d h) with h = σ a/ℓ, written as −σ a/(ℓ − σ d a): no 1/ℓ, so the curvature
+        // stays accurate as the centre nears the centreline (where a ball of the bore's radius sits)
+        double a2 = 1 + (vx * vx + vy * vy + vz * vz) / gp;
+        double k1 = -sigma / (ell - sigma * d);
+        double k2 = -sigma * a2 / (ell - sigma * d * a2);
         out.curvature1 = Math.max(k1, k2);
         out.curvature2 = Math.min(k1, k2);
         double speed = Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);
