@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.SplittableRandom;
 
+import org.hipparchus.analysis.interpolation.SplineInterpolator;
+import org.hipparchus.analysis.polynomials.PolynomialSplineFunction;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -15,10 +17,37 @@ import org.trundle.core.Surface;
 
 /**
  * Spline-based surfaces against the closed-form cylinder and against finite differences of their
- * own distance fields (the spline itself: {@link QuinticSplineTest}).
+ * own distance fields; the cubic spline (a spline tube's radius) against Hipparchus' natural cubic
+ * {@link SplineInterpolator} (a general-purpose reference library); the quintic: {@link QuinticSplineTest}.
  */
 class SplineSurfaceGeometryTest {
     static final long SEED = 777L;
+
+    @Test
+    void splineMatchesHipparchusNaturalCubic() {
+        SplittableRandom rnd = new SplittableRandom(SEED);
+        double[] u = new double[9];
+        double[] y = new double[9];
+        for (int i = 0; i < u.length; i++) {
+            u[i] = (i == 0 ? 0 : u[i - 1]) + rnd.nextDouble(0.1, 1.0);
+            y[i] = rnd.nextDouble(-1, 1);
+        }
+        CubicSpline ours = new CubicSpline(u, y, "test");
+        PolynomialSplineFunction ref = new SplineInterpolator().interpolate(u, y);
+        PolynomialSplineFunction d1 = ref.polynomialSplineDerivative();
+        PolynomialSplineFunction d2 = d1.polynomialSplineDerivative();
+        double[] e = new double[3];
+        for (int i = 0; i < 200; i++) {
+            double t = rnd.nextDouble(u[0], u[u.length - 1]);
+            ours.evaluate(t, e, 0);
+            assertEquals(ref.value(t), e[0], 1e-13);
+            assertEquals(d1.value(t), e[1], 1e-12);
+            assertEquals(d2.value(t), e[2], 1e-11);
+        }
+        IllegalArgumentException bad = assertThrows(IllegalArgumentException.class,
+            () -> new CubicSpline(new double[] {0, 1, 1}, new double[] {0, 0, 0}, "profile"));
+        assertTrue(bad.getMessage().contains("profile") && bad.getMessage().contains("index 2"), bad.getMessage());
+    }
 
     static void assertSameGeometry(Surface a, Surface b, double[] x, double len) {
         ContactGeometry ga = GeometryAssertions.query(a, x);
