@@ -284,9 +284,11 @@ final class RunOutputs {
      */
     static String energyText(EnergyBudget e) {
         return String.format(Locale.ROOT, "initial %.6e J, final %.6e J; losses: friction %.3e J, rolling resistance"
-            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J; applied work %.3e J;"
+            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J;"
             + " budget residual %.1e of scale", e.initial(), e.fin(), e.slidingFrictionLoss(), e.rollingResistanceLoss(),
-            e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.appliedWork(), e.relativeResidual());
+            e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.contactDampingLoss() != 0
+                ? String.format(Locale.ROOT, ", contact damping %.3e J", e.contactDampingLoss()) : "",
+            e.appliedWork(), e.relativeResidual());
     }
 
     static String vec(Vector3D v) {
