@@ -15,7 +15,12 @@ public enum EventKind {
     /** The ball met the surface from flight. */
     IMPACT,
     /** The ball came to rest in static equilibrium. */
-    REST;
+    REST,
+    /**
+     * The contact point crossed an edge of its patch onto a neighbouring patch that continues the
+     * surface: the contact moves to the neighbour with no impulse.
+     */
+    HANDOVER;
 
     /** @return the lower-case name used in files ({@code lift_off}) */
     public String label() {

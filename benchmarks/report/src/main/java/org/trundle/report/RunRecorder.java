@@ -28,7 +28,8 @@ import org.trundle.core.SurfaceCoordinate;
  * <p>Columns: {@code t,x,y,z,vx,vy,vz,wx,wy,wz,phase,normal_force,friction_force} (s, m, m/s, rad/s,
  * phase label, N, N: the magnitude of the tangential contact force), then {@code qw,qx,qy,qz} (the
  * body-to-world orientation quaternion), {@code contact_x,contact_y,contact_z} (contact point, m,
- * empty in flight), {@code speed} (m/s), {@code height} (m, along {@code −g}) and {@code event} (the
+ * empty in flight), {@code speed} (m/s), {@code height} (m, along {@code −g}), {@code contacts} (the ids of
+ * the patches touched joined by {@code +}, empty in flight) and {@code event} (the
  * kinds of the events at that instant joined by {@code ;}, plus {@code start} and {@code end}),
  * then, when a surface is given, its natural coordinates at the closest point to the centre, one
  * column each, named {@code wall_<name>_<unit>} ({@link #header()}; empty where the surface has no
@@ -40,7 +41,7 @@ public final class RunRecorder implements RunObserver {
     /** The fixed leading columns of trajectory.csv. */
     public static final String HEADER = "t,x,y,z,vx,vy,vz,wx,wy,wz,phase,normal_force,friction_force";
     /** The columns after them. */
-    public static final String EXTRA = "qw,qx,qy,qz,contact_x,contact_y,contact_z,speed,height,event";
+    public static final String EXTRA = "qw,qx,qy,qz,contact_x,contact_y,contact_z,speed,height,contacts,event";
 
     /** An output step that may fail with an I/O error. */
     @FunctionalInterface
@@ -317,6 +318,7 @@ public final class RunRecorder implements RunObserver {
             b.append(",,,");
         }
         b.append(st.velocity().getNorm()).append(',').append(st.centre().dotProduct(up)).append(',');
+        b.append(String.join("+", s.contacts())).append(',');
         return b.toString();
     }
 

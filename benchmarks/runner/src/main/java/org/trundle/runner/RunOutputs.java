@@ -19,6 +19,7 @@ import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
 import org.trundle.core.SimulationException;
 import org.trundle.core.SolverSettings;
+import org.trundle.core.Surface;
 import org.trundle.report.HtmlReport;
 import org.trundle.report.RunPlot;
 import org.trundle.report.RunRecorder;
@@ -86,8 +87,11 @@ final class RunOutputs {
         Simulation sim = sc.simulation();
         checkRows(sc);
         Vector3D up = up(sc);
+        // wall coordinates only for one surface that stands still: a scene's or a moving patch's closest
+        // point would need the patch in contact and its pose at the sample time
+        Surface wall = sim.patches().size() == 1 && sim.motion().stationary() ? sim.surface() : null;
         RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo),
-            sim.surface());
+            wall);
         ContactsCsv contacts = sc.wallLoads().map(w -> new ContactsCsv(dir.resolve("contacts.csv"), w, rec)).orElse(null);
         RunObserver observer = contacts != null ? contacts : rec;
         RunResult result = null;
@@ -304,19 +308,22 @@ final class RunOutputs {
 
     /**
      * The energy account in one line: initial and final energy, every loss kind the budget books
-     * (sliding friction, rolling resistance, pivoting resistance, other couples, impacts), the work
-     * of applied loads, and the residual.
+     * (sliding friction, rolling resistance, pivoting resistance, other couples, impacts, and a compliant
+     * contact's damping when there is any), the work of applied loads, the drive work of moving surfaces
+     * when there is any, and the residual.
      *
      * @param e the budget
      * @return the text
      */
     static String energyText(EnergyBudget e) {
         return String.format(Locale.ROOT, "initial %.6e J, final %.6e J; losses: friction %.3e J, rolling resistance"
-            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J;"
+            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J%s;"
             + " budget residual %.1e of scale", e.initial(), e.fin(), e.slidingFrictionLoss(), e.rollingResistanceLoss(),
             e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.contactDampingLoss() != 0
                 ? String.format(Locale.ROOT, ", contact damping %.3e J", e.contactDampingLoss()) : "",
-            e.appliedWork(), e.relativeResidual());
+            e.appliedWork(), e.driveWork() != 0
+                ? String.format(Locale.ROOT, "; drive work of moving surfaces %.3e J", e.driveWork()) : "",
+            e.relativeResidual());
     }
 
     static String vec(Vector3D v) {

@@ -76,8 +76,9 @@ class RunCommandTest {
         String[] hit = rows.stream().filter(l -> l.contains(",impact,")).findFirst().orElseThrow().split(",", -1);
         // the foot of the centre on the floor z = 0 through the origin is (x, y, 0): its in-plane offsets
         // from the origin along any orthonormal pair satisfy u^2 + v^2 = x^2 + y^2 (plane geometry)
-        double u = Double.parseDouble(hit[23]);
-        double v = Double.parseDouble(hit[24]);
+        List<String> header = List.of(rows.get(0).split(",", -1));
+        double u = Double.parseDouble(hit[header.indexOf("wall_u_m")]);
+        double v = Double.parseDouble(hit[header.indexOf("wall_v_m")]);
         double x = Double.parseDouble(hit[1]);
         double y = Double.parseDouble(hit[2]);
         assertEquals(Math.hypot(x, y), Math.hypot(u, v), 1e-15);
