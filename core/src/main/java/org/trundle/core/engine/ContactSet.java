@@ -67,6 +67,10 @@ final class ContactSet {
     void setPhase(Phase p) {
         rest = p == Phase.REST;
         primary().mode = p == Phase.SLIDING ? Mode.SLIDING : p == Phase.FLIGHT ? Mode.APART : Mode.ROLLING;
+        if (p != Phase.ROLLING) {
+            // the pivoting stick is a sub-mode of rolling
+            primary().pivotHeld = false;
+        }
         summary = summarise();
     }
 }

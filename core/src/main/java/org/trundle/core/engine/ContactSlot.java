@@ -17,6 +17,16 @@ final class ContactSlot {
     final ContactLaw law;
     /** Whether the law adds couples ({@link ContactLaw#addsCouples()}), asked once. */
     final boolean couples;
+    /**
+     * Whether the law's couple about the normal is set-valued at zero relative normal spin
+     * ({@link ContactLaw#hasPivotStick()}) and the law adds couples; asked once. Without it the
+     * pivoting stick costs nothing.
+     */
+    final boolean pivotStick;
+    /** Whether the relative normal spin is held at zero by an exact pivoting stick (rolling only). */
+    boolean pivotHeld;
+    /** Time (s) of the last pivoting release, so that the hold is not taken again at the same instant. */
+    double pivotReleasedAt = Double.NaN;
     /** Geometry workspace of this patch. */
     final ContactGeometry geo = new ContactGeometry();
     /** The law's view of this contact. */
@@ -28,6 +38,7 @@ final class ContactSlot {
         this.surface = surface;
         this.law = law;
         this.couples = law.addsCouples();
+        this.pivotStick = couples && law.hasPivotStick();
         this.geo.scratch = surface.newScratch();
     }
 }

@@ -31,7 +31,7 @@ final class Segment {
         this.transitions = transitions;
         this.rules = new SwitchRule[] {
             new LiftOffRule(run), new RestRule(run), new FitRule(run), new ExitRule(run),
-            new SlipRule(run), new StickRule(run), new ImpactRule(run)};
+            new SlipRule(run), new StickRule(run), new ImpactRule(run), new PivotRule(run)};
     }
 
     /**

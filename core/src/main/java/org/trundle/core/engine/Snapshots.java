@@ -134,6 +134,10 @@ final class Snapshots {
             v.gripMargin = dyn.grip - dyn.neededTangential;
             v.slipSpeed = dyn.slipSpeed;
             v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
+            if (dyn.pivotStick && phase == Phase.ROLLING) {
+                v.normalSpin = dyn.normalSpin;
+                v.pivotMargin = dyn.pivotLimit - Math.abs(dyn.pivotNeeded);
+            }
             v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
                 + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
         }
