@@ -67,8 +67,7 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         String description = root.text("description", "");
         Ball ball = ball(root.section("ball"));
         Surface surface = SurfaceFactory.create(root.section("surface").without("material"));
-        wallLoadMaterials(root);
-        ContactLaw law = ContactFactory.create(root.section("contact"));
+        ContactLaw law = ContactFactory.create(root.section("contact"), wallLoadMaterials(root));
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
         Section run = root.section("run");
@@ -149,7 +148,8 @@ public record Scenario(JsonNode document, String description, Simulation simulat
             return Optional.empty();
         }
         if (!ball.has("material") || !surface.has("material")) {
-            throw new ScenarioException("wall loads need both ball.material and surface.material; "
+            throw new ScenarioException("ball.material and surface.material go together (wall loads and"
+                + " contact.spin_creep need both); "
                 + (ball.has("material") ? "surface.material" : "ball.material") + " is missing");
         }
         return Optional.of(new Material[] {material(ball.section("material")), material(surface.section("material"))});
