@@ -269,13 +269,14 @@ class TubeSpinTest {
      * {@code F_n = m ρ Ω²} and {@code μ = δ_p F_n/(k m r)} the reduced equations give
      * {@code Ẍ + λ²Ω² X = −λ²Ω μ sgn(Ẋ)}, a Coulomb-damped oscillator (any vibrations text): the extremes
      * of {@code |X|} fall by the constant step {@code ΔX = 2μ/Ω = 2 δ_p ρ Ω/(k r)} per half cycle, until
-     * {@code |X| < μ/Ω}, where the needed couple is within {@code δ_p F_n} and the ball should lock
-     * into a helix (held exactly only by the planned pivoting stick event; this test stops before).
-     * The law's smoothing band ({@code ω_s r = 1e-3 V}) weakens the couple only while
-     * {@code |ω·n| < ω_s}, about {@code 2 ω_s r/(|X| Ω)} near each extreme, when its work is at most
-     * {@code δ_p F_n ω_s} per second; against the half cycle's work {@code 2 δ_p F_n |X|/(λ² r Ω)} that
-     * shortens the step by at most {@code λ² (ω_s r/|X|)²}, below 2e-4 for the extremes used
-     * ({@code |X| ≥ 0.02 m/s}); each step within 1e-3.
+     * {@code |X| < μ/Ω}, where the needed couple is within {@code δ_p F_n} and the ball locks into a
+     * helix ({@link #coulombPivotingLocksIntoASteadyHelix}; this test stops before). Near each extreme
+     * {@code ω·n} passes zero: the solver's pivoting stick fires where it enters the law's smoothing band
+     * ({@code ω_s r = 1e-3 V}), removes the spin left ({@code ω_s}, changing {@code X² + λ²u²} by
+     * {@code λ²(ω_s r)²}) and, the needed couple being past the limit, lets it go on through zero; with
+     * the regularised couple's shortfall over the band this moves each step by a few times
+     * {@code λ² (ω_s r/|X|)²}, below 2e-4 for the extremes used ({@code |X| ≥ 0.02 m/s}), 5e-4
+     * measured; each step within 1e-3.
      */
     @Test
     void coulombPivotingLowersTheAxialExtremesByAConstantStep() {

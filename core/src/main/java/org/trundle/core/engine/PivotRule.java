@@ -11,12 +11,16 @@ import org.trundle.core.Phase;
  * zero spin ({@link org.trundle.core.ContactLaw#hasPivotStick()}, Coulomb pivoting
  * {@code M = −δ_p F_n sgn(ω·n)}). Two roles, by the slot's hold:
  * <ul>
- *   <li>free: the spin about the normal {@code s = ω·n} (rad/s) falls to the stick spin
- *       {@code ε/r}; the function is {@code σ s − ε/r} with {@code σ} the sign {@code s} leaves with at
- *       the segment start (or, starting within the band, the sign it is driven to, that of minus the
- *       needed couple), so that it is smooth and falls through zero both when {@code s} enters the
- *       band and when it crosses zero. Reaction: {@link Transitions#pivotStick()} removes the rest of
- *       {@code s} and takes the hold when the couple needed is within {@code δ_p F_n};</li>
+ *   <li>free: the spin about the normal {@code s = ω·n} (rad/s) enters the band {@code |s| < ω_b} in
+ *       which the law's Coulomb couple is regularised ({@link #band}: the smoothing spin
+ *       {@code ω_s}, at least {@code ε/r}); the function is {@code σ s − ω_b} with {@code σ} the sign
+ *       {@code s} has at the segment start (or, starting within the band, the sign it is driven to,
+ *       that of minus the needed couple), so that it is smooth. The band, not zero, is the trigger: when
+ *       the needed couple is within {@code δ_p F_n} the regularised couple would stop {@code s} inside the
+ *       band at {@code (|M_needed|/(δ_p F_n)) ω_s}, never at zero, and the helix would drain from
+ *       there (the smoothing leak). Reaction: {@link Transitions#pivotStick()} removes the rest of
+ *       {@code s} (at most {@code ω_b}) and takes the hold when the couple needed is within
+ *       {@code δ_p F_n};</li>
  *   <li>held: {@code δ_p F_n − |M_needed|} (N·m) falls to zero, where {@code M_needed = −I ω·(H v) −
  *       τ_app·n} is the contact couple about the normal that keeps {@code ω·n} constant
  *       ({@code d(ω·n)/dt = τ·n/I + ω·(H v)}); reaction: the hold is released.</li>
@@ -54,7 +58,7 @@ final class PivotRule extends SwitchRule {
         dyn.phase = Phase.ROLLING;
         dyn.evaluate(run.t, run.y);
         double s = dyn.normalSpin;
-        if (Math.abs(s) > run.stickEps / run.r) {
+        if (Math.abs(s) > band(run)) {
             sign = Math.signum(s);
         } else {
             sign = dyn.pivotNeeded > 0 ? -1 : 1;
@@ -63,7 +67,19 @@ final class PivotRule extends SwitchRule {
 
     @Override
     double value(Snapshot s) {
-        return held ? s.pivotMargin : sign * s.normalSpin - run.stickEps / run.r;
+        return held ? s.pivotMargin : sign * s.normalSpin - band(run);
+    }
+
+    /**
+     * The band of the spin about the normal within which a Coulomb pivoting couple is regularised:
+     * the smoothing spin {@code ω_s} ({@code smoothingSpinFraction} of the speed scale over the radius),
+     * at least the stick spin {@code ε/r}.
+     *
+     * @param run the run
+     * @return the band (rad/s)
+     */
+    static double band(Run run) {
+        return Math.max(run.set.smoothingSpinFraction() * run.speedScale, run.stickEps) / run.r;
     }
 
     @Override

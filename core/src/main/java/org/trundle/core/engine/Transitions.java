@@ -165,10 +165,6 @@ final class Transitions {
 
     // ---------------------------------------------------------------- pivoting stick
 
-    /** The spin (rad/s) below which the spin about the normal counts as zero: {@code ε/r}. */
-    double pivotStickSpin() {
-        return run.stickEps / r;
-    }
 
     /**
      * The pivoting stick at the run's state (rolling, law with a set-valued pivoting couple): the
@@ -197,7 +193,7 @@ final class Transitions {
 
     /**
      * Before a rolling segment of a law with a set-valued pivoting couple: takes the hold when the
-     * spin about the normal is already within {@link #pivotStickSpin()} and the needed couple within
+     * spin about the normal is already within {@link PivotRule#band} and the needed couple within
      * the limit (not at the instant of a release), drops it when the needed couple is past the limit.
      *
      * @return the event to log, or null
@@ -218,7 +214,7 @@ final class Transitions {
             }
             return null;
         }
-        if (Math.abs(dyn.normalSpin) <= pivotStickSpin() && margin > 0 && run.t != slot.pivotReleasedAt) {
+        if (Math.abs(dyn.normalSpin) <= PivotRule.band(run) && margin > 0 && run.t != slot.pivotReleasedAt) {
             return pivotStick() ? EventKind.PIVOT_STICK : null;
         }
         return null;
