@@ -128,10 +128,14 @@ public final class Simulation {
      * @param start start state; its phase says what is asked for (rolling, sliding: the centre must
      *     be at distance r from the surface within {@link SolverSettings#contactTolerance()};
      *     flight: anywhere not penetrating)
-     * @param duration simulated time (s), finite and positive
+     * @param duration simulated time (s), finite, positive and long enough to advance the clock
+     *     (1000 units in the last place of the end time, the integrator's shortest interval)
      * @return the result
      * @throws IllegalArgumentException for an inconsistent start, naming the quantity and value
-     * @throws SimulationException when the integration fails numerically
+     * @throws SimulationException for every failure of the run, with the last good state: a number
+     *     past the range of double, an answer from the surface or law that breaks its contract, an
+     *     exception thrown by user code (the cause), an interrupt of the thread
+     *     ({@link SimulationInterruptedException})
      */
     public RunResult run(BallState start, double duration) {
         return run(start, duration, RunObserver.NONE);
@@ -142,13 +146,21 @@ public final class Simulation {
      *
      * @param start start state (see {@link #run(BallState, double)})
      * @param duration simulated time (s)
-     * @param observer receives samples and events
+     * @param observer receives samples and events; what it throws ends the run with a
+     *     {@link SimulationException} whose cause it is
      * @return the result
+     * @throws IllegalArgumentException for an inconsistent start
+     * @throws SimulationException for every failure of the run (see {@link #run(BallState, double)})
      */
     public RunResult run(BallState start, double duration, RunObserver observer) {
         Checks.positive("duration", duration);
         if (start == null) {
             throw new IllegalArgumentException("start state must be given, got null");
+        }
+        double shortest = Engine.shortestInterval(start.time(), start.time() + duration);
+        if (!(duration >= shortest)) {
+            throw new IllegalArgumentException("duration " + duration + " s is too short to advance the clock from t = "
+                + start.time() + " s: the integrator needs at least " + shortest + " s");
         }
         return Engine.run(model, start, duration, observer == null ? RunObserver.NONE : observer);
     }

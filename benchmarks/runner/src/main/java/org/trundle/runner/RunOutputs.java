@@ -75,10 +75,19 @@ final class RunOutputs {
         RunObserver observer = contacts != null ? contacts : rec;
         RunResult result = null;
         String failure = null;
+        BallState lastGood = null;
         try {
             result = sim.run(sc.start(), sc.duration(), observer);
         } catch (java.io.UncheckedIOException e) {
             throw e.getCause();
+        } catch (SimulationException e) {
+            if (e.getCause() instanceof java.io.UncheckedIOException) {
+                // the library wraps what its observer throws: a recorder that could not write is
+                // an output error, not a failure of the run
+                throw ((java.io.UncheckedIOException) e.getCause()).getCause();
+            }
+            lastGood = e.lastGoodState();
+            failure = failureText(e);
         } catch (IllegalArgumentException e) {
             if (rec.validatedStart() == null) {
                 throw new ScenarioException("start: " + e.getMessage());
@@ -103,7 +112,7 @@ final class RunOutputs {
         if (result != null) {
             summary = SummaryJson.of(sc.description(), result);
         } else {
-            BallState last = rec.lastState() != null ? rec.lastState() : rec.validatedStart();
+            BallState last = lastGood != null ? lastGood : rec.lastState() != null ? rec.lastState() : rec.validatedStart();
             summary = SummaryJson.failed(sc.description(), failure, last != null ? last : sc.start(), rec.events());
         }
         if (contacts != null) {

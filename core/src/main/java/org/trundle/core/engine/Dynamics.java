@@ -309,6 +309,24 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     }
 
     /**
+     * Evaluates the derivative of a full-layout state for a caller outside the engine
+     * ({@code RightHandSide}), where the engine's own failure type must not escape.
+     *
+     * @param t time (s)
+     * @param y full-layout state
+     * @param yDot output derivative (full layout)
+     * @throws ArithmeticException when the derivative is not finite or a law or surface breaks its
+     *     contract, with the engine's message
+     */
+    public void evaluateChecked(double t, double[] y, double[] yDot) {
+        try {
+            evaluate(t, y, yDot);
+        } catch (RunFailure e) {
+            throw new ArithmeticException(e.getMessage());
+        }
+    }
+
+    /**
      * Evaluates the derivative of a full-layout state.
      *
      * @param t time (s)
@@ -325,6 +343,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         w[0] = y[W];
         w[1] = y[W + 1];
         w[2] = y[W + 2];
+        if (!Double.isFinite(c[0] + c[1] + c[2])) {
+            // an integrator stage past the range of double: say so before a surface sees the point
+            throw nonFiniteCentre(t, c);
+        }
         if (loaded) {
             q[0] = y[Q];
             q[1] = y[Q + 1];
@@ -417,7 +439,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[W + 2] = alz;
     }
 
-    /** Throws {@link NumericalFailure} naming the first non-finite component of a derivative. */
+    /** Throws {@link RunFailure} naming the first non-finite component of a derivative and its likely source. */
     private void checkFinite(double t, double[] yDot) {
         // one test for all: a sum of finite numbers of this size is finite, and NaN or ±∞ spread
         // (three partial sums, so that the additions do not form one long dependency chain)
@@ -433,11 +455,56 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         if (!Double.isFinite(sum)) {
             for (int i = 0; i < DIM; i++) {
                 if (!Double.isFinite(yDot[i])) {
-                    throw new NumericalFailure("non-finite derivative component " + i + " = " + yDot[i]
-                        + " at t = " + t + " s in phase " + phase.label());
+                    throw new RunFailure("non-finite derivative of " + StateMapper.componentName(i) + " = " + yDot[i]
+                        + " at t = " + t + " s in phase " + phase.label() + ": " + diagnose());
                 }
             }
         }
+    }
+
+    /** The likely source of a non-finite derivative, from what the last evaluation used (failure path only). */
+    private String diagnose() {
+        if (phase != Phase.FLIGHT && !(Vec.allFinite(geo.normal) && Vec.allFinite(geo.hessian))) {
+            return "surface " + surface.name() + " returned normal " + java.util.Arrays.toString(geo.normal)
+                + " and distance Hessian " + java.util.Arrays.toString(geo.hessian) + " at centre "
+                + java.util.Arrays.toString(c) + " m";
+        }
+        if (loaded && !(Vec.allFinite(fApp) && Vec.allFinite(tApp))) {
+            return "the applied load returned force " + java.util.Arrays.toString(fApp) + " N and torque "
+                + java.util.Arrays.toString(tApp) + " N·m";
+        }
+        if (phase != Phase.FLIGHT && !(Vec.allFinite(access.torque(ctx)) && Vec.allFinite(access.lossRate(ctx)))) {
+            return "contact law " + law.name() + " added couple " + java.util.Arrays.toString(access.torque(ctx))
+                + " N·m with loss rates " + java.util.Arrays.toString(access.lossRate(ctx)) + " W";
+        }
+        if (phase != Phase.FLIGHT && !Double.isFinite(normalForce)) {
+            return "the normal force F_n = m(-v.Hv - n.g) - n.F_app is " + normalForce + " N (mass " + m
+                + " kg, radius " + r + " m, speed " + norm(vel) + " m/s): the numbers exceed the range of double";
+        }
+        return "the numbers of the run (speed " + norm(vel) + " m/s, spin " + norm(w) + " rad/s, normal force "
+            + normalForce + " N, contact couple " + (phase == Phase.FLIGHT ? 0.0 : norm(access.torque(ctx)))
+            + " N·m, mass " + m + " kg, radius " + r + " m) exceed the range of double";
+    }
+
+    /** A centre that is not finite (an integrator stage whose numbers overflowed), for the failure. */
+    static RunFailure nonFiniteCentre(double t, double[] centre) {
+        return new RunFailure("the centre reached " + java.util.Arrays.toString(centre) + " m at t = " + t
+            + " s: the numbers of the run (its speeds, spins, forces or couples) exceed the range of double");
+    }
+
+    /**
+     * A contact law's force, impulse or couple bound that is NaN or negative (sliding friction: or
+     * infinite), which would let friction drive the motion it opposes.
+     */
+    RunFailure badBound(String what, double value, String unit) {
+        if (!Double.isFinite(ctx.normalForce())) {
+            // the law was handed a broken normal force: name where that came from
+            return new RunFailure(diagnose());
+        }
+        boolean impulse = ctx.isImpulse();
+        return new RunFailure("contact law " + law.name() + " returned " + what + " " + value + " " + unit
+            + " at normal " + (impulse ? "impulse " : "force ") + ctx.normalForce() + (impulse ? " N·s" : " N")
+            + "; it must be a number >= 0" + (what.startsWith("sliding") ? " and finite" : ""));
     }
 
     /**
@@ -524,7 +591,11 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         friction[2] = fz;
         normalForce = fn;
         neededTangential = Math.sqrt(fx * fx + fy * fy + fz * fz);
-        grip = law.gripLimit(ctx);
+        double gl = law.gripLimit(ctx);
+        if (!(gl >= 0)) {
+            throw badBound("grip limit", gl, "N");
+        }
+        grip = gl;
         slipSpeed = 0;
         if (couples) {
             double[] lr = access.lossRate(ctx);
@@ -584,6 +655,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         }
         access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, w, false);
         double f = law.slidingFriction(ctx);
+        if (!(f >= 0 && f < Double.POSITIVE_INFINITY)) {
+            throw badBound("sliding friction", f, "N");
+        }
         law.addCouples(ctx);
         double[] ct = access.torque(ctx);
         for (int i = 0; i < 3; i++) {
@@ -650,7 +724,11 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         zero(hv);
         access.set(ctx, ball, geo, fn, Phase.ROLLING, slip, hv, false);
         double scaleF = slack * m * Math.max(norm(g), 1e-300) + slack * norm(fApp);
-        if (norm(f) > law.gripLimit(ctx) + scaleF) {
+        double gl = law.gripLimit(ctx);
+        if (!(gl >= 0)) {
+            throw badBound("grip limit", gl, "N");
+        }
+        if (norm(f) > gl + scaleF) {
             return false;
         }
         cross(n, f, tau);
@@ -660,7 +738,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double tn = dot(tau, n);
         double tt = Math.sqrt(Math.max(0.0, dot(tau, tau) - tn * tn));
         double scaleT = scaleF * r + slack * norm(tApp);
-        return tt <= law.rollingHoldLimit(ctx) + scaleT && Math.abs(tn) <= law.pivotHoldLimit(ctx) + scaleT;
+        double holdRoll = law.rollingHoldLimit(ctx);
+        double holdPivot = law.pivotHoldLimit(ctx);
+        if (!(holdRoll >= 0)) {
+            throw badBound("rolling hold limit", holdRoll, "N·m");
+        }
+        if (!(holdPivot >= 0)) {
+            throw badBound("pivoting hold limit", holdPivot, "N·m");
+        }
+        return tt <= holdRoll + scaleT && Math.abs(tn) <= holdPivot + scaleT;
     }
 
     /** Thrown when the evaluation budget is used up. */
@@ -669,15 +755,6 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
 
         BudgetExhausted() {
             super("evaluation budget exhausted", null, false, false);
-        }
-    }
-
-    /** Thrown when a derivative is not finite. */
-    static final class NumericalFailure extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        NumericalFailure(String message) {
-            super(message, null, false, false);
         }
     }
 }

@@ -127,6 +127,7 @@ final class Segment {
                         break;
                     }
                     run.sampleIndex++;
+                    Interrupted.check();
                     ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
                     run.emitSample(ts, run.snapshots.fullState(si), phase, false);
                 }
@@ -153,6 +154,12 @@ final class Segment {
             run.extent = Math.max(run.extent, Math.sqrt(dx * dx + dy * dy + dz * dz));
             run.lastGoodY = yc;
             run.lastGoodState = yc == null ? cur : null;
+            if (yc == null) {
+                double[] sn = s.normal;
+                run.lastGoodNormal[0] = sn[0];
+                run.lastGoodNormal[1] = sn[1];
+                run.lastGoodNormal[2] = sn[2];
+            }
             run.lastGoodT = tc;
             run.lastGoodPhase = phase;
             if (phase.inContact()) {
@@ -165,6 +172,7 @@ final class Segment {
                     throw ProjectionRestart.INSTANCE;
                 }
             }
+            Interrupted.check();
         }
     }
 }

@@ -120,6 +120,26 @@ public final class StateMapper {
         return n == DIM ? IDENTITY : java.util.Arrays.copyOf(out, n);
     }
 
+    /**
+     * @param i a full-layout index
+     * @return the component's name for messages ("velocity y", "loss rolling resistance", …)
+     */
+    static String componentName(int i) {
+        String[] axis = {"x", "y", "z"};
+        if (i < V) {
+            return "centre " + axis[i - C];
+        } else if (i < Q) {
+            return "velocity " + axis[i - V];
+        } else if (i < W) {
+            return "quaternion q" + (i - Q);
+        } else if (i < LOSS) {
+            return "spin " + axis[i - W];
+        } else if (i < APPLIED) {
+            return "loss " + LossKind.values()[i - LOSS].name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
+        }
+        return i == APPLIED ? "applied work" : "path length";
+    }
+
     /** @return the full layout (identity map) */
     static int[] identity() {
         return IDENTITY;
