@@ -371,7 +371,7 @@ class RunFailureTest {
         RightHandSide rhs = new RightHandSide(sim, Phase.ROLLING);
         double[] y = RightHandSide.toArray(rolling(sim));
         y[0] = 2 * BREAK_X;
-        ArithmeticException e = assertThrows(ArithmeticException.class, () -> rhs.evaluate(0, y, new double[19]));
+        ArithmeticException e = assertThrows(ArithmeticException.class, () -> rhs.evaluate(0, y, new double[rhs.dimension()]));
         assertTrue(e.getMessage().contains("floor with NaN normal"), e.getMessage());
     }
 }

@@ -2,6 +2,7 @@ package org.trundle.runner;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -267,7 +268,8 @@ final class RunOutputs {
                 r.maxNormalForce(), r.maxDistanceError()));
         }
         out.println("Files:    " + String.join(", ", List.of(dir.resolve("summary.json").toString(),
-            dir.resolve("trajectory.csv").toString())) + (o.plotted() ? ", " + dir.resolve("run.png")
+            dir.resolve("trajectory.csv").toString())) + (Files.exists(dir.resolve("contacts.csv")) ? ", "
+            + dir.resolve("contacts.csv") : "") + (o.plotted() ? ", " + dir.resolve("run.png")
             : " (no picture: --no-plot)"));
         out.flush();
     }

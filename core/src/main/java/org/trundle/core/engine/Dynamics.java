@@ -2,6 +2,7 @@ package org.trundle.core.engine;
 
 import static org.trundle.core.engine.StateMapper.APPLIED;
 import static org.trundle.core.engine.StateMapper.C;
+import static org.trundle.core.engine.StateMapper.DAMPING;
 import static org.trundle.core.engine.StateMapper.DIM;
 import static org.trundle.core.engine.StateMapper.LOSS;
 import static org.trundle.core.engine.StateMapper.PATH;
@@ -17,6 +18,7 @@ import static org.trundle.core.engine.Vec.zero;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.trundle.core.AppliedLoad;
 import org.trundle.core.Ball;
+import org.trundle.core.Compliance;
 import org.trundle.core.ContactContext;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;
@@ -66,6 +68,16 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final Surface surface;
     private final ContactLaw law;
     private final AppliedLoad load;
+    /** The patch's compliant contact, or null for the rigid contact. */
+    private final Compliance compliance;
+    /** Normal speed (m/s) at which the current compliant contact began (sets its damping). */
+    double touchSpeed = 1.0;
+    /** Slip speed (m/s) below which a compliant contact's friction is viscous (regularised Coulomb). */
+    double compliantSlipSpeed = 1e-3;
+    /** Whether the last flight evaluation found the ball pressing a compliant patch. */
+    boolean pressing;
+    /** Damping power (W) of the last compliant evaluation. */
+    private double lossDamp;
 
     final ContactGeometry geo;
     final ContactContext ctx;
@@ -161,10 +173,12 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     }
 
     Dynamics(Model model, ContactSlot slot) {
-        this(model.ball(), slot, model.gravity().toArray(), model.load(), model.access());
+        this(model.ball(), slot, model.gravity().toArray(), model.load(), model.access(), model.compliance());
     }
 
-    private Dynamics(Ball ball, ContactSlot slot, double[] gravity, AppliedLoad load, ContextAccess access) {
+    private Dynamics(Ball ball, ContactSlot slot, double[] gravity, AppliedLoad load, ContextAccess access,
+                     Compliance compliance) {
+        this.compliance = compliance;
         this.ball = ball;
         this.r = ball.radius();
         this.m = ball.mass();
@@ -363,6 +377,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         lossPivot = 0;
         lossSlide = 0;
         lossOther = 0;
+        lossDamp = 0;
+        pressing = false;
         // one method per phase keeps each small enough for the JIT to inline its callees
         if (phase == Phase.ROLLING || phase == Phase.REST) {
             rollingForces(t, y, yDot);
@@ -394,7 +410,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double ix = tau[0];
         double iy = tau[1];
         double iz = tau[2];
-        if (phase != Phase.FLIGHT) {
+        if (phase != Phase.FLIGHT || pressing) {
             double[] n = geo.normal;
             double nx = n[0];
             double ny = n[1];
@@ -417,6 +433,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
         yDot[APPLIED] = applied;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        yDot[DAMPING] = lossDamp;
         checkFinite(t, yDot);
     }
 
@@ -451,7 +468,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             s1 += yDot[i + 1];
             s2 += yDot[i + 2];
         }
-        double sum = s0 + s1 + s2 + yDot[18];
+        double sum = s0 + s1 + s2 + yDot[18] + yDot[19];
         if (!Double.isFinite(sum)) {
             for (int i = 0; i < DIM; i++) {
                 if (!Double.isFinite(yDot[i])) {
@@ -690,6 +707,63 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         neededTangential = 0;
         grip = Double.NaN;
         slipSpeed = 0;
+        if (compliance != null) {
+            compliantForces(t);
+        }
+    }
+
+    /**
+     * The force of a compliant contact in flight ({@link Compliance}): with the approach
+     * {@code δ = r − d > 0} on the patch, the normal force {@code F_n = K δ^{3/2}(1 + χ δ̇/v₀)} (clamped at
+     * zero; {@code K} from the wall's principal curvatures at the foot point, {@code δ̇ = −n·v}, {@code v₀} the
+     * normal speed at which this contact began), the law's friction {@code f(F_n)} against the slip of the
+     * contact point {@code s = P(v − r ω × n)}, regularised below the slip speed {@code ε_c}:
+     * {@code F_t = −f s / max(|s|, ε_c)} (viscous below {@code ε_c}, Coulomb above), and the law's couples. The
+     * forces act at {@code c − r n} (the approach, a few micrometres, is neglected in the lever arm). The
+     * damping power {@code (F_n − K δ^{3/2}) δ̇} is booked as contact damping; the elastic part is stored in
+     * the contact and counted in the energy ({@link Model#energy}).
+     */
+    private void compliantForces(double t) {
+        surface.query(t, c, geo);
+        double delta = r - geo.distance;
+        if (!(delta > 0) || geo.patchMargin < 0) {
+            return;
+        }
+        pressing = true;
+        double[] n = geo.normal;
+        // the integrator's trial stages of a long flight step may land deep in the wall and very fast: hold
+        // the law at an approach of one radius and an approach rate of ten times the impact speed there (no
+        // accepted state comes near either; without the hold such a trial stage could overflow)
+        delta = Math.min(delta, r);
+        double rate = Math.min(-dot(vel, n), 10 * touchSpeed);
+        double kh = compliance.stiffness(r, geo.curvature1, geo.curvature2);
+        double elastic = kh * delta * Math.sqrt(delta);
+        double fn = compliance.force(kh, delta, rate, touchSpeed);
+        ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
+        double sp = norm(slip);
+        access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, w, false);
+        double f = fn > 0 ? law.slidingFriction(ctx) : 0.0;
+        double visc = f / Math.max(sp, compliantSlipSpeed);
+        for (int i = 0; i < 3; i++) {
+            friction[i] = -visc * slip[i];
+            force[i] = fn * n[i] + friction[i];
+        }
+        if (couples && fn > 0) {
+            law.addCouples(ctx);
+            double[] ct = access.torque(ctx);
+            for (int i = 0; i < 3; i++) {
+                tau[i] += ct[i];
+            }
+            double[] lr = access.lossRate(ctx);
+            lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+        }
+        normalForce = fn;
+        neededTangential = visc * sp;
+        slipSpeed = sp;
+        lossSlide = visc * sp * sp;
+        lossDamp = (fn - elastic) * rate;
     }
 
     /**

@@ -248,6 +248,8 @@ public final class Engine {
         run.impactSlack = 1e-9 * r;
         run.restSpeed = run.set.restSpeedFraction() * run.speedScale;
         run.dyn.stickEps = run.stickEps;
+        run.dyn.compliantSlipSpeed = run.settleSpeed;
+        run.dyn.touchSpeed = run.settleSpeed;
         run.model.access().setSpins(run.slot.ctx, run.set.smoothingSpinFraction() * run.speedScale / r,
             run.stickEps / r);
         double tol = run.set.tolerance();
@@ -306,7 +308,7 @@ public final class Engine {
             y[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.OTHER.ordinal()],
-            run.impactLoss, y[APPLIED], scale);
+            run.impactLoss, y[APPLIED], scale, y[StateMapper.DAMPING]);
         RunResult result = new RunResult(reason, message, endState, run.events, run.spans, budget,
             run.maxDistanceError, run.maxNormalForce, run.dyn.evaluations, run.steps);
         String bad = Results.nonFinite(result);

@@ -12,6 +12,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
+import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EventKind;
 import org.trundle.core.Phase;
@@ -45,6 +46,10 @@ final class Run {
     final ContactLaw law;
     final Dynamics dyn;
     final Snapshots snapshots;
+    /** The patch's compliant contact, or null for the rigid contact. */
+    final Compliance compliance;
+    /** With a compliant contact: whether the ball is in a contact that began with an impact event. */
+    boolean touching;
     private final double[] centreWork = new double[3];
 
     // scales of the run (set at the start)
@@ -109,6 +114,7 @@ final class Run {
         this.surface = slot.surface;
         this.law = slot.law;
         this.dyn = new Dynamics(model, slot);
+        this.compliance = model.compliance();
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
         this.dyn.stageObserver = snapshots::stageAtStepEnd;
@@ -223,7 +229,7 @@ final class Run {
     }
 
     void trackForce(double ts, double[] ys, Phase p) {
-        if (p.inContact()) {
+        if (p.inContact() || compliance != null) {
             Phase keep = dyn.phase;
             dyn.phase = p;
             dyn.evaluate(ts, ys);
@@ -252,7 +258,7 @@ final class Run {
         Vector3D fr = new Vector3D(dyn.friction[0], dyn.friction[1], dyn.friction[2]);
         Vector3D cp = null;
         Vector3D onBall = null;
-        boolean touching = p != Phase.FLIGHT;
+        boolean touching = p != Phase.FLIGHT || dyn.pressing;
         if (touching) {
             double[] n = dyn.geo.normal;
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);

@@ -53,6 +53,17 @@ final class Transitions {
         double gap = dyn.geo.distance - r;
         double tolLen = run.set.contactTolerance() * r;
         String name = run.surface.name();
+        if (run.compliance != null) {
+            // a compliant contact is a force in flight: any start integrates as flight; a start pressing the
+            // wall is a contact already under way (its damping set from the settle speed)
+            if (gap < -tolLen) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
+                    name, dyn.geo.distance, r));
+            }
+            run.touching = gap < 0 && dyn.geo.patchMargin >= 0;
+            return Phase.FLIGHT;
+        }
         if (requested == Phase.FLIGHT) {
             if (gap < -tolLen) {
                 throw run.reject(String.format(Locale.ROOT,
