@@ -120,7 +120,7 @@ final class Segment {
             Dynamics dyn = run.dyn;
             double tc = cur.getTime();
             boolean observed = run.observer != RunObserver.NONE;
-            double[] yc = observed || phase == Phase.SLIDING ? run.snapshots.fullState(cur) : null;
+            double[] yc = observed ? run.snapshots.fullState(cur) : null;
             double interval = run.set.sampleInterval();
             if (interval > 0) {
                 while (true) {
@@ -136,18 +136,17 @@ final class Segment {
             } else if (tc < run.endTime && observed) {
                 run.emitSample(tc, yc, phase, false);
             }
+            // kinetic energy, centre and slip from the snapshot (every layout starts with the
+            // centre), which the integrator's FSAL stage at the step end filled without an evaluation
+            Snapshot s = run.snapshots.at(cur);
             if (phase == Phase.SLIDING) {
-                dyn.phase = Phase.SLIDING;
-                dyn.evaluate(tc, yc);
-                double sp = dyn.slipSpeed;
+                double sp = s.slipSpeed;
                 if (sp > run.stickEps) {
                     for (int i = 0; i < 3; i++) {
-                        dyn.slideDir0[i] = dyn.slip[i] / sp;
+                        dyn.slideDir0[i] = s.slip[i] / sp;
                     }
                 }
             }
-            // kinetic energy and centre from the snapshot (every layout starts with the centre)
-            Snapshot s = run.snapshots.at(cur);
             double[] yk = run.snapshots.lastKey();
             run.maxKinetic = Math.max(run.maxKinetic, s.kinetic);
             double dx = yk[0] - run.c0[0];

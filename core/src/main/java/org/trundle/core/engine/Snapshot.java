@@ -12,6 +12,8 @@ final class Snapshot {
     double gripMargin;
     /** Slip speed |s| (m/s); sliding. */
     double slipSpeed;
+    /** Contact-point slip velocity {@code P(v − r ω × n)} (m/s); sliding. */
+    final double[] slip = new double[3];
     /** Speed measure |v| + r|ω| (m/s); contact phases. */
     double speed;
     /** Patch margin (m), positive inside the patch. */

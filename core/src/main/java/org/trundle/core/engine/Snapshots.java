@@ -21,16 +21,23 @@ final class Snapshots {
 
     /**
      * Drift of the quaternion norm {@code ||q| − 1|} above which the step-end handler restarts the
-     * integrator only to normalise it. The norm does not enter the equations of motion (the spin
-     * is integrated on its own and every output state is normalised), so a tight threshold
-     * (1e-12 formerly) restarted the integration on most steps at the default tolerance for no
-     * gain in accuracy; the quaternion is still normalised whenever a projection happens anyway.
+     * integrator only to normalise it, at a distance threshold of 1e-10 r; it scales with the
+     * distance threshold in force
+     * ({@link org.trundle.core.SolverSettings#effectiveProjectionThreshold()}).
+     * The norm does not enter the equations of motion (the spin is integrated on its own and every
+     * output state is normalised), so a tight threshold (1e-12 formerly) restarted the integration
+     * on most steps for no gain in accuracy; the quaternion is still normalised whenever a
+     * projection happens anyway.
      */
     static final double QUATERNION_DRIFT = 1e-9;
 
     private final Run run;
     private final Dynamics dyn;
     private final double r;
+    /** Distance threshold in force, as a fraction of the radius. */
+    private final double distanceThreshold;
+    /** Quaternion norm threshold in force. */
+    private final double quaternionThreshold;
     private final double[][] cacheY = new double[CACHE][DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
@@ -49,6 +56,8 @@ final class Snapshots {
         this.run = run;
         this.dyn = run.dyn;
         this.r = run.r;
+        this.distanceThreshold = run.set.effectiveProjectionThreshold();
+        this.quaternionThreshold = QUATERNION_DRIFT * (distanceThreshold / 1e-10);
         for (int i = 0; i < CACHE; i++) {
             values[i] = new Snapshot();
         }
@@ -140,6 +149,11 @@ final class Snapshots {
             v.normalForce = dyn.normalForce;
             v.gripMargin = dyn.grip - dyn.neededTangential;
             v.slipSpeed = dyn.slipSpeed;
+            if (phase == Phase.SLIDING) {
+                v.slip[0] = dyn.slip[0];
+                v.slip[1] = dyn.slip[1];
+                v.slip[2] = dyn.slip[2];
+            }
             v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
             if (dyn.pivotStick && phase == Phase.ROLLING) {
                 v.normalSpin = dyn.normalSpin;
@@ -210,8 +224,8 @@ final class Snapshots {
      * {@link Snapshot#drift}). Rolling has no slip drift: its velocity is derived, {@code v = r ω × n}.
      */
     double drift(double[] ys, double distance) {
-        double d = Math.abs(distance - r) / (run.set.projectionThreshold() * r);
-        return Math.max(d, Math.abs(StateMapper.quaternionNorm(ys) - 1) / QUATERNION_DRIFT);
+        double d = Math.abs(distance - r) / (distanceThreshold * r);
+        return Math.max(d, Math.abs(StateMapper.quaternionNorm(ys) - 1) / quaternionThreshold);
     }
 
     /**
