@@ -18,6 +18,11 @@ public enum EventKind {
     /** The ball came to rest in static equilibrium. */
     REST,
     /**
+     * The contact point crossed an edge of its patch onto a neighbouring patch that continues the
+     * surface: the contact moves to the neighbour with no impulse.
+     */
+    HANDOVER,
+    /**
      * While rolling, the spin about the normal fell to zero and the couple needed to keep it there is
      * within the law's set-valued pivoting couple: it is held at zero (exact pivoting stick).
      */

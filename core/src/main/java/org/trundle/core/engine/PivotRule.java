@@ -27,6 +27,11 @@ import org.trundle.core.Phase;
  * </ul>
  * While held, {@link Dynamics} replaces the law's couple about the normal by {@code M_needed}; the
  * rest of the motion is unchanged (the couple about the normal does not enter the tangential force).
+ *
+ * <p>Limit: only on a patch that stands still. On a moving patch ({@link ContactSlot#pivotStick} is
+ * false there) the hold is not taken; the law's regularised couple acts on the relative spin
+ * {@code (ω − Ω)·n} as for any other law. A hold taken on one patch ends at a hand-over
+ * ({@link ContactSet#activate}); the next patch may take its own.
  */
 final class PivotRule extends SwitchRule {
     /** The sign of the free spin about the normal watched in this segment. */

@@ -42,4 +42,13 @@ final class Snapshot {
     double pivotMargin;
     /** Kinetic energy (J). */
     double kinetic;
+    /**
+     * Flight: per patch (scene order), a lower bound of the centre's signed distance from the patch's
+     * surface (m), exact within two radii of it (see {@link ContactSlot#distanceBound}).
+     */
+    final double[] slotDistance;
+
+    Snapshot(int patches) {
+        slotDistance = new double[patches];
+    }
 }
