@@ -19,7 +19,8 @@ import org.trundle.scenario.ScenarioFiles;
  * {@code end_message} (why a failed or budget run stopped, else empty); {@code end_time} (s);
  * {@code end_state} ({@code position} m, {@code velocity} m/s, {@code spin} rad/s, {@code phase});
  * {@code events} (each {@code time}, {@code kind} — {@code exit}, {@code slip}, {@code stick},
- * {@code lift_off}, {@code impact}, {@code rest}, {@code handover} —, {@code position}, {@code velocity},
+ * {@code lift_off}, {@code impact}, {@code rest}, {@code handover}, {@code pivot_stick}, {@code pivot_release} —,
+ * {@code position}, {@code velocity},
  * {@code spin} at the instant, {@code phase_after}, {@code impulse} N·s, for an exit the
  * {@code edge} crossed, {@code patch} (the id of the patch it happened on) and for a hand-over
  * {@code from} and {@code to}); {@code energy} (J: {@code initial}, {@code final}, {@code friction_loss},

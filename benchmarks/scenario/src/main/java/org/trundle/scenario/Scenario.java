@@ -70,10 +70,10 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         root.allow(TOP_KEYS.toArray(new String[0]));
         String description = root.text("description", "");
         Ball ball = ball(root.section("ball"));
-        List<Patch> patches = SceneFactory.patches(root);
-        wallLoadMaterials(root);
+        Optional<Material[]> materials = wallLoadMaterials(root);
+        List<Patch> patches = SceneFactory.patches(root, materials);
         Section contactSection = root.section("contact");
-        ContactLaw law = ContactFactory.create(contactSection.without("compliant"));
+        ContactLaw law = ContactFactory.create(contactSection.without("compliant"), materials);
         Compliance compliance = compliance(root, contactSection, law);
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
@@ -165,7 +165,8 @@ public record Scenario(JsonNode document, String description, Simulation simulat
             return Optional.empty();
         }
         if (!ball.has("material") || !surface.has("material")) {
-            throw new ScenarioException("wall loads need both ball.material and surface.material; "
+            throw new ScenarioException("ball.material and surface.material go together (wall loads and"
+                + " contact.spin_creep need both); "
                 + (ball.has("material") ? "surface.material" : "ball.material") + " is missing");
         }
         return Optional.of(new Material[] {material(ball.section("material")), material(surface.section("material"))});

@@ -3,9 +3,11 @@ package org.trundle.scenario;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 
 import org.trundle.core.ContactLaw;
+import org.trundle.core.Material;
 import org.trundle.core.Patch;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceMotion;
@@ -27,9 +29,11 @@ final class SceneFactory {
 
     /**
      * @param root the scenario's root
+     * @param materials the ball's and the wall's material ({@code ball.material}, {@code surface.material}),
+     *     or empty (always empty for a {@code surfaces} list: a patch's {@code contact.spin_creep} is refused)
      * @return the patches, with their own laws where they give one (null: the scenario's)
      */
-    static List<Patch> patches(Section root) {
+    static List<Patch> patches(Section root, Optional<Material[]> materials) {
         if (root.has("surfaces")) {
             if (root.has("surface")) {
                 throw new ScenarioException("give either surface (one patch) or surfaces (a list of patches), not both");
@@ -48,7 +52,7 @@ final class SceneFactory {
                 if (!ids.add(id)) {
                     throw new ScenarioException(s.where("id") + " = \"" + id + "\" is used twice; ids must be unique");
                 }
-                out.add(patch(id, s));
+                out.add(patch(id, s, materials));
             }
             return out;
         }
@@ -57,12 +61,12 @@ final class SceneFactory {
             throw new ScenarioException(s.where("contact") + ": the one surface uses the scenario's contact section;"
                 + " a contact per patch is for the entries of surfaces");
         }
-        return List.of(patch(Scenario.PATCH_ID, s));
+        return List.of(patch(Scenario.PATCH_ID, s, materials));
     }
 
-    private static Patch patch(String id, Section s) {
+    private static Patch patch(String id, Section s, Optional<Material[]> materials) {
         SurfaceMotion motion = s.has("motion") ? motion(s.section("motion")) : SurfaceMotion.NONE;
-        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact")) : null;
+        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact"), materials) : null;
         Surface surface = SurfaceFactory.create(s.without("id").without("motion").without("contact"));
         return new Patch(id, surface, motion, law);
     }

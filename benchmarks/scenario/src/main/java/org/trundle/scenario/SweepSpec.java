@@ -153,7 +153,7 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
      */
     static List<String> outcomes(Section root) {
         List<String> out = new ArrayList<>();
-        for (org.trundle.core.Patch p : SceneFactory.patches(root)) {
+        for (org.trundle.core.Patch p : SceneFactory.patches(root, java.util.Optional.empty())) {
             org.trundle.core.Surface surface = p.surface();
             if (surface.hasEdges()) {
                 for (int i = 0; i < 16; i++) {

@@ -39,6 +39,8 @@ final class ContactSet {
         if (s != active) {
             s.mode = active.mode;
             active.mode = Mode.APART;
+            // a pivoting hold belongs to the patch it was taken on
+            active.pivotHeld = false;
             active = s;
             summary = summarise();
         }
@@ -86,6 +88,10 @@ final class ContactSet {
     void setPhase(Phase p) {
         rest = p == Phase.REST;
         active.mode = p == Phase.SLIDING ? Mode.SLIDING : p == Phase.FLIGHT ? Mode.APART : Mode.ROLLING;
+        if (p != Phase.ROLLING) {
+            // the pivoting stick is a sub-mode of rolling
+            active.pivotHeld = false;
+        }
         summary = summarise();
     }
 }

@@ -32,6 +32,17 @@ final class ContactSlot {
     final ContactLaw law;
     /** Whether the law adds couples ({@link ContactLaw#addsCouples()}), asked once. */
     final boolean couples;
+    /**
+     * Whether the law's couple about the normal is set-valued at zero relative normal spin
+     * ({@link ContactLaw#hasPivotStick()}), the law adds couples and the patch stands still; asked once.
+     * Without it the pivoting stick costs nothing. On a moving patch the hold is not taken (the
+     * law's regularised couple acts on the relative spin instead; see {@link PivotRule}).
+     */
+    final boolean pivotStick;
+    /** Whether the relative normal spin is held at zero by an exact pivoting stick (rolling only). */
+    boolean pivotHeld;
+    /** Time (s) of the last pivoting release, so that the hold is not taken again at the same instant. */
+    double pivotReleasedAt = Double.NaN;
     /** Geometry workspace of this patch (world frame). */
     final ContactGeometry geo = new ContactGeometry();
     /** The law's view of this contact. */
@@ -59,6 +70,7 @@ final class ContactSlot {
         this.moving = !motion.stationary();
         this.law = patch.law();
         this.couples = law.addsCouples();
+        this.pivotStick = couples && law.hasPivotStick() && !moving;
         this.geo.scratch = surface.newScratch();
     }
 

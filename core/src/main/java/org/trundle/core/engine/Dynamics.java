@@ -134,6 +134,20 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final boolean loaded;
     /** Whether the law may add couples (without, the couple calls and loss reads are skipped while rolling). */
     private boolean couples;
+    /**
+     * Whether the active slot's law has a set-valued couple about the normal and its patch stands still
+     * (the pivoting stick is watched; on a moving patch it is not, see {@link PivotRule}).
+     */
+    boolean pivotStick;
+    /** Spin about the normal ω·n (rad/s) of the last rolling evaluation; only with {@link #pivotStick}. */
+    double normalSpin;
+    /**
+     * The contact couple about the normal (N·m) that keeps {@code ω·n} constant, of the last rolling
+     * evaluation: {@code −I ω·(H v) − τ_app·n}; only with {@link #pivotStick}.
+     */
+    double pivotNeeded;
+    /** The law's set-valued pivoting couple (N·m) of the last rolling evaluation; only with {@link #pivotStick}. */
+    double pivotLimit;
     /** Receives the state and results of an integrator stage evaluated at the same time as the one before. */
     interface StageObserver {
         void stage(double t, double[] compact, double[] full, double[] fullDot);
@@ -206,6 +220,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         this.geo = s.geo;
         this.ctx = s.ctx;
         this.couples = s.couples;
+        this.pivotStick = s.pivotStick;
         if (!s.contextReady) {
             // the ball and the geometry workspace never change: the hot path sets only the contact values
             access.set(ctx, ball, geo, 0.0, Phase.ROLLING, slip, w, false);
@@ -595,6 +610,27 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             ty += ct[1];
             tz += ct[2];
         }
+        double pivotLossFix = 0;
+        if (pivotStick) {
+            // d(ω·n)/dt = τ·n/I + ω·(H v) (the contact force has no moment about n): the couple
+            // about the normal that keeps ω·n constant; it does not enter the tangential force
+            double sn = wx * nx + wy * ny + wz * nz;
+            double tAppN = loaded ? tApp[0] * nx + tApp[1] * ny + tApp[2] * nz : 0.0;
+            double needed = -inertia * (wx * hvx + wy * hvy + wz * hvz) - tAppN;
+            normalSpin = sn;
+            pivotNeeded = needed;
+            pivotLimit = law.pivotStickLimit(ctx);
+            if (slot.pivotHeld) {
+                // held: the law's couple about the normal (single-valued parts vanish at zero spin)
+                // is replaced by the needed one, and its power with it
+                double lawN = tx * nx + ty * ny + tz * nz - tAppN;
+                double d = needed - lawN;
+                tx += d * nx;
+                ty += d * ny;
+                tz += d * nz;
+                pivotLossFix = (lawN - needed) * sn;
+            }
+        }
         tau[0] = tx;
         tau[1] = ty;
         tau[2] = tz;
@@ -623,7 +659,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         if (couples) {
             double[] lr = access.lossRate(ctx);
             lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
-            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()] + pivotLossFix;
             lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
         }
         force[0] = fn * nx + fx;

@@ -171,6 +171,10 @@ public final class Engine {
                     reason = EndReason.REST;
                     break;
                 }
+                EventKind pivot = transitions.pivotCheck();
+                if (pivot != null) {
+                    run.log(pivot, run.toState(run.t, run.y, run.phase()), null, Vector3D.ZERO);
+                }
                 ODEStateAndDerivative end;
                 try {
                     end = segment.integrate();

@@ -36,6 +36,7 @@ final class Segment {
             list.add(new ImpactRule(run, s));
         }
         list.add(new ReleaseRule(run));
+        list.add(new PivotRule(run));
         this.rules = list.toArray(new SwitchRule[0]);
         this.layouts = new int[run.slots.length][Phase.values().length][];
     }

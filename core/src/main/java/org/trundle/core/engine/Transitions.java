@@ -258,6 +258,62 @@ final class Transitions {
         return Vec.norm(vr) + r * Vec.norm(wr);
     }
 
+    // ---------------------------------------------------------------- pivoting stick
+
+    /**
+     * The pivoting stick at the run's state (rolling, law with a set-valued pivoting couple): the
+     * spin about the normal is removed by an angular impulse about the normal (its energy booked as
+     * pivoting loss; the no-slip velocity does not change) and, when the couple needed to keep it
+     * at zero is within the law's pivoting couple, the hold begins.
+     *
+     * @return whether the spin is now held
+     */
+    boolean pivotStick() {
+        double[] y = run.y;
+        dyn.phase = Phase.ROLLING;
+        dyn.evaluate(run.t, y);
+        double[] n = dyn.geo.normal;
+        double sn = dyn.normalSpin;
+        double before = run.kinetic(y);
+        for (int i = 0; i < 3; i++) {
+            y[W + i] -= sn * n[i];
+        }
+        y[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] += before - run.kinetic(y);
+        // H n = 0, so the needed couple −I ω·(H v) is the same with the spin about n removed
+        boolean hold = Math.abs(dyn.pivotNeeded) <= dyn.pivotLimit && dyn.pivotLimit > 0;
+        run.slot.pivotHeld = hold;
+        return hold;
+    }
+
+    /**
+     * Before a rolling segment of a law with a set-valued pivoting couple: takes the hold when the
+     * spin about the normal is already within {@link PivotRule#band} and the needed couple within
+     * the limit (not at the instant of a release), drops it when the needed couple is past the limit.
+     *
+     * @return the event to log, or null
+     */
+    EventKind pivotCheck() {
+        ContactSlot slot = run.slot;
+        if (!slot.pivotStick || run.phase() != Phase.ROLLING) {
+            return null;
+        }
+        dyn.phase = Phase.ROLLING;
+        dyn.evaluate(run.t, run.y);
+        double margin = dyn.pivotLimit - Math.abs(dyn.pivotNeeded);
+        if (slot.pivotHeld) {
+            if (margin < 0) {
+                slot.pivotHeld = false;
+                slot.pivotReleasedAt = run.t;
+                return EventKind.PIVOT_RELEASE;
+            }
+            return null;
+        }
+        if (Math.abs(dyn.normalSpin) <= PivotRule.band(run) && margin > 0 && run.t != slot.pivotReleasedAt) {
+            return pivotStick() ? EventKind.PIVOT_STICK : null;
+        }
+        return null;
+    }
+
     // ---------------------------------------------------------------- impulses
 
     /** Removes the contact-point slip by the impulse {@code J = −k m s/(1+k)}; books the loss. */
