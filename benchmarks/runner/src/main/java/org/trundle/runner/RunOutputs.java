@@ -299,19 +299,22 @@ final class RunOutputs {
 
     /**
      * The energy account in one line: initial and final energy, every loss kind the budget books
-     * (sliding friction, rolling resistance, pivoting resistance, other couples, impacts), the work
-     * of applied loads, and the residual.
+     * (sliding friction, rolling resistance, pivoting resistance, other couples, impacts, and a compliant
+     * contact's damping when there is any), the work of applied loads, the drive work of moving surfaces
+     * when there is any, and the residual.
      *
      * @param e the budget
      * @return the text
      */
     static String energyText(EnergyBudget e) {
         return String.format(Locale.ROOT, "initial %.6e J, final %.6e J; losses: friction %.3e J, rolling resistance"
-            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J;"
+            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J%s;"
             + " budget residual %.1e of scale", e.initial(), e.fin(), e.slidingFrictionLoss(), e.rollingResistanceLoss(),
             e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.contactDampingLoss() != 0
                 ? String.format(Locale.ROOT, ", contact damping %.3e J", e.contactDampingLoss()) : "",
-            e.appliedWork(), e.relativeResidual());
+            e.appliedWork(), e.driveWork() != 0
+                ? String.format(Locale.ROOT, "; drive work of moving surfaces %.3e J", e.driveWork()) : "",
+            e.relativeResidual());
     }
 
     static String vec(Vector3D v) {

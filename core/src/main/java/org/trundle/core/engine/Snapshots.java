@@ -59,7 +59,7 @@ final class Snapshots {
         this.distanceThreshold = run.set.effectiveProjectionThreshold();
         this.quaternionThreshold = QUATERNION_DRIFT * (distanceThreshold / 1e-10);
         for (int i = 0; i < CACHE; i++) {
-            values[i] = new Snapshot();
+            values[i] = new Snapshot(run.slots.length);
         }
     }
 
@@ -137,7 +137,11 @@ final class Snapshots {
             if (!Double.isFinite(c[0] + c[1] + c[2])) {
                 throw Dynamics.nonFiniteCentre(ts, c);
             }
-            run.surface.query(ts, c, dyn.geo);
+            // an event check in flight is work too: it counts against the evaluation budget
+            dyn.countCheck();
+            for (ContactSlot s : run.slots) {
+                v.slotDistance[s.index] = s.distanceBound(ts, c, 2 * r, 1e-3 * r);
+            }
         }
         fill(ys, dyn.lastDerivative(), v, phase);
     }
@@ -154,9 +158,27 @@ final class Snapshots {
                 v.slip[1] = dyn.slip[1];
                 v.slip[2] = dyn.slip[2];
             }
-            v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
-            v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
-                + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
+            if (run.slot.moving) {
+                // relative to the patch: |v − u(c)| + r|ω − Ω| and |a − du(c)/dt| + r|α − Ω̇|
+                v.speed = dyn.relativeSpeed;
+                double[] as = dyn.surfaceAcceleration;
+                double[] sr = run.slot.pose.spinRate;
+                double ax = yd[V] - as[0];
+                double ay = yd[V + 1] - as[1];
+                double az = yd[V + 2] - as[2];
+                double bx = yd[W] - sr[0];
+                double by = yd[W + 1] - sr[1];
+                double bz = yd[W + 2] - sr[2];
+                v.acceleration = Math.sqrt(ax * ax + ay * ay + az * az) + r * Math.sqrt(bx * bx + by * by + bz * bz);
+            } else {
+                v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
+                v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
+                    + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
+            }
+            if (dyn.pivotStick && phase == Phase.ROLLING) {
+                v.normalSpin = dyn.normalSpin;
+                v.pivotMargin = dyn.pivotLimit - Math.abs(dyn.pivotNeeded);
+            }
         }
         v.patchMargin = dyn.geo.patchMargin;
         v.distance = dyn.geo.distance;
@@ -232,7 +254,7 @@ final class Snapshots {
         double[] out = dyn.expand(s.getPrimaryState(), new double[DIM]);
         if (dyn.derivedVelocity()) {
             Snapshot sn = at(s);
-            ContactKinematics.noSlipVelocity(r, out[W], out[W + 1], out[W + 2], sn.normal, out, V);
+            ContactKinematics.rollingVelocity(run.slot, s.getTime(), r, sn.normal, out);
         }
         return out;
     }
