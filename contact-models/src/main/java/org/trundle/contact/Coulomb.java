@@ -66,6 +66,12 @@ public final class Coulomb implements ContactLaw {
         return OptionalDouble.of(restitution);
     }
 
+    /** Adds no couples: rolling integrates no couple losses. */
+    @Override
+    public boolean addsCouples() {
+        return false;
+    }
+
     @Override
     public String name() {
         return "coulomb(mu_s=" + staticFriction + ", mu_k=" + kineticFriction + ", e=" + restitution + ")";

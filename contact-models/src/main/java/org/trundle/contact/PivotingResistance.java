@@ -21,6 +21,13 @@ import org.trundle.core.LossKind;
  * {@code δ_p F_n/(I ω_s)}). A ball at rest is held while the couple needed about the normal is at
  * most {@code δ_p F_n}.
  *
+ * <p>Known limitation: the smoothing makes the couple viscous inside the band, so where the couple
+ * needed to hold the spin about the normal falls within {@code δ_p F_n} while the ball keeps rolling
+ * (a ball in a horizontal tube locking into a steady helix), the spin still drains at the rate set by
+ * the smoothing parameter instead of locking: a numerical artefact, removed when the solver holds the
+ * couple with an exact pivoting stick event. For a physical small-spin band use
+ * {@link BandedPivoting} or {@link SpinCreepPivoting}.
+ *
  * <p>Immutable and thread-safe.
  */
 public final class PivotingResistance implements ContactLaw {

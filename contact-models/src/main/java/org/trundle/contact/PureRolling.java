@@ -37,6 +37,12 @@ public final class PureRolling implements ContactLaw {
         return OptionalDouble.of(restitution);
     }
 
+    /** Adds no couples: rolling integrates no couple losses. */
+    @Override
+    public boolean addsCouples() {
+        return false;
+    }
+
     @Override
     public String name() {
         return "pure rolling (e=" + restitution + ")";

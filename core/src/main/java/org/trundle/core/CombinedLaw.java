@@ -22,9 +22,10 @@ final class CombinedLaw implements ContactLaw {
         this.restitution = ea.isPresent() ? ea : eb;
     }
 
-    /** Whether either part overrides {@link ContactLaw#addCouples} (see {@link Dynamics#addsCouples}). */
-    boolean partsAddCouples() {
-        return Dynamics.addsCouples(a) || Dynamics.addsCouples(b);
+    /** Adds couples when either part does. */
+    @Override
+    public boolean addsCouples() {
+        return a.addsCouples() || b.addsCouples();
     }
 
     @Override

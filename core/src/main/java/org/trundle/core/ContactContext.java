@@ -192,6 +192,28 @@ public final class ContactContext {
     }
 
     /**
+     * The sum of the couples added since the context was last prepared (for testing a law on its
+     * own and for observers of a single law).
+     *
+     * @param i component 0..2
+     * @return component i of the contact couple (N·m)
+     */
+    public double couple(int i) {
+        return torque[i];
+    }
+
+    /**
+     * The power dissipated by the couples booked under {@code kind} since the context was last
+     * prepared, {@code −τ·(ω − ω_surface)} summed over those couples.
+     *
+     * @param kind loss kind
+     * @return dissipated power (W); positive when the couples oppose the relative spin
+     */
+    public double lossRate(LossKind kind) {
+        return lossRate[kind.ordinal()];
+    }
+
+    /**
      * Adds a contact couple acting on the ball and books the power it dissipates,
      * {@code −τ·(ω − ω_surface)}, under {@code kind}.
      *

@@ -52,6 +52,18 @@ public interface ContactLaw {
     }
 
     /**
+     * Whether {@link #addCouples} may add anything. A law that never adds couples says
+     * {@code false}: the solver then skips the couple calls and leaves the couple losses out of the
+     * integrated state while rolling, which makes runs cheaper. The default, {@code true}, is
+     * always correct.
+     *
+     * @return whether this law may add contact couples
+     */
+    default boolean addsCouples() {
+        return true;
+    }
+
+    /**
      * Largest couple (N·m) about a tangent axis that the contact can hold against a ball at rest
      * (zero rolling spin); used by the rest test. Rolling resistance of length {@code δ}:
      * {@code δ F_n}.

@@ -1,6 +1,7 @@
 package org.trundle.core;
 
-import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.trundle.core.engine.Dynamics;
+import org.trundle.core.engine.StateMapper;
 
 /**
  * Direct access to the solver's right-hand-side kernel for one fixed phase, for benchmarks and
@@ -22,14 +23,13 @@ public final class RightHandSide {
      * @param phase the phase whose equations to evaluate
      */
     public RightHandSide(Simulation sim, Phase phase) {
-        this.dyn = new Dynamics(sim.ball(), sim.surface(), sim.law(), sim.gravity().toArray(), sim.load());
-        this.dyn.phase = phase;
-        this.dyn.stickEps = 1e-8 * Math.max(1e-3, Math.sqrt(sim.gravity().getNorm() * sim.ball().radius()));
+        this.dyn = new Dynamics(sim.model(), phase,
+            1e-8 * Math.max(1e-3, Math.sqrt(sim.gravity().getNorm() * sim.ball().radius())));
     }
 
     /** @return the state dimension */
     public int dimension() {
-        return Dynamics.DIM;
+        return StateMapper.DIM;
     }
 
     /**
@@ -45,7 +45,7 @@ public final class RightHandSide {
 
     /** @return the normal force (N) of the last evaluation */
     public double normalForce() {
-        return dyn.normalForce;
+        return dyn.normalForce();
     }
 
     /**
@@ -55,21 +55,6 @@ public final class RightHandSide {
      * @return a new state array
      */
     public static double[] toArray(BallState s) {
-        double[] y = new double[Dynamics.DIM];
-        y[0] = s.centre().getX();
-        y[1] = s.centre().getY();
-        y[2] = s.centre().getZ();
-        y[3] = s.velocity().getX();
-        y[4] = s.velocity().getY();
-        y[5] = s.velocity().getZ();
-        Rotation q = s.orientation();
-        y[6] = q.getQ0();
-        y[7] = -q.getQ1();
-        y[8] = -q.getQ2();
-        y[9] = -q.getQ3();
-        y[10] = s.spin().getX();
-        y[11] = s.spin().getY();
-        y[12] = s.spin().getZ();
-        return y;
+        return StateMapper.toArray(s);
     }
 }

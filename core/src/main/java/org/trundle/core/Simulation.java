@@ -1,6 +1,8 @@
 package org.trundle.core;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.engine.Engine;
+import org.trundle.core.engine.Model;
 
 /**
  * A configured ball–surface problem and its solver: the entry point of the library.
@@ -33,6 +35,8 @@ public final class Simulation {
     private final Vector3D gravity;
     private final AppliedLoad load;
     private final SolverSettings settings;
+    /** The immutable problem handed to the engine. */
+    private final Model model;
 
     private Simulation(Builder b) {
         if (b.ball == null) {
@@ -62,6 +66,12 @@ public final class Simulation {
                 throw new IllegalArgumentException("restitution must lie in [0, 1], got " + e);
             }
         });
+        this.model = new Model(ball, surface, law, gravity, load, settings, ContextAccessor.INSTANCE);
+    }
+
+    /** @return the immutable model the engine runs (internal use: {@code RightHandSide}) */
+    Model model() {
+        return model;
     }
 
     /** @return a new builder; gravity defaults to zero, the applied load to none */
@@ -140,7 +150,7 @@ public final class Simulation {
         if (start == null) {
             throw new IllegalArgumentException("start state must be given, got null");
         }
-        return new Engine(this, observer == null ? RunObserver.NONE : observer).run(start, duration);
+        return Engine.run(model, start, duration, observer == null ? RunObserver.NONE : observer);
     }
 
     /**
@@ -201,7 +211,7 @@ public final class Simulation {
      * @return the energy (J)
      */
     public double energy(BallState s) {
-        return s.kineticEnergy(ball) - ball.mass() * gravity.dotProduct(s.centre());
+        return model.energy(s);
     }
 
     /** Builder of a {@link Simulation}. */

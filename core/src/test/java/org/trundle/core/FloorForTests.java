@@ -1,10 +1,10 @@
 package org.trundle.core;
 
 /** A test-only horizontal floor z = 0, ball above, bounded to |x| ≤ halfWidth. */
-final class FloorForTests implements Surface {
+public final class FloorForTests implements Surface {
     private final double halfWidth;
 
-    FloorForTests(double halfWidth) {
+    public FloorForTests(double halfWidth) {
         this.halfWidth = halfWidth;
     }
 

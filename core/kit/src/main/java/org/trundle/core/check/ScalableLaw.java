@@ -68,6 +68,11 @@ public final class ScalableLaw implements ContactLaw {
     }
 
     @Override
+    public boolean addsCouples() {
+        return law.addsCouples();
+    }
+
+    @Override
     public double rollingHoldLimit(ContactContext c) {
         return law.rollingHoldLimit(c);
     }

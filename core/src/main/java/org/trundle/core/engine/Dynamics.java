@@ -1,13 +1,36 @@
-package org.trundle.core;
+package org.trundle.core.engine;
+
+import static org.trundle.core.engine.StateMapper.APPLIED;
+import static org.trundle.core.engine.StateMapper.C;
+import static org.trundle.core.engine.StateMapper.DIM;
+import static org.trundle.core.engine.StateMapper.LOSS;
+import static org.trundle.core.engine.StateMapper.PATH;
+import static org.trundle.core.engine.StateMapper.Q;
+import static org.trundle.core.engine.StateMapper.V;
+import static org.trundle.core.engine.StateMapper.W;
+import static org.trundle.core.engine.Vec.cross;
+import static org.trundle.core.engine.Vec.dot;
+import static org.trundle.core.engine.Vec.mulSym;
+import static org.trundle.core.engine.Vec.norm;
+import static org.trundle.core.engine.Vec.zero;
 
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
+import org.trundle.core.AppliedLoad;
+import org.trundle.core.Ball;
+import org.trundle.core.ContactContext;
+import org.trundle.core.ContactGeometry;
+import org.trundle.core.ContactLaw;
+import org.trundle.core.LossKind;
+import org.trundle.core.Phase;
+import org.trundle.core.Surface;
 
 /**
  * The right-hand side of one phase, on primitive arrays, allocation-free.
  *
- * <p>State layout (the one mapper between domain state and arrays): centre c [0,3), velocity v
- * [3,6), quaternion q [6,10) (scalar first, Hamilton convention, body to world: {@code x_world = q x_body q*}, {@code q̇ = ½ (0, ω) q}; Hipparchus' {@code Rotation} holds the conjugate of these components), spin ω [10,13), dissipated work by
- * {@link LossKind} [13,17), applied-load work [17], centre path length [18].
+ * <p>State layout: see {@link StateMapper} (full layout) and {@link StateMapper#layout} (the
+ * components integrated per phase); this class is also the integrator's equation, on the compact
+ * layout of the current segment. It evaluates the one contact of the {@link ContactSet}'s primary
+ * slot with the closed form below (several contacts, issue 12, add a small linear system beside it).
  *
  * <p>Rolling (design notes §3): with {@code n}, {@code H} at the centre and the no-slip velocity
  * {@code v = r ω × n}, the constraints {@code n·v = 0}, {@code v − r ω × n = 0} differentiated with
@@ -25,16 +48,10 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
  * threshold {@code ε} the direction is held at {@code d₀}: at the onset of sliding the
  * direction opposite the force rolling needed, afterwards the slip direction at the end of the last
  * accepted step, so that the motion is smooth through the band. Flight: gravity and applied loads only.
+ *
+ * <p>Internal to the solver; public only for {@code RightHandSide}.
  */
-final class Dynamics implements OrdinaryDifferentialEquation {
-    static final int C = 0;
-    static final int V = 3;
-    static final int Q = 6;
-    static final int W = 10;
-    static final int LOSS = 13;
-    static final int APPLIED = 17;
-    static final int PATH = 18;
-    static final int DIM = 19;
+public final class Dynamics implements OrdinaryDifferentialEquation {
 
     private final double r;
     private final double m;
@@ -50,9 +67,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     private final ContactLaw law;
     private final AppliedLoad load;
 
-    final ContactGeometry geo = new ContactGeometry();
-    final ContactContext ctx = new ContactContext();
+    final ContactGeometry geo;
+    final ContactContext ctx;
     private final Ball ball;
+    private final ContextAccess access;
 
     Phase phase = Phase.FLIGHT;
     final double[] slideDir0 = new double[3];
@@ -113,9 +131,27 @@ final class Dynamics implements OrdinaryDifferentialEquation {
      */
     private final double[] full = new double[DIM];
     private final double[] fullDot = new double[DIM];
-    private static final int[] IDENTITY = java.util.stream.IntStream.range(0, DIM).toArray();
+    private static final int[] IDENTITY = StateMapper.identity();
 
-    Dynamics(Ball ball, Surface surface, ContactLaw law, double[] gravity, AppliedLoad load) {
+    /**
+     * The right-hand side of a model's single patch, with its own contact slot (for
+     * {@code RightHandSide}).
+     *
+     * @param model the model
+     * @param phase the phase to evaluate
+     * @param stickSpeed the stick threshold ε of the sliding phase (m/s)
+     */
+    public Dynamics(Model model, Phase phase, double stickSpeed) {
+        this(model, new ContactSlot(model.surface(), model.law()));
+        this.phase = phase;
+        this.stickEps = stickSpeed;
+    }
+
+    Dynamics(Model model, ContactSlot slot) {
+        this(model.ball(), slot, model.gravity().toArray(), model.load(), model.access());
+    }
+
+    private Dynamics(Ball ball, ContactSlot slot, double[] gravity, AppliedLoad load, ContextAccess access) {
         this.ball = ball;
         this.r = ball.radius();
         this.m = ball.mass();
@@ -126,14 +162,16 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         this.coupleFactor = 1.0 / (k * m * r);
         this.rollingMass = k * m / (1 + k);
         this.g = gravity.clone();
-        this.surface = surface;
-        this.law = law;
+        this.surface = slot.surface;
+        this.law = slot.law;
+        this.geo = slot.geo;
+        this.ctx = slot.ctx;
+        this.access = access;
         this.load = load;
-        this.geo.scratch = surface.newScratch();
         this.loaded = load != AppliedLoad.NONE;
-        this.couples = addsCouples(law);
+        this.couples = slot.couples;
         // the ball and the geometry workspace never change: the hot path sets only the contact values
-        ctx.set(ball, geo, 0.0, Phase.ROLLING, slip, w, false);
+        access.set(ctx, ball, geo, 0.0, Phase.ROLLING, slip, w, false);
     }
 
     @Override
@@ -200,35 +238,6 @@ final class Dynamics implements OrdinaryDifferentialEquation {
     }
 
     /**
-     * The components integrated in a phase (full indices, in compact order): centre, velocity
-     * (not while rolling), quaternion, spin, then the sliding loss (sliding), the couple losses
-     * (contact phases, when the law has couples), the applied work (when there is a load) and the
-     * path length.
-     */
-    static int[] layout(Phase phase, boolean couples, boolean loaded) {
-        int[] out = new int[DIM];
-        int n = 0;
-        for (int i = C; i < LOSS; i++) {
-            if (phase != Phase.ROLLING || i < V || i >= Q) {
-                out[n++] = i;
-            }
-        }
-        if (phase == Phase.SLIDING) {
-            out[n++] = LOSS + LossKind.SLIDING_FRICTION.ordinal();
-        }
-        if (phase.inContact() && couples) {
-            out[n++] = LOSS + LossKind.ROLLING_RESISTANCE.ordinal();
-            out[n++] = LOSS + LossKind.PIVOTING_RESISTANCE.ordinal();
-            out[n++] = LOSS + LossKind.OTHER.ordinal();
-        }
-        if (loaded) {
-            out[n++] = APPLIED;
-        }
-        out[n++] = PATH;
-        return n == DIM ? IDENTITY : java.util.Arrays.copyOf(out, n);
-    }
-
-    /**
      * Sets the integrated layout of a segment starting at the full state {@code start}.
      *
      * @return the compact start state
@@ -274,35 +283,24 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         return scratchDot;
     }
 
-    /**
-     * Whether a law can add contact couples: it (or, for a combination, one of its parts)
-     * overrides {@link ContactLaw#addCouples}, whose default adds none.
-     */
-    static boolean addsCouples(ContactLaw law) {
-        if (law instanceof CombinedLaw) {
-            return ((CombinedLaw) law).partsAddCouples();
-        }
-        return OVERRIDES_COUPLES.get(law.getClass());
+    /** @return the normal force (N) of the last evaluation */
+    public double normalForce() {
+        return normalForce;
     }
-
-    /** Per law class: whether it overrides {@code addCouples} (looked up once per class). */
-    private static final ClassValue<Boolean> OVERRIDES_COUPLES = new ClassValue<>() {
-        @Override
-        protected Boolean computeValue(Class<?> type) {
-            try {
-                return type.getMethod("addCouples", ContactContext.class).getDeclaringClass() != ContactLaw.class;
-            } catch (NoSuchMethodException e) {
-                return Boolean.TRUE;
-            }
-        }
-    };
 
     /** Evaluates the phase's forces without keeping derivatives (event functions, samples). */
     void evaluate(double t, double[] y) {
         evaluate(t, y, scratchDot);
     }
 
-    void evaluate(double t, double[] y, double[] yDot) {
+    /**
+     * Evaluates the derivative of a full-layout state.
+     *
+     * @param t time (s)
+     * @param y full-layout state
+     * @param yDot output derivative (full layout), or null for the forces only
+     */
+    public void evaluate(double t, double[] y, double[] yDot) {
         if (++evaluations > budget) {
             throw new BudgetExhausted();
         }
@@ -441,13 +439,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         double wx = w[0];
         double wy = w[1];
         double wz = w[2];
-        // v = r w x n
-        double vx = r * (wy * nz - wz * ny);
-        double vy = r * (wz * nx - wx * nz);
-        double vz = r * (wx * ny - wy * nx);
-        vel[0] = vx;
-        vel[1] = vy;
-        vel[2] = vz;
+        ContactKinematics.noSlipVelocity(r, wx, wy, wz, n, vel, 0);
+        double vx = vel[0];
+        double vy = vel[1];
+        double vz = vel[2];
         if (loaded) {
             load.apply(t, c, vel, q, w, fApp, tApp);
         }
@@ -463,13 +458,13 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         double gy = g[1];
         double gz = g[2];
         double fn = m * (-vHv - (nx * gx + ny * gy + nz * gz)) - (nx * fax + ny * fay + nz * faz);
-        ctx.setRolling(fn, wx, wy, wz, couples);
+        access.setRolling(ctx, fn, wx, wy, wz, couples);
         double tx = tApp[0];
         double ty = tApp[1];
         double tz = tApp[2];
         if (couples) {
             law.addCouples(ctx);
-            double[] ct = ctx.torque;
+            double[] ct = access.torque(ctx);
             tx += ct[0];
             ty += ct[1];
             tz += ct[2];
@@ -496,7 +491,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         grip = law.gripLimit(ctx);
         slipSpeed = 0;
         if (couples) {
-            double[] lr = ctx.lossRate;
+            double[] lr = access.lossRate(ctx);
             lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
             lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
             lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
@@ -532,15 +527,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         surface.query(t, c, geo);
         double[] n = geo.normal;
         System.arraycopy(y, V, vel, 0, 3);
-        // s = v - r w x n, tangential part
-        cross(w, n, slip);
-        for (int i = 0; i < 3; i++) {
-            slip[i] = vel[i] - r * slip[i];
-        }
-        double sn = dot(slip, n);
-        for (int i = 0; i < 3; i++) {
-            slip[i] -= sn * n[i];
-        }
+        ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
         if (loaded) {
             load.apply(t, c, vel, q, w, fApp, tApp);
         }
@@ -559,12 +546,13 @@ final class Dynamics implements OrdinaryDifferentialEquation {
             // smooth through the band and the stick root is located on a smooth stretch
             System.arraycopy(slideDir0, 0, dir, 0, 3);
         }
-        ctx.set(ball, geo, fn, Phase.SLIDING, slip, w, false);
+        access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, w, false);
         double f = law.slidingFriction(ctx);
         law.addCouples(ctx);
+        double[] ct = access.torque(ctx);
         for (int i = 0; i < 3; i++) {
             friction[i] = -f * dir[i];
-            tau[i] = ctx.torque[i] + tApp[i];
+            tau[i] = ct[i] + tApp[i];
             force[i] = fn * n[i] + friction[i];
         }
         normalForce = fn;
@@ -572,9 +560,10 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         grip = Double.NaN;
         slipSpeed = sp;
         lossSlide = -dot(friction, slip);
-        lossRoll = ctx.lossRate[LossKind.ROLLING_RESISTANCE.ordinal()];
-        lossPivot = ctx.lossRate[LossKind.PIVOTING_RESISTANCE.ordinal()];
-        lossOther = ctx.lossRate[LossKind.OTHER.ordinal()] + ctx.lossRate[LossKind.SLIDING_FRICTION.ordinal()];
+        double[] lr = access.lossRate(ctx);
+        lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+        lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+        lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
     }
 
     /** Flight: applied loads only (results in the fields). */
@@ -623,7 +612,7 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         }
         zero(slip);
         zero(hv);
-        ctx.set(ball, geo, fn, Phase.ROLLING, slip, hv, false);
+        access.set(ctx, ball, geo, fn, Phase.ROLLING, slip, hv, false);
         double scaleF = slack * m * Math.max(norm(g), 1e-300) + slack * norm(fApp);
         if (norm(f) > law.gripLimit(ctx) + scaleF) {
             return false;
@@ -654,40 +643,5 @@ final class Dynamics implements OrdinaryDifferentialEquation {
         NumericalFailure(String message) {
             super(message, null, false, false);
         }
-    }
-
-    static double dot(double[] a, double[] b) {
-        return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
-    }
-
-    static double norm(double[] a) {
-        return Math.sqrt(dot(a, a));
-    }
-
-    static void cross(double[] a, double[] b, double[] out) {
-        double x = a[1] * b[2] - a[2] * b[1];
-        double y = a[2] * b[0] - a[0] * b[2];
-        double z = a[0] * b[1] - a[1] * b[0];
-        out[0] = x;
-        out[1] = y;
-        out[2] = z;
-    }
-
-    static void scale(double[] a, double s) {
-        a[0] *= s;
-        a[1] *= s;
-        a[2] *= s;
-    }
-
-    static void zero(double[] a) {
-        a[0] = 0;
-        a[1] = 0;
-        a[2] = 0;
-    }
-
-    static void mulSym(double[] h, double[] v, double[] out) {
-        out[0] = h[0] * v[0] + h[1] * v[1] + h[2] * v[2];
-        out[1] = h[3] * v[0] + h[4] * v[1] + h[5] * v[2];
-        out[2] = h[6] * v[0] + h[7] * v[1] + h[8] * v[2];
     }
 }

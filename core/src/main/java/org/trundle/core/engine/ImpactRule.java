@@ -1,0 +1,59 @@
+package org.trundle.core.engine;
+
+import static org.trundle.core.engine.StateMapper.V;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.trundle.core.BallState;
+import org.trundle.core.EndReason;
+import org.trundle.core.EventKind;
+import org.trundle.core.Phase;
+
+/**
+ * Impact in flight: the distance minus the radius, {@code d − r} (m), falls to zero while the ball
+ * approaches, on the patch (a ball that left a tube through its end does not hit the wall's
+ * continuation). The function is offset by a slack of {@code 1e-9 r} so that it is strictly
+ * positive when a flight starts on the surface; the reaction rewinds to {@code d = r} and applies
+ * the impact impulses (design notes §6).
+ */
+final class ImpactRule extends SwitchRule {
+    ImpactRule(Run run) {
+        super(run);
+    }
+
+    @Override
+    String label() {
+        return "impact";
+    }
+
+    @Override
+    boolean watches(Phase phase) {
+        return phase == Phase.FLIGHT;
+    }
+
+    @Override
+    double value(Snapshot s) {
+        return s.distance - run.r + run.impactSlack;
+    }
+
+    @Override
+    boolean confirms(ODEStateAndDerivative s) {
+        // flight integrates the full mechanical state: c, v sit at their full indices
+        double[] ys = s.getPrimaryState();
+        run.surface.query(s.getTime(), run.centreOf(ys), run.dyn.geo);
+        double vn = ContactKinematics.normalPart(ys, V, run.dyn.geo.normal);
+        return !(run.dyn.geo.patchMargin < 0 || vn >= 0);
+    }
+
+    @Override
+    void prepare(Transitions x) {
+        x.rewindToContact();
+    }
+
+    @Override
+    EndReason react(Transitions x, BallState before) {
+        Vector3D j = x.impact();
+        run.log(EventKind.IMPACT, before, null, j);
+        return null;
+    }
+}

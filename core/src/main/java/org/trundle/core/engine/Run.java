@@ -1,0 +1,257 @@
+package org.trundle.core.engine;
+
+import static org.trundle.core.engine.StateMapper.C;
+import static org.trundle.core.engine.StateMapper.PATH;
+import static org.trundle.core.engine.StateMapper.V;
+import static org.trundle.core.engine.StateMapper.W;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.trundle.core.Ball;
+import org.trundle.core.BallState;
+import org.trundle.core.ContactLaw;
+import org.trundle.core.EventKind;
+import org.trundle.core.Phase;
+import org.trundle.core.PhaseSpan;
+import org.trundle.core.RunEvent;
+import org.trundle.core.RunObserver;
+import org.trundle.core.Sample;
+import org.trundle.core.SolverSettings;
+import org.trundle.core.Surface;
+
+/**
+ * The state of one run that the loop, the segment, the switch rules and the transitions share:
+ * the current time and state array, the contact set, the scales of the run, the event log and
+ * phase spans, the ledger (residuals, extremes, impact loss, step count) and the last good state.
+ * One per run, never shared between threads.
+ */
+final class Run {
+    final Model model;
+    final RunObserver observer;
+    final SolverSettings set;
+    final Ball ball;
+    final double r;
+    final double m;
+    final double k;
+    final double inertia;
+    final double[] g;
+    final ContactSet contacts;
+    /** The slot of the single patch (its surface and law). */
+    final ContactSlot slot;
+    final Surface surface;
+    final ContactLaw law;
+    final Dynamics dyn;
+    final Snapshots snapshots;
+    private final double[] centreWork = new double[3];
+
+    // scales of the run (set at the start)
+    double speedScale;
+    double stickEps;
+    double settleSpeed;
+    double impactSlack;
+    double restSpeed;
+    final double restitution;
+    double[] absTol;
+    double[] relTol;
+
+    /** The message of a typed stop a rule reacted with (geometry). */
+    String stopMessage = "";
+
+    // where the run is
+    double t;
+    double[] y;
+    double endTime;
+
+    final List<RunEvent> events = new ArrayList<>();
+    final List<PhaseSpan> spans = new ArrayList<>();
+    private double spanStart;
+    private double spanPath;
+
+    // ledger
+    double maxDistanceError;
+    double maxNormalForce;
+    double maxKinetic;
+    double extent;
+    double[] c0;
+    double impactLoss;
+    long steps;
+    /** Step size (s) the next segment starts with, after a projection restart; 0: Hipparchus' own estimate. */
+    double restartStep;
+    int sampleIndex;
+    double sampleT0;
+
+    // the last accepted step end
+    double[] lastGoodY;
+    /** The last accepted step end, kept as the integrator's state until its full form is needed. */
+    ODEStateAndDerivative lastGoodState;
+    double lastGoodT;
+    Phase lastGoodPhase;
+
+    Run(Model model, RunObserver observer) {
+        this.model = model;
+        this.observer = observer;
+        this.set = model.settings();
+        this.ball = model.ball();
+        this.r = ball.radius();
+        this.m = ball.mass();
+        this.k = ball.inertiaFactor();
+        this.inertia = ball.momentOfInertia();
+        this.g = model.gravity().toArray();
+        this.slot = new ContactSlot(model.surface(), model.law());
+        this.contacts = new ContactSet(slot);
+        this.surface = slot.surface;
+        this.law = slot.law;
+        this.dyn = new Dynamics(model, slot);
+        this.restitution = law.restitution().orElse(0.0);
+        this.snapshots = new Snapshots(this);
+        this.dyn.stageObserver = snapshots::stageAtStepEnd;
+    }
+
+    /** @return the global phase (summary of the contact set) */
+    Phase phase() {
+        return contacts.phase();
+    }
+
+    /** Sets the global phase without closing a span (see {@link #changePhase}). */
+    void setPhase(Phase p) {
+        contacts.setPhase(p);
+    }
+
+    /** The full state of the last accepted step end (expanded on first use, in the segment's layout). */
+    double[] lastGoodY() {
+        if (lastGoodY == null) {
+            lastGoodY = snapshots.fullState(lastGoodState);
+            lastGoodState = null;
+        }
+        return lastGoodY;
+    }
+
+    void restoreLastGood() {
+        t = lastGoodT;
+        y = lastGoodY().clone();
+        setPhase(lastGoodPhase);
+    }
+
+    BallState lastGoodBallState() {
+        dyn.budget = Long.MAX_VALUE;
+        return toState(lastGoodT, lastGoodY(), lastGoodPhase);
+    }
+
+    /**
+     * The centre of a state array, copied into the run's workspace (no allocation). The result is
+     * only valid until the next call.
+     */
+    double[] centreOf(double[] ys) {
+        centreWork[0] = ys[C];
+        centreWork[1] = ys[C + 1];
+        centreWork[2] = ys[C + 2];
+        return centreWork;
+    }
+
+    double kinetic(double[] ys) {
+        return kinetic(ys[V], ys[V + 1], ys[V + 2], ys);
+    }
+
+    /** Kinetic energy (J) with centre velocity (vx, vy, vz) and the spin of {@code ys}. */
+    double kinetic(double vx, double vy, double vz, double[] ys) {
+        double v2 = vx * vx + vy * vy + vz * vz;
+        double w2 = ys[W] * ys[W] + ys[W + 1] * ys[W + 1] + ys[W + 2] * ys[W + 2];
+        return 0.5 * m * v2 + 0.5 * inertia * w2;
+    }
+
+    /** Domain state from the array state; rolling uses the no-slip velocity. */
+    BallState toState(double ts, double[] ys, Phase p) {
+        double vx = ys[V];
+        double vy = ys[V + 1];
+        double vz = ys[V + 2];
+        if (p == Phase.ROLLING || p == Phase.REST) {
+            Phase keep = dyn.phase;
+            dyn.phase = Phase.ROLLING;
+            dyn.evaluate(ts, ys);
+            dyn.phase = keep;
+            vx = dyn.vel[0];
+            vy = dyn.vel[1];
+            vz = dyn.vel[2];
+        }
+        return StateMapper.toState(ts, ys, p, vx, vy, vz);
+    }
+
+    void trackForce(double ts, double[] ys, Phase p) {
+        if (p.inContact()) {
+            Phase keep = dyn.phase;
+            dyn.phase = p;
+            dyn.evaluate(ts, ys);
+            dyn.phase = keep;
+            maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
+        }
+    }
+
+    void emitSample(double ts, double[] ys, Phase p, boolean isEvent) {
+        if (observer == RunObserver.NONE) {
+            return;
+        }
+        Phase keep = dyn.phase;
+        dyn.phase = p;
+        // output evaluations are neither counted nor budgeted, so that the integration, the
+        // evaluation count and a budget stop do not depend on whether anyone observes the run
+        long count = dyn.evaluations;
+        long budget = dyn.budget;
+        dyn.budget = Long.MAX_VALUE;
+        dyn.evaluate(ts, ys);
+        dyn.evaluations = count;
+        dyn.budget = budget;
+        dyn.phase = keep;
+        // dyn.vel now holds the phase's velocity (the no-slip one while rolling, the state's otherwise)
+        BallState s = StateMapper.toState(ts, ys, p, dyn.vel[0], dyn.vel[1], dyn.vel[2]);
+        Vector3D fr = new Vector3D(dyn.friction[0], dyn.friction[1], dyn.friction[2]);
+        Vector3D cp = null;
+        Vector3D onBall = null;
+        boolean touching = p != Phase.FLIGHT;
+        if (touching) {
+            double[] n = dyn.geo.normal;
+            cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
+            onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
+        }
+        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent));
+    }
+
+    void log(EventKind kind, BallState before, BallState after, Vector3D impulse) {
+        log(kind, before, after, impulse, null);
+    }
+
+    void log(EventKind kind, BallState before, BallState after, Vector3D impulse, String edge) {
+        Phase phase = phase();
+        BallState a = after != null ? after : toState(t, y, phase);
+        RunEvent e = new RunEvent(kind, before, a, edge, impulse);
+        events.add(e);
+        trackForce(t, y, phase);
+        emitSample(t, y, phase, true);
+        observer.event(e);
+    }
+
+    /** Changes the global phase, closing the current phase span. */
+    void changePhase(Phase next) {
+        if (next != phase()) {
+            closeSpan();
+            setPhase(next);
+            spanStart = t;
+            spanPath = y[PATH];
+        }
+    }
+
+    void openSpan() {
+        spanStart = t;
+        spanPath = 0;
+    }
+
+    void closeSpan() {
+        if (t > spanStart || spans.isEmpty()) {
+            spans.add(new PhaseSpan(phase(), spanStart, t, y[PATH] - spanPath));
+        }
+        spanStart = t;
+        spanPath = y[PATH];
+    }
+}

@@ -1,0 +1,170 @@
+package org.trundle.core.engine;
+
+import org.hipparchus.ode.ODEState;
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
+import org.hipparchus.ode.sampling.ODEStateInterpolator;
+import org.hipparchus.ode.sampling.ODEStepHandler;
+import org.trundle.core.AppliedLoad;
+import org.trundle.core.Phase;
+import org.trundle.core.RunObserver;
+
+/**
+ * The Hipparchus adapter: integrates one segment of constant phase with Dormand–Prince 8(5,3) on
+ * the phase's compact layout, watching the {@link SwitchRule}s of that phase, until the first
+ * switch or the end time. Its step observer samples, keeps the last good state and the ledger, and
+ * leaves the integration ({@link ProjectionRestart}) when a step end has drifted past the projection
+ * thresholds.
+ */
+final class Segment {
+    private final Run run;
+    private final Transitions transitions;
+    /** Every rule, in the order their detectors are added (which orders simultaneous events). */
+    private final SwitchRule[] rules;
+    /** Integrated layout per phase, built on first use. */
+    private final int[][] layouts = new int[Phase.values().length][];
+    /** The rule whose switch stopped the segment, or null. */
+    SwitchRule fired;
+
+    Segment(Run run, Transitions transitions) {
+        this.run = run;
+        this.transitions = transitions;
+        this.rules = new SwitchRule[] {
+            new LiftOffRule(run), new RestRule(run), new FitRule(run), new ExitRule(run),
+            new SlipRule(run), new StickRule(run), new ImpactRule(run)};
+    }
+
+    /**
+     * Integrates from the run's state until a switch or the end time.
+     *
+     * @return the state at the end of the segment
+     * @throws ProjectionRestart when a step end drifted past the projection thresholds
+     */
+    ODEStateAndDerivative integrate() {
+        // the last good state must take its full form before the layout changes
+        run.lastGoodY();
+        Phase phase = run.phase();
+        Dynamics dyn = run.dyn;
+        dyn.phase = phase;
+        int[] layout = layouts[phase.ordinal()];
+        if (layout == null) {
+            layout = StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE);
+            layouts[phase.ordinal()] = layout;
+        }
+        double[] abs = new double[layout.length];
+        double[] rel = new double[layout.length];
+        for (int i = 0; i < layout.length; i++) {
+            abs[i] = run.absTol[layout[i]];
+            rel[i] = run.relTol[layout[i]];
+        }
+        DormandPrince853Integrator integ = new DormandPrince853Integrator(0.0, run.endTime - run.t + 1e-300, abs, rel);
+        if (run.restartStep > 0) {
+            integ.setInitialStepSize(run.restartStep);
+            run.restartStep = 0;
+        }
+        integ.addStepHandler(new StepObserver());
+        fired = null;
+        if (phase.inContact()) {
+            // a switch may hand over a drifted state: start each contact segment well within the
+            // projection thresholds (the step observer checks them only at step ends)
+            run.surface.query(run.t, run.centreOf(run.y), dyn.geo);
+            if (run.snapshots.drift(run.y, dyn.geo.distance) >= 0.5) {
+                run.y = transitions.projected(run.t, run.y);
+            }
+        } else {
+            // a flight may end far from where it began: let Newton-based surfaces start afresh
+            dyn.geo.resetHint();
+        }
+        for (SwitchRule rule : rules) {
+            if (rule.watches(phase)) {
+                rule.beginSegment();
+                integ.addEventDetector(new SwitchDetector(this, rule));
+            }
+        }
+        return integ.integrate(dyn, new ODEState(run.t, dyn.beginSegment(layout, run.y)), run.endTime);
+    }
+
+    /**
+     * Residuals at an accepted step end in contact (read from the state's snapshot): largest normal
+     * force and distance residual {@code |d − r|}.
+     */
+    private void trackResiduals(Snapshot s) {
+        run.maxNormalForce = Math.max(run.maxNormalForce, s.normalForce);
+        run.maxDistanceError = Math.max(run.maxDistanceError, Math.abs(s.distance - run.r));
+    }
+
+    /** Leaves a segment's integration to project its last accepted state (see {@link StepObserver}). */
+    static final class ProjectionRestart extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        static final ProjectionRestart INSTANCE = new ProjectionRestart();
+
+        private ProjectionRestart() {
+            super("projection restart", null, false, false);
+        }
+    }
+
+    /** Step observer: samples, last good state, ledger; projection restarts. */
+    private final class StepObserver implements ODEStepHandler {
+        @Override
+        public void handleStep(ODEStateInterpolator interpolator) {
+            ODEStateAndDerivative cur = interpolator.getCurrentState();
+            if (cur.getTime() == interpolator.getPreviousState().getTime()) {
+                // Hipparchus hands over a zero-length remainder after a step-end handler that
+                // returned CONTINUE; it is not a step, and sampling it would duplicate the sample
+                return;
+            }
+            run.steps++;
+            Phase phase = run.phase();
+            Dynamics dyn = run.dyn;
+            double tc = cur.getTime();
+            boolean observed = run.observer != RunObserver.NONE;
+            double[] yc = observed || phase == Phase.SLIDING ? run.snapshots.fullState(cur) : null;
+            double interval = run.set.sampleInterval();
+            if (interval > 0) {
+                while (true) {
+                    double ts = run.sampleT0 + (run.sampleIndex + 1) * interval;
+                    if (ts > tc || ts > run.endTime) {
+                        break;
+                    }
+                    run.sampleIndex++;
+                    ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
+                    run.emitSample(ts, run.snapshots.fullState(si), phase, false);
+                }
+            } else if (tc < run.endTime && observed) {
+                run.emitSample(tc, yc, phase, false);
+            }
+            if (phase == Phase.SLIDING) {
+                dyn.phase = Phase.SLIDING;
+                dyn.evaluate(tc, yc);
+                double sp = dyn.slipSpeed;
+                if (sp > run.stickEps) {
+                    for (int i = 0; i < 3; i++) {
+                        dyn.slideDir0[i] = dyn.slip[i] / sp;
+                    }
+                }
+            }
+            // kinetic energy and centre from the snapshot (every layout starts with the centre)
+            Snapshot s = run.snapshots.at(cur);
+            double[] yk = run.snapshots.lastKey();
+            run.maxKinetic = Math.max(run.maxKinetic, s.kinetic);
+            double dx = yk[0] - run.c0[0];
+            double dy = yk[1] - run.c0[1];
+            double dz = yk[2] - run.c0[2];
+            run.extent = Math.max(run.extent, Math.sqrt(dx * dx + dy * dy + dz * dz));
+            run.lastGoodY = yc;
+            run.lastGoodState = yc == null ? cur : null;
+            run.lastGoodT = tc;
+            run.lastGoodPhase = phase;
+            if (phase.inContact()) {
+                trackResiduals(run.snapshots.at(cur));
+                // a whole step (no event cut it short) whose end drifted past the thresholds: leave
+                // the integrator and start afresh from the projected state, with the step size
+                // reached (cheaper than a step-end handler, which interpolates every step)
+                if (!interpolator.isCurrentStateInterpolated() && s.drift >= 1 && tc < run.endTime) {
+                    run.restartStep = tc - interpolator.getPreviousState().getTime();
+                    throw ProjectionRestart.INSTANCE;
+                }
+            }
+        }
+    }
+}

@@ -1,0 +1,36 @@
+package org.trundle.core.engine;
+
+/**
+ * What every switch rule reads of one state, evaluated once per state and shared by all rules
+ * (Hipparchus asks each detector in turn about the same few states of a step). Physical units.
+ * A mutable workspace of the {@link Snapshots} cache.
+ */
+final class Snapshot {
+    /** Normal force F_n (N); contact phases. */
+    double normalForce;
+    /** Grip minus the tangential force rolling needs (N); rolling. */
+    double gripMargin;
+    /** Slip speed |s| (m/s); sliding. */
+    double slipSpeed;
+    /** Speed measure |v| + r|ω| (m/s); contact phases. */
+    double speed;
+    /** Patch margin (m), positive inside the patch. */
+    double patchMargin;
+    /** Centre distance d from the surface (m). */
+    double distance;
+    /** Frobenius norm of the distance Hessian (1/m). */
+    double hessianNorm;
+    /** Fit margin {@code 1 − r κ₁}. */
+    double fitMargin;
+    /** Unit normal at the contact. */
+    final double[] normal = new double[3];
+    /**
+     * Constraint drift: the larger of the distance residual over (projection threshold · r) and the
+     * quaternion-norm drift over its threshold; contact phases only, 0 in flight.
+     */
+    double drift;
+    /** Acceleration measure |a| + r|α| (m/s²); contact phases. */
+    double acceleration;
+    /** Kinetic energy (J). */
+    double kinetic;
+}

@@ -1,0 +1,181 @@
+package org.trundle.core.engine;
+
+import static org.trundle.core.engine.StateMapper.DIM;
+import static org.trundle.core.engine.StateMapper.V;
+import static org.trundle.core.engine.StateMapper.W;
+
+import java.util.Arrays;
+
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.trundle.core.Phase;
+
+/**
+ * A small cache of {@link Snapshot}s of the last states the detectors asked about: one evaluation
+ * per state serves every rule. Keys are the integrator's compact state and time and the phase;
+ * Hipparchus hands the same state object to every detector in turn, so an identity shortcut
+ * answers most asks without comparing arrays.
+ */
+final class Snapshots {
+    private static final int CACHE = 4;
+
+    /**
+     * Drift of the quaternion norm {@code ||q| − 1|} above which the step-end handler restarts the
+     * integrator only to normalise it. The norm does not enter the equations of motion (the spin
+     * is integrated on its own and every output state is normalised), so a tight threshold
+     * (1e-12 formerly) restarted the integration on most steps at the default tolerance for no
+     * gain in accuracy; the quaternion is still normalised whenever a projection happens anyway.
+     */
+    static final double QUATERNION_DRIFT = 1e-9;
+
+    private final Run run;
+    private final Dynamics dyn;
+    private final double r;
+    private final double[][] cacheY = new double[CACHE][DIM];
+    private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
+    private final Phase[] cachePhase = new Phase[CACHE];
+    private final int[] cacheLength = new int[CACHE];
+    /** Bumped whenever a slot is reused, so that the identity shortcut never reads stale values. */
+    private final long[] cacheGeneration = new long[CACHE];
+    private final Snapshot[] values = new Snapshot[CACHE];
+    private ODEStateAndDerivative lastState;
+    private int lastStateSlot;
+    private long lastStateGeneration;
+    private int cacheNext;
+    /** Full-layout workspace (the integrator's states are compact). */
+    private final double[] eventFull = new double[DIM];
+
+    Snapshots(Run run) {
+        this.run = run;
+        this.dyn = run.dyn;
+        this.r = run.r;
+        for (int i = 0; i < CACHE; i++) {
+            values[i] = new Snapshot();
+        }
+    }
+
+    /**
+     * @param s a state of the current segment
+     * @return its snapshot, evaluated if not cached (valid until four more states are asked about)
+     */
+    Snapshot at(ODEStateAndDerivative s) {
+        Phase phase = run.phase();
+        int slot;
+        if (s == lastState && cacheGeneration[lastStateSlot] == lastStateGeneration
+            && cachePhase[lastStateSlot] == phase) {
+            slot = lastStateSlot;
+        } else {
+            slot = slotOf(s, phase);
+            lastState = s;
+            lastStateSlot = slot;
+            lastStateGeneration = cacheGeneration[slot];
+        }
+        return values[slot];
+    }
+
+    /** @return the compact integrator state keying the snapshot last returned by {@link #at} (it starts with the centre) */
+    double[] lastKey() {
+        return cacheY[lastStateSlot];
+    }
+
+    private int slotOf(ODEStateAndDerivative s, Phase phase) {
+        double[] ys = s.getPrimaryState();
+        double ts = s.getTime();
+        int len = ys.length;
+        for (int i = 0; i < CACHE; i++) {
+            if (cachePhase[i] == phase && cacheTime[i] == ts && cacheLength[i] == len
+                && Arrays.equals(ys, 0, len, cacheY[i], 0, len)) {
+                return i;
+            }
+        }
+        int slot = nextSlot(ts, ys, phase);
+        evaluate(ts, dyn.expand(ys, eventFull), values[slot], phase);
+        return slot;
+    }
+
+    private int nextSlot(double ts, double[] ys, Phase phase) {
+        int slot = cacheNext;
+        cacheGeneration[slot]++;
+        cacheNext = (cacheNext + 1) % CACHE;
+        System.arraycopy(ys, 0, cacheY[slot], 0, ys.length);
+        cacheLength[slot] = ys.length;
+        cacheTime[slot] = ts;
+        cachePhase[slot] = phase;
+        return slot;
+    }
+
+    /**
+     * Dormand–Prince 8(5,3) evaluates its last two main stages at the step end, the second at the
+     * step's end state itself (first same as last); the detectors ask about that state next, so
+     * its snapshot is taken from that evaluation instead of a new one (a state that differs in the
+     * last bit just misses the cache and is evaluated).
+     */
+    void stageAtStepEnd(double ts, double[] compact, double[] full, double[] fullDot) {
+        Phase phase = run.phase();
+        if (phase.inContact()) {
+            fill(full, fullDot, values[nextSlot(ts, compact, phase)], phase);
+        }
+    }
+
+    private void evaluate(double ts, double[] ys, Snapshot v, Phase phase) {
+        dyn.phase = phase;
+        if (phase.inContact()) {
+            dyn.evaluate(ts, ys);
+        } else {
+            run.surface.query(ts, run.centreOf(ys), dyn.geo);
+        }
+        fill(ys, dyn.lastDerivative(), v, phase);
+    }
+
+    /** Fills a snapshot from what the last evaluation left in {@code dyn}, for full state ys and derivative yd. */
+    private void fill(double[] ys, double[] yd, Snapshot v, Phase phase) {
+        boolean contact = phase.inContact();
+        if (contact) {
+            v.normalForce = dyn.normalForce;
+            v.gripMargin = dyn.grip - dyn.neededTangential;
+            v.slipSpeed = dyn.slipSpeed;
+            v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
+            v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
+                + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
+        }
+        v.patchMargin = dyn.geo.patchMargin;
+        v.distance = dyn.geo.distance;
+        double hn = 0;
+        double[] h = dyn.geo.hessian;
+        for (int i = 0; i < 9; i++) {
+            hn += h[i] * h[i];
+        }
+        v.hessianNorm = Math.sqrt(hn);
+        v.fitMargin = 1.0 - r * dyn.geo.curvature1;
+        double[] n = dyn.geo.normal;
+        v.normal[0] = n[0];
+        v.normal[1] = n[1];
+        v.normal[2] = n[2];
+        v.drift = contact ? drift(ys, v.distance) : 0.0;
+        double vx = contact ? dyn.vel[0] : ys[V];
+        double vy = contact ? dyn.vel[1] : ys[V + 1];
+        double vz = contact ? dyn.vel[2] : ys[V + 2];
+        v.kinetic = run.kinetic(vx, vy, vz, ys);
+    }
+
+    /**
+     * Constraint drift of a contact state relative to the projection thresholds (see
+     * {@link Snapshot#drift}). Rolling has no slip drift: its velocity is derived, {@code v = r ω × n}.
+     */
+    double drift(double[] ys, double distance) {
+        double d = Math.abs(distance - r) / (run.set.projectionThreshold() * r);
+        return Math.max(d, Math.abs(StateMapper.quaternionNorm(ys) - 1) / QUATERNION_DRIFT);
+    }
+
+    /**
+     * The full-layout state (a new array) of an integrator state of the current segment; while
+     * rolling, its velocity slot holds the no-slip {@code r ω × n} (normal from the snapshot).
+     */
+    double[] fullState(ODEStateAndDerivative s) {
+        double[] out = dyn.expand(s.getPrimaryState(), new double[DIM]);
+        if (dyn.derivedVelocity()) {
+            Snapshot sn = at(s);
+            ContactKinematics.noSlipVelocity(r, out[W], out[W + 1], out[W + 2], sn.normal, out, V);
+        }
+        return out;
+    }
+}

@@ -1,0 +1,137 @@
+package org.trundle.core.engine;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.BallState;
+import org.trundle.core.LossKind;
+import org.trundle.core.Phase;
+
+/**
+ * The one mapping between the domain state {@link BallState} and the solver's arrays, and the
+ * per-phase integrated layouts.
+ *
+ * <p>Full layout ({@link #DIM} = 19): centre c (m) [0,3), velocity v (m/s) [3,6), quaternion q
+ * [6,10), spin ω (rad/s) [10,13), dissipated work by {@link LossKind} (J) [13,17), applied-load work
+ * (J) [17], centre path length (m) [18].
+ *
+ * <p>Quaternion convention: the array holds the Hamilton quaternion, scalar first, body to world
+ * ({@code x_world = q x_body q*}, {@code q̇ = ½ (0, ω) ⊗ q}); Hipparchus' {@link Rotation} stores the
+ * conjugate of these components. This class is the only place that conjugates.
+ *
+ * <p>Internal to the solver.
+ */
+public final class StateMapper {
+    /** Index of the centre. */
+    public static final int C = 0;
+    /** Index of the velocity. */
+    public static final int V = 3;
+    /** Index of the quaternion. */
+    public static final int Q = 6;
+    /** Index of the spin. */
+    public static final int W = 10;
+    /** Index of the dissipated work by loss kind. */
+    public static final int LOSS = 13;
+    /** Index of the applied-load work. */
+    public static final int APPLIED = 17;
+    /** Index of the centre path length. */
+    public static final int PATH = 18;
+    /** Length of the full layout. */
+    public static final int DIM = 19;
+
+    private static final int[] IDENTITY = java.util.stream.IntStream.range(0, DIM).toArray();
+
+    private StateMapper() {
+    }
+
+    /**
+     * Packs a ball state into a new full-layout array (work components zero).
+     *
+     * @param s the state
+     * @return a new array
+     */
+    public static double[] toArray(BallState s) {
+        double[] y = new double[DIM];
+        put(y, C, s.centre());
+        put(y, V, s.velocity());
+        Rotation q = s.orientation();
+        y[Q] = q.getQ0();
+        y[Q + 1] = -q.getQ1();
+        y[Q + 2] = -q.getQ2();
+        y[Q + 3] = -q.getQ3();
+        put(y, W, s.spin());
+        return y;
+    }
+
+    /**
+     * The domain state of a full-layout array with a given centre velocity (while rolling the
+     * velocity slot is not integrated, so the caller passes the derived one).
+     *
+     * @param t time (s)
+     * @param y full-layout state
+     * @param phase phase
+     * @param vx velocity x (m/s)
+     * @param vy velocity y (m/s)
+     * @param vz velocity z (m/s)
+     * @return the state
+     */
+    static BallState toState(double t, double[] y, Phase phase, double vx, double vy, double vz) {
+        Rotation q = new Rotation(y[Q], -y[Q + 1], -y[Q + 2], -y[Q + 3], true);
+        return BallState.of(t, new Vector3D(y[C], y[C + 1], y[C + 2]), new Vector3D(vx, vy, vz), q,
+            new Vector3D(y[W], y[W + 1], y[W + 2]), phase);
+    }
+
+    private static void put(double[] a, int at, Vector3D v) {
+        a[at] = v.getX();
+        a[at + 1] = v.getY();
+        a[at + 2] = v.getZ();
+    }
+
+    /**
+     * The components integrated in a phase (full indices, in compact order): centre, velocity
+     * (not while rolling), quaternion, spin, then the sliding loss (sliding), the couple losses
+     * (contact phases, when the law has couples), the applied work (when there is a load) and the
+     * path length.
+     *
+     * @param phase the phase
+     * @param couples whether the law adds couples
+     * @param loaded whether there is an applied load
+     * @return the layout (the shared identity array when it is the full layout)
+     */
+    static int[] layout(Phase phase, boolean couples, boolean loaded) {
+        int[] out = new int[DIM];
+        int n = 0;
+        for (int i = C; i < LOSS; i++) {
+            if (phase != Phase.ROLLING || i < V || i >= Q) {
+                out[n++] = i;
+            }
+        }
+        if (phase == Phase.SLIDING) {
+            out[n++] = LOSS + LossKind.SLIDING_FRICTION.ordinal();
+        }
+        if (phase.inContact() && couples) {
+            out[n++] = LOSS + LossKind.ROLLING_RESISTANCE.ordinal();
+            out[n++] = LOSS + LossKind.PIVOTING_RESISTANCE.ordinal();
+            out[n++] = LOSS + LossKind.OTHER.ordinal();
+        }
+        if (loaded) {
+            out[n++] = APPLIED;
+        }
+        out[n++] = PATH;
+        return n == DIM ? IDENTITY : java.util.Arrays.copyOf(out, n);
+    }
+
+    /** @return the full layout (identity map) */
+    static int[] identity() {
+        return IDENTITY;
+    }
+
+    /**
+     * The quaternion norm of a full-layout state.
+     *
+     * @param y state
+     * @return |q|
+     */
+    static double quaternionNorm(double[] y) {
+        return Math.sqrt(y[Q] * y[Q] + y[Q + 1] * y[Q + 1] + y[Q + 2] * y[Q + 2] + y[Q + 3] * y[Q + 3]);
+    }
+}
