@@ -132,6 +132,12 @@ public final class BandedPivoting implements ContactLaw {
         return -Math.min(viscous, limit) * Math.signum(s);
     }
 
+    /** @return true: this law adds a couple about the normal */
+    @Override
+    public boolean addsCouples() {
+        return true;
+    }
+
     @Override
     public double pivotHoldLimit(ContactContext c) {
         return Double.isInfinite(length) ? 0.0 : length * Math.max(c.normalForce(), 0.0);

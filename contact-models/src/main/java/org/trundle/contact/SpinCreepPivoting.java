@@ -167,6 +167,12 @@ public final class SpinCreepPivoting implements ContactLaw {
         }
     }
 
+    /** @return true: this law adds a couple about the normal */
+    @Override
+    public boolean addsCouples() {
+        return true;
+    }
+
     @Override
     public double pivotHoldLimit(ContactContext c) {
         return Double.isInfinite(length) ? 0.0 : length * Math.max(c.normalForce(), 0.0);
