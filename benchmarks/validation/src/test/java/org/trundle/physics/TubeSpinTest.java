@@ -263,6 +263,52 @@ class TubeSpinTest {
     }
 
     /**
+     * Coulomb pivoting {@code M_p = −δ_p F_n sgn(ω·n)}, no gravity: with {@code φ̇ = Ω},
+     * {@code F_n = m ρ Ω²} and {@code μ = δ_p F_n/(k m r)} the reduced equations give
+     * {@code Ẍ + λ²Ω² X = −λ²Ω μ sgn(Ẋ)}, a Coulomb-damped oscillator (any vibrations text): the extremes
+     * of {@code |X|} fall by the constant step {@code ΔX = 2μ/Ω = 2 δ_p ρ Ω/(k r)} per half cycle, until
+     * {@code |X| < μ/Ω}, where the needed couple is within {@code δ_p F_n} and the ball should lock
+     * into a helix (held exactly only by the planned pivoting stick event; this test stops before).
+     * The law's smoothing band ({@code ω_s r = 1e-3 V}) weakens the couple only while
+     * {@code |ω·n| < ω_s}, about {@code 2 ω_s r/(|X| Ω)} near each extreme, when its work is at most
+     * {@code δ_p F_n ω_s} per second; against the half cycle's work {@code 2 δ_p F_n |X|/(λ² r Ω)} that
+     * shortens the step by at most {@code λ² (ω_s r/|X|)²}, below 2e-4 for the extremes used
+     * ({@code |X| ≥ 0.02 m/s}); each step within 1e-3.
+     */
+    @Test
+    void coulombPivotingLowersTheAxialExtremesByAConstantStep() {
+        double k = Ball.SOLID;
+        double rho = R - RADIUS;
+        double circling = 0.5;
+        double omega = circling / rho;
+        double dp = 5e-6;
+        double step = 2 * dp * rho * omega / (k * RADIUS);
+        Simulation sim = tube(k, Vector3D.ZERO, new PureRolling().and(new PivotingResistance(dp)))
+            .withSettings(SolverSettings.defaults().withSampleInterval(2e-4));
+        BallState start = sim.rollingStart(new Vector3D(0, 0, -rho), new Vector3D(0.06, circling, 0));
+        List<double[]> xs = new ArrayList<>();
+        RunResult res = sim.run(start, 1.5, s -> xs.add(new double[] {s.time(), s.state().velocity().getX()}));
+        assertEquals(EndReason.DURATION, res.endReason(), res.message());
+        assertTrue(res.energy().relativeResidual() < 1e-8, "budget " + res.energy());
+        List<double[]> ext = new ArrayList<>();
+        ext.add(new double[] {0, 0.06});          // the start is an extreme (u = 0 there)
+        for (double[] e : extremes(xs, false)) {
+            if (e[1] >= 0.02) {
+                ext.add(e);
+            }
+        }
+        assertTrue(ext.size() >= 10, "extremes above 0.02 m/s: " + ext.size());
+        double worst = 0;
+        for (int i = 1; i < ext.size(); i++) {
+            double drop = ext.get(i - 1)[1] - ext.get(i)[1];
+            worst = Math.max(worst, Math.abs(drop / step - 1));
+            assertEquals(step, drop, 1e-3 * step, "drop between extremes " + (i - 1) + " and " + i);
+        }
+        System.out.println("coulomb pivoting: step " + step + " m/s, largest relative deviation " + worst + " over "
+            + (ext.size() - 1) + " half cycles");
+    }
+
+    /**
      * Runs a no-gravity start at the bottom circling at {@code circling} (m/s) with axial speed
      * {@code axial} and no spin about the normal; returns minus the slope of {@code ln|X|} at the
      * extremes of {@code X} (each located by a parabola through three samples) against time.
@@ -275,19 +321,7 @@ class TubeSpinTest {
         RunResult res = sampled.run(start, duration, s -> xs.add(new double[] {s.time(), s.state().velocity().getX()}));
         assertEquals(EndReason.DURATION, res.endReason(), res.message());
         assertTrue(res.energy().relativeResidual() < 1e-8, "budget " + res.energy());
-        List<double[]> extremes = new ArrayList<>();
-        for (int i = 1; i + 1 < xs.size(); i++) {
-            double y0 = Math.abs(xs.get(i - 1)[1]);
-            double y1 = Math.abs(xs.get(i)[1]);
-            double y2 = Math.abs(xs.get(i + 1)[1]);
-            if (y1 > y0 && y1 >= y2) {
-                double h = xs.get(i + 1)[0] - xs.get(i)[0];
-                double den = y0 - 2 * y1 + y2;
-                double off = 0.5 * (y0 - y2) / den;
-                double peak = y1 - 0.25 * (y0 - y2) * off;
-                extremes.add(new double[] {xs.get(i)[0] + off * h, Math.log(peak)});
-            }
-        }
+        List<double[]> extremes = extremes(xs, true);
         assertTrue(extremes.size() >= 6, "extremes of X: " + extremes.size());
         double n = extremes.size();
         double st = 0;
@@ -301,5 +335,26 @@ class TubeSpinTest {
             sty += e[0] * e[1];
         }
         return -(n * sty - st * sy) / (n * stt - st * st);
+    }
+
+    /**
+     * The local maxima of {@code |X|} in samples {@code (t, X)}, each located by a parabola through three
+     * samples: {@code (t, ln|X|)} when {@code log}, else {@code (t, |X|)}.
+     */
+    private static List<double[]> extremes(List<double[]> xs, boolean log) {
+        List<double[]> extremes = new ArrayList<>();
+        for (int i = 1; i + 1 < xs.size(); i++) {
+            double y0 = Math.abs(xs.get(i - 1)[1]);
+            double y1 = Math.abs(xs.get(i)[1]);
+            double y2 = Math.abs(xs.get(i + 1)[1]);
+            if (y1 > y0 && y1 >= y2) {
+                double h = xs.get(i + 1)[0] - xs.get(i)[0];
+                double den = y0 - 2 * y1 + y2;
+                double off = 0.5 * (y0 - y2) / den;
+                double peak = y1 - 0.25 * (y0 - y2) * off;
+                extremes.add(new double[] {xs.get(i)[0] + off * h, log ? Math.log(peak) : peak});
+            }
+        }
+        return extremes;
     }
 }
