@@ -49,7 +49,7 @@ final class DemoCommand implements Callable<Integer> {
         String text = ScenarioFiles.demoText();
         Scenario sc = Scenario.parse(ScenarioFiles.parse(text));
         OutputFolder.checkDemo(out, force);
-        RunOutputs.Report o = RunOutputs.execute(sc, out, true);
+        RunOutputs.Report o = RunOutputs.execute(sc, out, true, true);
         Files.writeString(out.resolve("scenario.json"), text, StandardCharsets.UTF_8);
         PrintWriter w = spec.commandLine().getOut();
         w.println("Trundle demo (all data invented): does the ball come back out of the return tube?");

@@ -83,15 +83,37 @@ public final class Main implements Runnable {
                 e.println("trundle: error: " + ex.getMessage());
                 return BAD_INPUT;
             }
-            String m = ex.getMessage();
-            e.println("trundle: failed: " + ex.getClass().getSimpleName() + (m == null ? "" : ": "
-                + m.replace('\n', ' ')));
+            e.println("trundle: failed: " + describe(ex));
             return FAILED;
         });
         int code = cl.execute(args);
         o.flush();
         e.flush();
         return code;
+    }
+
+    /**
+     * One line for an exception that ends a command: file-system errors in words (the file and
+     * what went wrong), others with their type; long values cut.
+     *
+     * @param ex the exception
+     * @return the line
+     */
+    static String describe(Throwable ex) {
+        Throwable t = ex instanceof java.io.UncheckedIOException && ex.getCause() != null ? ex.getCause() : ex;
+        String m;
+        if (t instanceof java.nio.file.AccessDeniedException) {
+            m = "cannot write " + ((java.nio.file.FileSystemException) t).getFile() + ": permission denied";
+        } else if (t instanceof java.nio.file.NoSuchFileException) {
+            m = "cannot write " + ((java.nio.file.FileSystemException) t).getFile() + ": its folder does not exist";
+        } else if (t instanceof java.nio.file.FileSystemException) {
+            java.nio.file.FileSystemException f = (java.nio.file.FileSystemException) t;
+            m = "cannot write " + f.getFile() + (f.getReason() == null ? "" : ": " + f.getReason());
+        } else {
+            m = t.getClass().getSimpleName() + (t.getMessage() == null ? "" : ": " + t.getMessage());
+        }
+        m = m.replace('\n', ' ').replace('\r', ' ');
+        return m.length() > 1000 ? m.substring(0, 1000) + "... (message cut)" : m;
     }
 
     /** A command that draws on standard error (the progress bar). */

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.stream.Stream;
 
 import org.trundle.scenario.ScenarioException;
+import org.trundle.scenario.Texts;
 
 /**
  * Checks and prepares the {@code --out} folder. {@code run} and {@code sweep} refuse a non-empty
@@ -29,11 +30,28 @@ final class OutputFolder {
      * @param force whether a non-empty folder is acceptable
      */
     static void check(Path dir, boolean force) {
+        String shown = Texts.clip(dir.toString());
+        if (Files.isSymbolicLink(dir) && !Files.exists(dir)) {
+            throw new ScenarioException("--out " + shown + " is a symbolic link to " + Texts.clip(target(dir))
+                + ", which does not exist; create the folder it points to or choose another --out");
+        }
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
-            throw new ScenarioException("--out " + dir + " exists and is not a folder");
+            throw new ScenarioException("--out " + shown + " exists and is not a folder");
+        }
+        Path existing = dir.toAbsolutePath();
+        while (existing != null && !Files.exists(existing)) {
+            existing = existing.getParent();
+        }
+        if (existing != null && !Files.isDirectory(existing)) {
+            throw new ScenarioException("--out " + shown + " cannot be created: " + Texts.clip(existing.toString())
+                + " is a file, not a folder");
+        }
+        if (existing != null && !Files.isWritable(existing)) {
+            throw new ScenarioException("--out " + shown + " cannot be written: permission denied on "
+                + Texts.clip(existing.toString()) + "; choose a folder you may write");
         }
         if (!force && !isEmpty(dir)) {
-            throw new ScenarioException("--out folder " + dir + " is not empty; choose another folder or add --force to"
+            throw new ScenarioException("--out folder " + Texts.clip(dir.toString()) + " is not empty; choose another folder or add --force to"
                 + " write into it");
         }
     }
@@ -69,6 +87,14 @@ final class OutputFolder {
         }
     }
 
+    private static String target(Path link) {
+        try {
+            return Files.readSymbolicLink(link).toString();
+        } catch (IOException e) {
+            return "a missing target";
+        }
+    }
+
     private static boolean isEmpty(Path dir) {
         if (!Files.isDirectory(dir)) {
             return true;
@@ -76,7 +102,8 @@ final class OutputFolder {
         try (Stream<Path> s = Files.list(dir)) {
             return s.findAny().isEmpty();
         } catch (IOException e) {
-            throw new ScenarioException("cannot read --out folder " + dir + ": " + e.getMessage());
+            throw new ScenarioException("cannot read --out folder " + Texts.clip(dir.toString()) + ": "
+                + Main.describe(e));
         }
     }
 }

@@ -36,6 +36,14 @@ final class RunCommand implements Callable<Integer> {
         description = "trajectory sample interval in seconds (s), replacing run.sample_interval; 0 = every step")
     Double sampleInterval;
 
+    @Option(names = "--no-plot", description = "draw no picture (run.png); the run and its files are otherwise the same")
+    boolean noPlot;
+
+    @Option(names = "--max-rows", paramLabel = "N",
+        description = "most rows trajectory.csv may get, replacing run.max_rows (default 2000000); a run that would"
+            + " write more is refused before it starts")
+    Long maxRows;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -64,10 +72,13 @@ final class RunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        JsonNode doc = override(ScenarioFiles.read(scenario), duration, sampleInterval);
-        Scenario sc = Scenario.parse(doc);
         OutputFolder.check(out, force);
-        RunOutputs.Report o = RunOutputs.execute(sc, out, false);
+        JsonNode doc = override(ScenarioFiles.read(scenario), duration, sampleInterval);
+        if (maxRows != null) {
+            doc = ScenarioPath.parse("run.max_rows").set(doc, maxRows);
+        }
+        Scenario sc = Scenario.parse(doc);
+        RunOutputs.Report o = RunOutputs.execute(sc, out, false, !noPlot);
         if (doc.has("sweep")) {
             spec.commandLine().getOut().println("Note:     the sweep section is ignored by run (use: trundle sweep)");
         }

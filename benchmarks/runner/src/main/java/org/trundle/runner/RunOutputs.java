@@ -8,12 +8,15 @@ import java.util.Locale;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.BallState;
 import org.trundle.core.EndReason;
+import org.trundle.core.EnergyBudget;
 import org.trundle.core.PhaseSpan;
 import org.trundle.core.RunEvent;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
 import org.trundle.core.SimulationException;
+import org.trundle.core.SolverSettings;
 import org.trundle.report.RunPlot;
 import org.trundle.report.RunRecorder;
 import org.trundle.scenario.Scenario;
@@ -32,8 +35,9 @@ final class RunOutputs {
      * @param result the result, or null when the library stopped the run with an exception
      * @param failure why it failed, or null
      * @param recorder the recorded samples and events
+     * @param plotted whether run.png was drawn
      */
-    record Report(RunResult result, String failure, RunRecorder recorder) {
+    record Report(RunResult result, String failure, RunRecorder recorder, boolean plotted) {
         /** @return 0, or {@link Main#FAILED} when the run failed (exception or geometry stop) */
         int exitCode() {
             return result == null || result.endReason() == EndReason.GEOMETRY ? Main.FAILED : 0;
@@ -56,27 +60,35 @@ final class RunOutputs {
      * @param sc the scenario, checked
      * @param dir the output folder, checked
      * @param demo whether this is the demo (its folder may be replaced)
+     * @param plot whether to draw run.png
      * @return the run's outcome
      * @throws IOException when an output cannot be written
      */
-    static Report execute(Scenario sc, Path dir, boolean demo) throws IOException {
+    static Report execute(Scenario sc, Path dir, boolean demo, boolean plot) throws IOException {
         Simulation sim = sc.simulation();
+        checkRows(sc);
         Vector3D up = up(sc);
         RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo));
         RunResult result = null;
         String failure = null;
         try {
             result = sim.run(sc.start(), sc.duration(), rec);
-        } catch (SimulationException e) {
-            rec.close();
-            failure = e.getMessage();
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
         } catch (IllegalArgumentException e) {
             if (rec.validatedStart() == null) {
                 throw new ScenarioException("start: " + e.getMessage());
             }
-            throw e;
-        } catch (java.io.UncheckedIOException e) {
-            throw e.getCause();
+            failure = failureText(e);
+        } catch (RuntimeException e) {
+            // whatever stopped the run part-way, the summary still says what it has
+            failure = failureText(e);
+        }
+        if (failure != null) {
+            if (rec.validatedStart() == null) {
+                OutputFolder.create(dir, demo);
+            }
+            rec.close();
         }
         ObjectNode summary;
         String[] title = {headline(sc), result != null ? "Result: " + endText(result) : "Result: the run failed: "
@@ -84,11 +96,51 @@ final class RunOutputs {
         if (result != null) {
             summary = SummaryJson.of(sc.description(), result);
         } else {
-            summary = SummaryJson.failed(sc.description(), failure, rec.lastState() != null ? rec.lastState() : rec.validatedStart(), rec.events());
+            BallState last = rec.lastState() != null ? rec.lastState() : rec.validatedStart();
+            summary = SummaryJson.failed(sc.description(), failure, last != null ? last : sc.start(), rec.events());
         }
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
-        RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
-        return new Report(result, failure, rec);
+        if (plot) {
+            RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
+        }
+        return new Report(result, failure, rec, plot);
+    }
+
+    /** A library exception as one line: its message, or its type when it has none. */
+    private static String failureText(RuntimeException e) {
+        if (e instanceof SimulationException) {
+            return e.getMessage();
+        }
+        String m = e.getMessage();
+        return e.getClass().getSimpleName() + (m == null ? "" : ": " + m.replace('\n', ' '));
+    }
+
+    /**
+     * The most rows a run can write to {@code trajectory.csv}, estimated before it starts: one per
+     * sample interval over the duration, plus the start and the end (event rows come on top, at
+     * most {@code maxEvents}); with a sample interval of 0 (every step) the run's evaluation budget
+     * bounds the steps, at 12 evaluations per Dormand–Prince 8(5,3) step.
+     *
+     * @param sc the scenario
+     * @return the estimate (may be infinite)
+     */
+    static double estimateRows(Scenario sc) {
+        SolverSettings set = sc.simulation().settings();
+        if (set.sampleInterval() > 0) {
+            return Math.floor(sc.duration() / set.sampleInterval()) + 2;
+        }
+        return Math.ceil(set.maxEvaluations() / 12.0) + 2;
+    }
+
+    /** Refuses, before anything is written, a run whose trajectory would pass the row cap. */
+    static void checkRows(Scenario sc) {
+        double rows = estimateRows(sc);
+        if (rows > sc.maxRows()) {
+            throw new ScenarioException(String.format(Locale.ROOT, "the run would write about %.3g trajectory rows"
+                + " (run.duration %s s / run.sample_interval %s s), more than the cap of %d; raise the sample"
+                + " interval, or the cap with run.max_rows or --max-rows", rows, sc.duration(),
+                sc.simulation().settings().sampleInterval(), sc.maxRows()));
+        }
     }
 
     /** The first sentence of the description (or "Trundle run"), for the picture's title. */
@@ -155,17 +207,30 @@ final class RunOutputs {
                     "%s %.4f-%.4f s (centre path %.4f m)", p.phase().label(), p.start(), p.end(), p.centrePath()));
             }
             out.println("Phases:   " + ph);
-            out.println(String.format(Locale.ROOT,
-                "Energy:   initial %.6e J, final %.6e J, friction loss %.3e J, impact loss %.3e J,"
-                    + " budget residual %.1e of scale", r.energy().initial(), r.energy().fin(),
-                r.energy().slidingFrictionLoss(), r.energy().impactLoss(), r.energy().relativeResidual()));
+            out.println("Energy:   " + energyText(r.energy()));
             out.println(String.format(Locale.ROOT,
                 "Checks:   largest normal force %.4g N, largest distance error %.2e m",
                 r.maxNormalForce(), r.maxDistanceError()));
         }
         out.println("Files:    " + String.join(", ", List.of(dir.resolve("summary.json").toString(),
-            dir.resolve("trajectory.csv").toString(), dir.resolve("run.png").toString())));
+            dir.resolve("trajectory.csv").toString())) + (o.plotted() ? ", " + dir.resolve("run.png")
+            : " (no picture: --no-plot)"));
         out.flush();
+    }
+
+    /**
+     * The energy account in one line: initial and final energy, every loss kind the budget books
+     * (sliding friction, rolling resistance, pivoting resistance, other couples, impacts), the work
+     * of applied loads, and the residual.
+     *
+     * @param e the budget
+     * @return the text
+     */
+    static String energyText(EnergyBudget e) {
+        return String.format(Locale.ROOT, "initial %.6e J, final %.6e J; losses: friction %.3e J, rolling resistance"
+            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J; applied work %.3e J;"
+            + " budget residual %.1e of scale", e.initial(), e.fin(), e.slidingFrictionLoss(), e.rollingResistanceLoss(),
+            e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.appliedWork(), e.relativeResidual());
     }
 
     static String vec(Vector3D v) {

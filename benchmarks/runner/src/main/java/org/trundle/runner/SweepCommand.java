@@ -69,6 +69,9 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         description = "simulated time per run in seconds (s), replacing run.duration")
     Double duration;
 
+    @Option(names = "--no-plot", description = "draw no picture (regime-map.png); sweep.csv is the same")
+    boolean noPlot;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -89,6 +92,11 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
 
     @Override
     public Integer call() throws Exception {
+        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        if (n < 1) {
+            throw new ScenarioException("--threads must be at least 1, got " + n);
+        }
+        OutputFolder.check(out, force); // before the points are checked: that may take a while
         JsonNode doc = RunCommand.override(ScenarioFiles.read(scenario), duration, null);
         SweepJob job = SweepJob.of(doc);
         if (!engine.equals("local")) {
@@ -101,14 +109,9 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         for (int i = 0; i < space.size(); i++) {
             job.scenario(i); // every point checked before anything is written
         }
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
-        if (n < 1) {
-            throw new ScenarioException("--threads must be at least 1, got " + n);
-        }
-        OutputFolder.check(out, force);
         OutputFolder.create(out, false);
         Map<String, Long> counts = new TreeMap<>();
-        RegimeMap map = new RegimeMap(space.names(), job.labels());
+        RegimeMap map = noPlot ? null : new RegimeMap(space.names(), job.labels());
         SweepSummary summary;
         ProgressBar bar = noProgress ? null : new ProgressBarBuilder().setTaskName("sweep").setInitialMax(space.size())
             .setStyle(ProgressBarStyle.ASCII).setUpdateIntervalMillis(250)
@@ -121,7 +124,9 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         try (SweepTable table = new SweepTable(out.resolve("sweep.csv"), space.names())) {
             summary = executor.execute(space, job, row -> {
                 table.accept(row);
-                map.add(row);
+                if (map != null) {
+                    map.add(row);
+                }
                 counts.merge(row.outcome(), 1L, Long::sum);
             });
         } finally {
@@ -130,7 +135,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
             }
         }
         String title = "Regime map: " + String.join(" x ", space.names()) + " (" + space.size() + " runs)";
-        boolean drawn = space.names().size() <= 2;
+        boolean drawn = !noPlot && space.names().size() <= 2;
         if (drawn) {
             map.write(out.resolve("regime-map.png"), title, job.spec().random());
         }
@@ -139,7 +144,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
             + " thread" + (n == 1 ? "" : "s") + (job.spec().random() ? " (random sample)" : " (grid)"));
         w.println("Outcomes: " + outcomes(counts));
         w.println("Files:    " + out.resolve("sweep.csv") + (drawn ? ", " + out.resolve("regime-map.png")
-            : " (the regime map is drawn for one or two parameters only)"));
+            : noPlot ? " (no picture: --no-plot)" : " (the regime map is drawn for one or two parameters only)"));
         w.flush();
         return 0;
     }

@@ -36,6 +36,7 @@ class BadInputTest {
         assertEquals(1, r.err().strip().lines().count(), "one line: " + r.err());
         assertTrue(r.err().startsWith("trundle: error: "), r.err());
         assertTrue(r.err().contains(expected), "expected \"" + expected + "\" in: " + r.err());
+        assertTrue(r.err().length() < 1100, "a bounded line: " + r.err().length());
         assertFalse(r.err().contains("\tat ") || r.err().contains("Exception"), "no stack trace: " + r.err());
         assertFalse(Files.exists(out), "nothing written to --out");
     }
@@ -203,6 +204,91 @@ class BadInputTest {
         assertEquals(0, forced.code(), forced.err());
         assertTrue(Files.exists(out.resolve("summary.json")));
         assertEquals("mine", Files.readString(out.resolve("notes.txt")));
+    }
+
+    /** Issue 18, item 10: each of these exited 1 with an exception's text; now 2 with one line. */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', value = {
+        "speed 1e308       | \"speed\": 0.9          | \"speed\": 1e308         | start: a speed of 1.0E308 m/s is too large to compute with",
+        "tolerance 1e-300  | \"tolerance\": 1e-10    | \"tolerance\": 1e-300    | run.tolerance must be at least 1.0E-14",
+        "duration 4.9e-324 | \"duration\": 2.0       | \"duration\": 4.9e-324   | run.duration must be at least 1.0E-9 s",
+        "rows              | \"sample_interval\": 0.001 | \"sample_interval\": 1e-12 | the run would write about 2.00e+12 trajectory rows",
+    })
+    void numbersBeyondWhatARunCanUseAreBadInput(String what, String from, String to, String message) {
+        assertRejected(Cli.demoWith(from.strip(), to.strip()), message.strip());
+    }
+
+    @Test
+    void sweepIndexAndRangeOverflowsAreBadInput() {
+        String base = ScenarioFiles.demoText().replace("\"run\":", "\"sweep\": SWEEP,\n  \"run\":");
+        assertRejected(base.replace("SWEEP", "{\"start.position[99999999999]\": [1, 2]}"),
+            "index [99999999999] is too large", "sweep");
+        assertRejected(base.replace("SWEEP", "{\"start.speed\": {\"from\": -1e308, \"to\": 1e308},"
+            + " \"random\": {\"samples\": 3, \"seed\": 1}}"), "a width beyond the largest double", "sweep");
+        assertRejected(base.replace("SWEEP", "{\"start.speed\": [0.5], \"labels\": {\"exit_tp\": \"top\"}}"),
+            "unknown key sweep.labels.exit_tp: not an outcome of this scenario; outcomes: exit_from, exit_to, duration,"
+                + " rest, budget, failed", "sweep");
+    }
+
+    @Test
+    void fileProblemsAreOneLine() throws IOException {
+        Path latin = dir.resolve("latin.json");
+        Files.write(latin, Cli.demoWith("Demo with", "D\u00e9mo with").getBytes(java.nio.charset.StandardCharsets.ISO_8859_1));
+        Cli.Result r = Cli.run("run", latin.toString(), "--out", dir.resolve("o").toString());
+        assertEquals(2, r.code());
+        assertEquals("trundle: error: scenario file " + latin + " is not UTF-8 text: byte 0xE9 at offset 21 (line 2) is"
+            + " not valid UTF-8; save the file as UTF-8", r.err().strip());
+        Path yaml = Cli.write(dir, "alias.yaml", "description: &d hello\nball: *d\n");
+        Cli.Result a = Cli.run("run", yaml.toString(), "--out", dir.resolve("o").toString());
+        assertEquals(2, a.code());
+        assertEquals("trundle: error: YAML alias *d at line 2, column 7: scenario files take no anchors and aliases;"
+            + " write the value out in full", a.err().strip());
+        if (Files.isReadable(Path.of("/dev/zero"))) {
+            Cli.Result z = Cli.run("run", "/dev/zero", "--out", dir.resolve("o").toString());
+            assertEquals(2, z.code());
+            assertEquals("trundle: error: scenario file /dev/zero is larger than 1048576 bytes (1 MiB), the most a"
+                + " scenario file may hold", z.err().strip());
+        }
+        assertFalse(Files.exists(dir.resolve("o")));
+    }
+
+    @Test
+    void outputFoldersThatCannotBeWrittenAreBadInput() throws IOException {
+        Path f = Cli.write(dir, "ok.json", Cli.demoWith("\"duration\": 2.0", "\"duration\": 0.01"));
+        Path link = dir.resolve("dangling");
+        Files.createSymbolicLink(link, dir.resolve("missing-target"));
+        Cli.Result d = Cli.run("run", f.toString(), "--out", link.toString());
+        assertEquals(2, d.code(), d.err());
+        assertEquals("trundle: error: --out " + link + " is a symbolic link to " + dir.resolve("missing-target")
+            + ", which does not exist; create the folder it points to or choose another --out", d.err().strip());
+        Path file = Cli.write(dir, "plain.txt", "x");
+        Cli.Result p = Cli.run("run", f.toString(), "--out", file.resolve("sub").toString());
+        assertEquals(2, p.code(), p.err());
+        assertEquals("trundle: error: --out " + file.resolve("sub") + " cannot be created: " + file
+            + " is a file, not a folder", p.err().strip());
+        Path locked = Files.createDirectories(dir.resolve("locked"));
+        Files.setPosixFilePermissions(locked, java.nio.file.attribute.PosixFilePermissions.fromString("r-xr-xr-x"));
+        try {
+            org.junit.jupiter.api.Assumptions.assumeFalse(Files.isWritable(locked), "the super-user may write anywhere");
+            Cli.Result ro = Cli.run("run", f.toString(), "--out", locked.resolve("out").toString());
+            assertEquals(2, ro.code(), ro.err());
+            assertEquals("trundle: error: --out " + locked.resolve("out") + " cannot be written: permission denied on "
+                + locked + "; choose a folder you may write", ro.err().strip());
+        } finally {
+            Files.setPosixFilePermissions(locked, java.nio.file.attribute.PosixFilePermissions.fromString("rwxr-xr-x"));
+        }
+    }
+
+    /** The output folder is checked before the sweep's points (a 10⁷-point sweep takes a while to check). */
+    @Test
+    void sweepChecksTheOutputFolderFirst() throws IOException {
+        String bad = ScenarioFiles.demoText().replace("\"run\":", "\"sweep\": {\"start.speed\": [0.5, -1]},\n  \"run\":");
+        Path f = Cli.write(dir, "sweep.json", bad);
+        Path out = Files.createDirectories(dir.resolve("busy"));
+        Files.writeString(out.resolve("notes.txt"), "mine");
+        Cli.Result r = Cli.run("sweep", f.toString(), "--out", out.toString(), "--no-progress");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("is not empty; choose another folder or add --force"), r.err());
     }
 
     @Test

@@ -40,6 +40,20 @@ public record Scenario(JsonNode document, String description, Simulation simulat
      * @throws ScenarioException naming the key and value of the first problem
      */
     public static Scenario parse(JsonNode doc) {
+        try {
+            return build(doc);
+        } catch (IllegalArgumentException e) {
+            // a value the checks here let through and the library refused: still bad input
+            throw new ScenarioException("invalid scenario: " + e.getMessage());
+        }
+    }
+
+    /** Shortest run duration (s): a thousand times the solver's event-time tolerance (1e-12 s). */
+    public static final double MIN_DURATION = 1e-9;
+    /** Smallest relative tolerance: about 50 times the double precision (2.2e-16). */
+    public static final double MIN_TOLERANCE = 1e-14;
+
+    private static Scenario build(JsonNode doc) {
         Section root = Section.root(doc);
         root.allow(TOP_KEYS.toArray(new String[0]));
         String description = root.text("description", "");
@@ -49,13 +63,24 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
         Section run = root.section("run");
-        run.allow("duration", "tolerance", "sample_interval", "stop_at_exit", "max_check_interval");
+        run.allow("duration", "tolerance", "sample_interval", "stop_at_exit", "max_check_interval", "max_rows");
+        if (run.has("max_rows")) {
+            maxRows(run);
+        }
         double duration = run.positive("duration", "s");
+        if (duration < MIN_DURATION) {
+            throw new ScenarioException("run.duration must be at least " + MIN_DURATION + " s (a thousand times the"
+                + " event-time tolerance), got " + duration);
+        }
         SolverSettings set = SolverSettings.defaults();
         if (run.has("tolerance")) {
             double tol = run.positive("tolerance", "");
             if (!(tol < 1e-2)) {
                 throw new ScenarioException("run.tolerance must be below 1e-2, got " + tol);
+            }
+            if (tol < MIN_TOLERANCE) {
+                throw new ScenarioException("run.tolerance must be at least " + MIN_TOLERANCE + " (finer than double"
+                    + " precision allows), got " + tol);
             }
             set = set.withTolerance(tol);
         }
@@ -96,6 +121,27 @@ public record Scenario(JsonNode document, String description, Simulation simulat
             }
         }
         return Ball.of(r, m, k);
+    }
+
+    /** Default cap on the rows of {@code trajectory.csv} (about 600 MB of text). */
+    public static final long DEFAULT_MAX_ROWS = 2_000_000L;
+
+    private static long maxRows(Section run) {
+        double v = run.number("max_rows", "");
+        JsonNode n = run.raw("max_rows");
+        if (!n.canConvertToExactIntegral() || !(v >= 1) || v > 1e15) {
+            throw new ScenarioException("run.max_rows must be a whole number from 1 to 1e15, got " + n.asText());
+        }
+        return (long) v;
+    }
+
+    /**
+     * @return the most trajectory rows a run of this scenario may write: {@code run.max_rows}, by
+     *     default {@link #DEFAULT_MAX_ROWS}
+     */
+    public long maxRows() {
+        Section run = Section.root(document).section("run");
+        return run.has("max_rows") ? maxRows(run) : DEFAULT_MAX_ROWS;
     }
 
     /** @return this scenario as a run of the core sweep API */

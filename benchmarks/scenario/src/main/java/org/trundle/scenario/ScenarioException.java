@@ -12,6 +12,14 @@ public final class ScenarioException extends RuntimeException {
      * @param message what is wrong, where (the key's dotted path) and the value found
      */
     public ScenarioException(String message) {
-        super(message.replace('\n', ' ').replace('\r', ' '), null, false, false);
+        super(oneLine(message), null, false, false);
+    }
+
+    /** Longest message (characters); user values in it are cut before, this is the last guard. */
+    static final int MAX_CHARS = 1000;
+
+    private static String oneLine(String message) {
+        String m = message.replace('\n', ' ').replace('\r', ' ');
+        return m.length() <= MAX_CHARS ? m : m.substring(0, MAX_CHARS) + "... (message cut)";
     }
 }

@@ -40,17 +40,22 @@ public final class ScenarioPath {
         for (String p : parts) {
             Matcher m = SEGMENT.matcher(p);
             if (!m.matches()) {
-                throw new ScenarioException("sweep parameter \"" + text + "\" is not a dotted key path like"
+                throw new ScenarioException("sweep parameter \"" + Texts.clip(text) + "\" is not a dotted key path like"
                     + " start.velocity[2] or contact.static_friction");
             }
             steps.add(m.group(1));
             Matcher i = INDEX.matcher(m.group(2));
             while (i.find()) {
-                steps.add(Integer.parseInt(i.group(1)));
+                String digits = i.group(1);
+                if (digits.length() > 9) {
+                    throw new ScenarioException("sweep parameter \"" + Texts.clip(text) + "\": index [" + Texts.clip(digits)
+                        + "] is too large (no list in a scenario has more than " + Texts.MAX_FILE_BYTES + " elements)");
+                }
+                steps.add(Integer.parseInt(digits));
             }
         }
         if (steps.size() < 2 || steps.get(0).equals("sweep") || steps.get(0).equals("description")) {
-            throw new ScenarioException("sweep parameter \"" + text + "\" must name a numeric value inside a section,"
+            throw new ScenarioException("sweep parameter \"" + Texts.clip(text) + "\" must name a numeric value inside a section,"
                 + " like start.velocity[2] or contact.static_friction");
         }
         return new ScenarioPath(text, steps);

@@ -62,7 +62,7 @@ final class Section {
         while (it.hasNext()) {
             String k = it.next();
             if (!ok.contains(k)) {
-                throw new ScenarioException("unknown key " + where(k) + "; valid keys"
+                throw new ScenarioException("unknown key " + Texts.clip(where(k)) + "; valid keys"
                     + (path.isEmpty() ? " at the top level" : " in " + path) + ": " + String.join(", ", ok));
             }
         }
@@ -287,7 +287,7 @@ final class Section {
         }
         String s = n.textValue();
         if (!ok.contains(s)) {
-            throw new ScenarioException(where(key) + " must be one of " + quoteAll(ok) + ", got \"" + s + "\"");
+            throw new ScenarioException(where(key) + " must be one of " + quoteAll(ok) + ", got \"" + Texts.clip(s) + "\"");
         }
         return s;
     }
@@ -362,7 +362,7 @@ final class Section {
         }
         if (n.isTextual()) {
             String t = n.textValue();
-            return "the string \"" + (t.length() > 40 ? t.substring(0, 40) + "..." : t) + "\"";
+            return "the string \"" + Texts.clip(t) + "\"";
         }
         if (n.isNumber()) {
             return "the number " + n.asText();

@@ -74,6 +74,34 @@ record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<B
     }
 
     /**
+     * The velocity, the spin and the kinetic energy they carry must be finite doubles: a speed of
+     * 1e308 m/s is a number, but no state of a ball.
+     */
+    private void checkFinite(Simulation sim) {
+        double r = sim.ball().radius();
+        double m = sim.ball().mass();
+        double v = norm(velocity);
+        if (!Double.isFinite(v) || !Double.isFinite(velocity.getX()) || !Double.isFinite(velocity.getY())
+            || !Double.isFinite(velocity.getZ()) || !Double.isFinite(0.5 * m * v * v) || !Double.isFinite(v / r)) {
+            throw new ScenarioException(String.format(Locale.ROOT, "start: a speed of %s m/s is too large to compute"
+                + " with: the velocity, the rolling spin v/r or the kinetic energy m v^2/2 of a %s kg ball of radius"
+                + " %s m overflows a double", v, m, r));
+        }
+        if (spin != null) {
+            double w = norm(spin);
+            if (!Double.isFinite(w) || !Double.isFinite(0.5 * sim.ball().momentOfInertia() * w * w)) {
+                throw new ScenarioException(String.format(Locale.ROOT, "start.spin: a spin of %s rad/s is too large to"
+                    + " compute with: the rotational energy I w^2/2 overflows a double", w));
+            }
+        }
+    }
+
+    /** The length of a vector without overflow in the squares (Math.hypot). */
+    private static double norm(Vector3D v) {
+        return Math.hypot(Math.hypot(v.getX(), v.getY()), v.getZ());
+    }
+
+    /**
      * The start state for a simulation, checked: a contact start must lie on the surface inside the
      * patch and move along it; no start may penetrate the surface.
      *
@@ -81,6 +109,7 @@ record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<B
      * @return the start state
      */
     BallState state(Simulation sim) {
+        checkFinite(sim);
         ContactGeometry g;
         try {
             g = sim.geometryAt(position, 0.0);

@@ -188,25 +188,43 @@ public final class SweepRow implements Serializable {
     }
 
     /**
-     * The CSV line of the row (no newline): numbers as shortest round-trip decimals
-     * ({@link Double#toString(double)}), absent values empty, the message quoted.
+     * The CSV line of the row (no newline): parameters as their shortest exact decimals
+     * ({@link Decimals#shortest}), other numbers as {@link Double#toString(double)} gives them (exact,
+     * round-trip), absent values empty, the message quoted.
      *
      * @return the line
      */
     public String csv() {
+        return csv(values(), parameters.length);
+    }
+
+    /**
+     * The CSV line of a row given by its values, as {@link #values()} gives them (for executors
+     * that carry rows in their own form, such as Spark).
+     *
+     * @param values the values in column order ({@link Integer}, {@link Double}, {@link String},
+     *     null where absent)
+     * @param parameters number of parameters
+     * @return the line (no newline)
+     */
+    public static String csv(Object[] values, int parameters) {
         StringBuilder b = new StringBuilder();
-        b.append(index);
-        for (double p : parameters) {
-            b.append(',').append(p);
-        }
-        b.append(',').append(outcome).append(',').append(endReason).append(',').append(exitEdge == null ? "" : exitEdge);
-        for (Double f : figures) {
-            b.append(',');
-            if (f != null) {
-                b.append(f.doubleValue());
+        for (int c = 0; c < values.length; c++) {
+            if (c > 0) {
+                b.append(',');
+            }
+            Object v = values[c];
+            if (v == null) {
+                continue;
+            }
+            if (c >= 1 && c <= parameters) {
+                b.append(Decimals.shortest((Double) v));
+            } else if (c == values.length - 1) {
+                b.append(quote((String) v));
+            } else {
+                b.append(v);
             }
         }
-        b.append(',').append(events).append(',').append(quote(message));
         return b.toString();
     }
 

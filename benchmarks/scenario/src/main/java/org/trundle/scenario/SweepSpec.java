@@ -28,7 +28,8 @@ import org.trundle.core.sweep.RandomSample;
  * values, both ends included) or a list of values. Without {@code random} the parameters span a
  * grid (the first one varies slowest); with {@code random} ({@code samples} ≥ 1, integer
  * {@code seed}) each run draws every parameter uniformly from its {@code {"from", "to"}} range.
- * {@code labels} (optional) names outcomes in the regime map's legend.
+ * {@code labels} (optional) names outcomes in the regime map's legend: each key must be an outcome
+ * of the scenario ({@link #outcomes}), old camelCase edge spellings included.
  *
  * @param paths the parameter paths, in file order
  * @param space the points
@@ -69,11 +70,7 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
                 + " {\"from\": -1.0, \"to\": 0.0, \"count\": 40}");
         }
         Map<String, String> labels = new LinkedHashMap<>();
-        s.optionalSection("labels").ifPresent(l -> {
-            for (String k : l.keys()) {
-                labels.put(k, l.text(k, k));
-            }
-        });
+        s.optionalSection("labels").ifPresent(l -> labels.putAll(labels(l, outcomes(root))));
         ParameterSpace space;
         boolean random = s.has("random");
         if (random) {
@@ -91,6 +88,7 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
                     throw new ScenarioException(p.where("from") + " must not exceed " + p.where("to") + ", got from = "
                         + from + ", to = " + to);
                 }
+                finiteWidth(p, from, to);
                 ranges.add(new RandomSample.Range(k, from, to));
             }
             space = RandomSample.of(seed, samples, ranges);
@@ -116,7 +114,10 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
                 } else if (n.isObject()) {
                     Section p = s.section(k);
                     p.allow("from", "to", "count");
-                    a = Axis.linear(k, p.number("from", ""), p.number("to", ""), integer(p, "count", 1, MAX_RUNS));
+                    double from = p.number("from", "");
+                    double to = p.number("to", "");
+                    finiteWidth(p, from, to);
+                    a = Axis.linear(k, from, to, integer(p, "count", 1, MAX_RUNS));
                 } else {
                     throw new ScenarioException("sweep." + k + " must be a range {\"from\": .., \"to\": .., \"count\": ..}"
                         + " or a list of values, got " + Section.kind(n));
@@ -130,6 +131,95 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
             space = Grid.of(axes);
         }
         return new SweepSpec(List.copyOf(paths), space, random, Map.copyOf(labels));
+    }
+
+    /** A range whose width {@code to − from} is a finite double. */
+    private static void finiteWidth(Section p, double from, double to) {
+        if (!Double.isFinite(to - from)) {
+            throw new ScenarioException(p.path() + " spans from " + from + " to " + to + ", a width beyond the largest"
+                + " double (about 1.8e308); give a narrower range");
+        }
+    }
+
+    /** Largest legend label (characters): a legend line. */
+    static final int MAX_LABEL_CHARS = 80;
+
+    /**
+     * The outcomes a run of this scenario can have: {@code exit_<edge>} for each edge its surface
+     * names, then {@code duration}, {@code rest}, {@code budget}, {@code failed}.
+     *
+     * @param root the scenario's root
+     * @return the outcome names, in that order
+     */
+    static List<String> outcomes(Section root) {
+        List<String> out = new ArrayList<>();
+        org.trundle.core.Surface surface = SurfaceFactory.create(root.section("surface"));
+        if (surface.hasEdges()) {
+            for (int i = 0; i < 16; i++) {
+                String o = "exit_" + surface.edgeName(i);
+                if (out.contains(o)) {
+                    break; // edge indices past the last repeat its name
+                }
+                out.add(o);
+            }
+        }
+        out.addAll(List.of("duration", "rest", "budget", "failed"));
+        return out;
+    }
+
+    /**
+     * The {@code labels} section: outcome name → legend text. A key must be an outcome of the
+     * scenario; the camelCase edge spellings of earlier versions ({@code exit_angleFrom}) are
+     * accepted for the snake_case ones ({@code exit_angle_from}) and the other way round.
+     *
+     * @param l the section
+     * @param outcomes the scenario's outcomes
+     * @return the labels, keyed by outcome name
+     */
+    static Map<String, String> labels(Section l, List<String> outcomes) {
+        Map<String, String> labels = new LinkedHashMap<>();
+        for (String k : l.keys()) {
+            String outcome = null;
+            for (String o : outcomes) {
+                if (snakeEdge(o).equals(snakeEdge(k))) {
+                    outcome = o;
+                }
+            }
+            if (outcome == null) {
+                throw new ScenarioException("unknown key " + Texts.clip(l.where(k)) + ": not an outcome of this scenario;"
+                    + " outcomes: " + String.join(", ", outcomes));
+            }
+            String text = l.text(k, k);
+            if (text.length() > MAX_LABEL_CHARS) {
+                throw new ScenarioException(l.where(k) + " is a legend label of " + text.length() + " characters; labels"
+                    + " may have at most " + MAX_LABEL_CHARS);
+            }
+            labels.put(outcome, text);
+        }
+        return labels;
+    }
+
+    /**
+     * The outcome name for a {@code labels} key, accepting the camelCase edge names of earlier
+     * versions as aliases (scenario keys are a contract): {@code exit_angleFrom} becomes
+     * {@code exit_angle_from}, {@code exit_polarTo} {@code exit_polar_to}; other keys are unchanged.
+     *
+     * @param key a labels key
+     * @return the outcome it names
+     */
+    static String snakeEdge(String key) {
+        if (!key.startsWith("exit_")) {
+            return key;
+        }
+        StringBuilder b = new StringBuilder(key.length() + 4);
+        for (char c : key.toCharArray()) {
+            if (Character.isUpperCase(c)) {
+                b.append('_').append(Character.toLowerCase(c));
+            } else {
+                b.append(c);
+            }
+        }
+        return b.toString();
     }
 
     private static double integerValue(Section s, String key) {

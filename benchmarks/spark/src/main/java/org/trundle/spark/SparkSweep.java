@@ -45,10 +45,10 @@ import org.trundle.scenario.SweepRow;
  * cancels gives up its run in flight at the next output sample.
  *
  * <p><b>Outputs</b>, under the output folder: {@code rows.parquet/} (the rows, one file per
- * partition, in index order), {@code sweep-csv/} (the same rows as CSV with a header, part files in
- * index order, the columns of the local {@code sweep.csv}; absent values empty; text quoted with
- * {@code "} doubled) and {@code regime-map.png} (for one or two parameters), computed from the
- * Parquet rows. The driver holds only aggregates: the outcome counts and, for the regime map, one
+ * partition), {@code sweep-csv/} (the same rows as {@link SweepRow#csv()} lines, part files in index
+ * order, the header at the top of the first: concatenated, they are the local {@code sweep.csv} byte
+ * for byte) and {@code regime-map.png} (for one or two parameters), computed from the Parquet
+ * rows. The driver holds only aggregates: the outcome counts and, for the regime map, one
  * marker per run up to {@value #EXACT_MAP} runs, else one per outcome and cell of a
  * {@value #CELLS}×{@value #CELLS} lattice over the parameter ranges.
  *
@@ -197,9 +197,42 @@ public final class SparkSweep {
         rows(spark, job, partitions).write().parquet(parquet);
         Dataset<Row> rows = spark.read().schema(schema(job.names())).parquet(parquet);
         int parts = Math.min(partitions, Math.max(job.size(), 1));
-        rows.repartitionByRange(parts, rows.col("index")).sortWithinPartitions("index").write()
-            .option("header", true).option("escape", "\"").option("nullValue", "").option("emptyValue", "")
-            .csv(new Path(folder, "sweep-csv").toString());
+        int np = job.names().size();
+        String header = SweepRow.header(job.names());
+        MapPartitionsFunction<Row, String> toCsv = it -> {
+            boolean first = TaskContext.getPartitionId() == 0;
+            return new Iterator<>() {
+                private boolean headerDue = first;
+
+                @Override
+                public boolean hasNext() {
+                    return headerDue || it.hasNext();
+                }
+
+                @Override
+                public String next() {
+                    if (headerDue) {
+                        headerDue = false;
+                        return header;
+                    }
+                    Row r = it.next();
+                    Object[] v = new Object[r.length()];
+                    for (int c = 0; c < v.length; c++) {
+                        v[c] = r.get(c);
+                    }
+                    return SweepRow.csv(v, np);
+                }
+            };
+        };
+        Path csv = new Path(folder, "sweep-csv");
+        rows.repartitionByRange(parts, rows.col("index")).sortWithinPartitions("index")
+            .mapPartitions(toCsv, Encoders.STRING()).write().text(csv.toString());
+        for (FileStatus f : fs.listStatus(csv)) {
+            String name = f.getPath().getName();
+            if (name.startsWith("part-") && name.endsWith(".txt")) {
+                fs.rename(f.getPath(), new Path(csv, name.substring(0, name.length() - 4) + ".csv"));
+            }
+        }
         Map<String, Long> counts = new LinkedHashMap<>();
         for (Row r : rows.groupBy("outcome").count().orderBy("outcome").collectAsList()) {
             counts.put(r.getString(0), r.getLong(1));

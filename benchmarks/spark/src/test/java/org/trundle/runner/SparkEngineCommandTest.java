@@ -54,7 +54,11 @@ class SparkEngineCommandTest {
         String[] refused = run("sweep", f.toString(), "--out", full.toString(), "--engine", "spark",
             "--master", "local[2]");
         assertEquals("2", refused[0], refused[2]);
-        assertTrue(refused[2].contains("must not exist or be an empty folder"), refused[2]);
+        assertTrue(refused[2].contains("is not empty"), refused[2]);
+        String[] forced = run("sweep", f.toString(), "--out", full.toString(), "--engine", "spark",
+            "--master", "local[2]", "--force");
+        assertEquals("2", forced[0], forced[2]);
+        assertTrue(forced[2].contains("--force goes with --engine local"), forced[2]);
         Files.delete(full.resolve("keep.txt")); // an empty folder is fine
 
         String[] spark = run("sweep", f.toString(), "--out", full.toString(), "--engine", "spark",
@@ -65,11 +69,7 @@ class SparkEngineCommandTest {
         List<String> got = new ArrayList<>();
         try (Stream<Path> parts = Files.list(full.resolve("sweep-csv"))) {
             for (Path p : parts.filter(p -> p.getFileName().toString().startsWith("part-")).sorted().toList()) {
-                List<String> l = Files.readAllLines(p);
-                if (got.isEmpty()) {
-                    got.add(l.get(0));
-                }
-                got.addAll(l.subList(1, l.size()));
+                got.addAll(Files.readAllLines(p));
             }
         }
         assertEquals(expect, got);

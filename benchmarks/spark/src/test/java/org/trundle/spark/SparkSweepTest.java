@@ -106,14 +106,14 @@ class SparkSweepTest {
         List<String> lines = new ArrayList<>();
         try (Stream<Path> parts = Files.list(out.resolve("sweep-csv"))) {
             for (Path p : parts.filter(p -> p.getFileName().toString().startsWith("part-")).sorted().toList()) {
-                List<String> l = Files.readAllLines(p);
-                if (!l.isEmpty()) {
-                    assertEquals(SweepRow.header(tube.names()), l.get(0));
-                    lines.addAll(l.subList(1, l.size()));
-                }
+                assertTrue(p.toString().endsWith(".csv"), p.toString());
+                lines.addAll(Files.readAllLines(p));
             }
         }
-        assertEquals(local.stream().map(SweepRow::csv).toList(), lines, "the CSV parts, in order, are the local rows");
+        List<String> expect = new ArrayList<>();
+        expect.add(SweepRow.header(tube.names()));
+        local.forEach(r -> expect.add(r.csv()));
+        assertEquals(expect, lines, "the CSV parts, concatenated in order, are the local sweep.csv");
         try (Stream<Path> siblings = Files.list(dir)) {
             assertEquals(List.of(out), siblings.toList(), "no partial folder left beside the output");
         }

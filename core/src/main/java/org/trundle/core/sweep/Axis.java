@@ -1,5 +1,7 @@
 package org.trundle.core.sweep;
 
+import java.math.BigDecimal;
+import java.math.BigInteger;
 import java.util.Arrays;
 
 /**
@@ -11,6 +13,9 @@ public final class Axis implements java.io.Serializable {
     private static final long serialVersionUID = 1L;
     private final String name;
     private final double[] values;
+    /** Powers of ten that are exact doubles. */
+    private static final double[] POW10 = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13,
+        1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
 
     private Axis(String name, double[] values) {
         this.name = ParameterPoint.checkName(name);
@@ -38,7 +43,10 @@ public final class Axis implements java.io.Serializable {
 
     /**
      * {@code count} evenly spaced values from {@code from} to {@code to}, both included:
-     * {@code v_i = from + (to − from)·i/(count − 1)}, with the last value exactly {@code to}.
+     * {@code v_i = from + (to − from)·i/(count − 1)}, with the last value exactly {@code to}. Each
+     * value is computed from its index (never by repeated addition), in decimal where the bounds and
+     * the step are short decimals, so that 0.2 to 1.6 in 29 values gives exactly the doubles
+     * nearest 0.25, 0.3, … 0.8 ….
      *
      * @param name parameter name
      * @param from first value
@@ -55,13 +63,57 @@ public final class Axis implements java.io.Serializable {
                 + ", to = " + to);
         }
         double[] v = new double[count];
-        for (int i = 0; i < count; i++) {
-            v[i] = count == 1 ? from : from + (to - from) * i / (count - 1);
+        if (!decimalSteps(from, to, v)) {
+            for (int i = 0; i < count; i++) {
+                v[i] = count == 1 ? from : from + (to - from) * i / (count - 1);
+            }
         }
         if (count > 1) {
             v[count - 1] = to;
         }
         return new Axis(name, v);
+    }
+
+    /**
+     * Fills {@code v} with {@code from + i·step} computed exactly in decimal when the bounds (as
+     * their shortest decimals) and the step are short decimals: value {@code i} is the integer
+     * {@code A + i·S} over {@code 10^k}, one correctly rounded division, so a grid from 0.2 by 0.05
+     * gives 0.8 and not 0.7999999999999999 (and prints as such). Each value depends on its index
+     * alone.
+     *
+     * @return false when the decimals are too long for that (the caller interpolates in binary)
+     */
+    private static boolean decimalSteps(double from, double to, double[] v) {
+        if (v.length < 2) {
+            v[0] = from;
+            return true;
+        }
+        BigDecimal a = new BigDecimal(Double.toString(from));
+        BigDecimal b = new BigDecimal(Double.toString(to));
+        BigDecimal step;
+        try {
+            step = b.subtract(a).divide(BigDecimal.valueOf(v.length - 1L));
+        } catch (ArithmeticException notAShortDecimal) {
+            return false;
+        }
+        int k = Math.max(0, Math.max(a.scale(), step.scale()));
+        if (k > 22) {
+            return false; // 10^k is exact in a double up to 10^22
+        }
+        BigInteger first = a.movePointRight(k).toBigIntegerExact();
+        BigInteger inc = step.movePointRight(k).toBigIntegerExact();
+        BigInteger last = first.add(inc.multiply(BigInteger.valueOf(v.length - 1L)));
+        BigInteger exact = BigInteger.ONE.shiftLeft(53);
+        if (first.abs().compareTo(exact) >= 0 || last.abs().compareTo(exact) >= 0) {
+            return false;
+        }
+        long f = first.longValueExact();
+        long d = inc.longValueExact();
+        double scale = POW10[k];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = (f + i * d) / scale;
+        }
+        return true;
     }
 
     /** @return the parameter name */

@@ -122,6 +122,29 @@ class SweepTest {
         assertThrows(IllegalArgumentException.class, () -> Axis.linear("a", 0, 1, 0));
     }
 
+    /**
+     * Grid values are the doubles nearest the decimal values asked for (0.2 by 0.05 reaches 0.8,
+     * not 0.7999999999999999 as binary interpolation gives), each from its index alone; bounds
+     * that are not short decimals fall back to binary interpolation with exact ends.
+     */
+    @Test
+    void gridValuesAreTheNearestDoublesOfTheirDecimals() {
+        Axis a = Axis.linear("speed", 0.2, 1.6, 29);
+        for (int i = 0; i < 29; i++) {
+            double exact = new java.math.BigDecimal("0.2").add(new java.math.BigDecimal("0.05")
+                .multiply(java.math.BigDecimal.valueOf(i))).doubleValue();
+            assertEquals(exact, a.value(i), 0.0, "value " + i);
+        }
+        assertEquals("0.8", Double.toString(a.value(12)));
+        assertEquals("-0.3", Double.toString(Axis.linear("x", -1.5, 0.3, 7).value(4)));
+        Axis third = Axis.linear("t", 0, 1, 4);
+        assertEquals(1.0 / 3, third.value(1), 1e-16);
+        assertEquals(1.0, third.value(3), 0.0);
+        Axis wide = Axis.linear("w", Math.PI, 1e300, 5);
+        assertEquals(1e300, wide.value(4), 0.0);
+        assertEquals(Math.PI, wide.value(0), 0.0);
+    }
+
     @Test
     void failedRunsAreRecordedAndDoNotStopTheSweep() {
         Grid grid = Grid.of(Axis.of("speed", 0.5, -1, 0.7, 99, 0.9));
