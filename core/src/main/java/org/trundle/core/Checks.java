@@ -62,16 +62,26 @@ public final class Checks {
     }
 
     /**
+     * The unit vector along {@code v}, normalised with scaling: the components are first divided
+     * by the largest magnitude among them, so neither the squares of large components (an axis
+     * {@code (0, 0, 1e200)}) overflow nor those of tiny ones (components of 1e-160, or subnormal)
+     * underflow. Only a true zero vector and non-finite components are rejected.
+     *
      * @param name parameter name for the message
      * @param v vector to check
-     * @return the unit vector along v, when v is finite and not (near) zero
+     * @return the unit vector along v, when v is finite and not zero
      */
     public static Vector3D direction(String name, Vector3D v) {
         finite(name, v);
-        double n = v.getNorm();
-        if (!(n > 1e-300)) {
+        double m = Math.max(Math.abs(v.getX()), Math.max(Math.abs(v.getY()), Math.abs(v.getZ())));
+        if (m == 0) {
             throw new IllegalArgumentException(name + " must be a non-zero direction, got " + v);
         }
-        return v.scalarMultiply(1.0 / n);
+        // dividing by m (not multiplying by 1/m, which overflows for subnormal m) keeps every ratio exact to rounding
+        double x = v.getX() / m;
+        double y = v.getY() / m;
+        double z = v.getZ() / m;
+        double n = Math.sqrt(x * x + y * y + z * z);
+        return new Vector3D(x / n, y / n, z / n);
     }
 }

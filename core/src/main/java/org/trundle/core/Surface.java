@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import java.util.List;
+
 /**
  * A rigid contact surface patch (the extension point for shapes).
  *
@@ -71,5 +73,52 @@ public interface Surface {
      */
     default Object newScratch() {
         return null;
+    }
+
+    /**
+     * A triangle mesh of the patch, for pictures (never used by a run). A bounded patch gives its
+     * real extent and ignores {@code extent}; where the patch is unbounded (a plane, an open axial
+     * range, an implicit surface) the mesh covers the part of the patch that {@code extent} reaches
+     * (at least its cross-section with the box; it may overhang the box). Every vertex lies on the
+     * surface (to rounding, or to the surface's own projection tolerance).
+     *
+     * <p>This default says the surface cannot draw itself; every surface of {@code trundle-surfaces}
+     * overrides it.
+     *
+     * @param extent the region to draw where the patch is unbounded (world frame, m)
+     * @param resolution number of mesh cells along each patch coordinate (at least 2; an implicit
+     *     surface uses it along the box's longest side)
+     * @return the mesh (possibly empty when the patch does not reach {@code extent})
+     * @throws UnsupportedOperationException when the surface cannot give a mesh
+     */
+    default TriangleMesh mesh(Box extent, int resolution) {
+        throw new UnsupportedOperationException("surface " + name() + " gives no mesh (its class "
+            + getClass().getName() + " does not override Surface.mesh)");
+    }
+
+    /**
+     * The surface's natural coordinates (names of our own, snake_case, with units): for a tube
+     * the axial position and the angle round the axis, for a sphere the polar angle and azimuth,
+     * and so on (see each surface's Javadoc). Empty by default: the surface names none.
+     *
+     * @return the coordinates, in the order {@link #coordinatesAt} writes them
+     */
+    default List<SurfaceCoordinate> coordinates() {
+        return List.of();
+    }
+
+    /**
+     * The natural coordinates of the closest point {@code p} of {@code x} on the surface (for a
+     * ball centre, of its contact point). Not for the hot path: it may run a closest-point query.
+     *
+     * @param t time (s)
+     * @param x query point, length-3 array (m), within the surface's valid region
+     * @param work a workspace (one per caller and thread; its hint seeds the next call)
+     * @param out receives {@code coordinates().size()} values, in the units of {@link #coordinates()}
+     * @throws UnsupportedOperationException when the surface names no coordinates
+     * @throws SurfaceDomainException when the point has no well-defined closest point
+     */
+    default void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        throw new UnsupportedOperationException("surface " + name() + " names no coordinates");
     }
 }

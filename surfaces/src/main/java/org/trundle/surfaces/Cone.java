@@ -1,12 +1,16 @@
 package org.trundle.surfaces;
 
+import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
+import org.trundle.core.TriangleMesh;
 
 /**
  * A circular cone (one nappe) with apex {@code A}, unit axis {@code a} pointing from the apex into
@@ -26,12 +30,16 @@ import org.trundle.core.SurfaceDomainException;
  *   <li>patch margin along the generator {@code min(t − from/cos α, to/cos α − t)} (edges
  *       {@code "from"} and {@code "to"}).</li>
  * </ul>
+ * Coordinates ({@link #coordinates()}): {@code axial} (m, the closest point's position along the
+ * axis from the apex, the coordinate of {@code from} and {@code to}) and {@code azimuth} (rad, round
+ * the axis as for {@link Cylinder}). The mesh spans {@code [from, to]}, cut to the requested box
+ * where {@code to} is open.
  * (The circumferential normal curvature {@code cos α/ρ_p}, {@code ρ_p = t sin α}, is Meusnier's
  * theorem; common practice.) The apex is excluded: where the closest point would be the apex
  * ({@code t ≤ 0}) or the query point lies on the axis, the query throws
  * {@link SurfaceDomainException} naming the apex. On the inside the concave curvature grows without
- * bound toward the apex, so {@link #maxConcaveCurvature()} is infinite for {@code from = 0} and the
- * solver's fit check rejects every ball: bound a funnel at a positive {@code from}.
+ * bound toward the apex, so no ball fits an inside cone with {@code from = 0}: the constructor
+ * rejects it (bound a funnel at a positive {@code from}).
  *
  * <p>Immutable and thread-safe.
  */
@@ -53,9 +61,11 @@ public final class Cone implements Surface {
     private final Side side;
     private final double from;
     private final double to;
+    private final AxisFrame frame;
 
     /**
-     * A cone unbounded away from the apex ({@code from = 0}, {@code to = ∞}).
+     * A cone unbounded away from the apex ({@code from = 0}, {@code to = ∞}); an outside cone only
+     * (an inside one needs {@code from > 0}).
      *
      * @param apex apex A (m)
      * @param axis axis direction from the apex into the opening (any length, not zero)
@@ -89,6 +99,12 @@ public final class Cone implements Surface {
             throw new IllegalArgumentException("cone bounds must satisfy 0 <= from < to (the apex side is s = 0), got from = "
                 + from + ", to = " + to);
         }
+        if (side == Side.INSIDE && from == 0.0) {
+            throw new IllegalArgumentException("an inside cone needs from > 0, got from = 0: its concave curvature "
+                + "cos^2(alpha)/(s sin(alpha)) grows without bound toward the apex, so no ball fits there; "
+                + "bound the funnel at the smallest axial position a ball may reach");
+        }
+        frame = new AxisFrame(a, null, "reference");
         this.alpha = halfAngle;
         this.sinA = Math.sin(halfAngle);
         this.cosA = Math.cos(halfAngle);
@@ -183,6 +199,43 @@ public final class Cone implements Surface {
     }
 
     @Override
+    public TriangleMesh mesh(Box extent, int resolution) {
+        int n = GridMesh.cells(resolution);
+        double hi = to;
+        if (!Double.isFinite(hi)) {
+            if (extent == null) {
+                throw new IllegalArgumentException(name() + " is open at its wide end: its mesh needs a box, got null");
+            }
+            hi = Math.min(hi, extent.rangeAlong(apex(), axis())[1]);
+            if (!(from < hi)) {
+                return TriangleMesh.empty();
+            }
+        }
+        double tan = sinA / cosA;
+        return GridMesh.of((s, phi, out) -> frame.point(ox, oy, oz, s, s * tan, phi, out),
+            from, hi, n, false, -Math.PI, Math.PI, n, true);
+    }
+
+    @Override
+    public List<SurfaceCoordinate> coordinates() {
+        return List.of(new SurfaceCoordinate("axial", "m", "position of the closest point along the axis from the apex"), AxisFrame.AZIMUTH);
+    }
+
+    @Override
+    public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        double wx = x[0] - ox;
+        double wy = x[1] - oy;
+        double wz = x[2] - oz;
+        double s = wx * ax + wy * ay + wz * az;
+        double rx = wx - s * ax;
+        double ry = wy - s * ay;
+        double rz = wz - s * az;
+        double rho = Math.sqrt(rx * rx + ry * ry + rz * rz);
+        out[0] = Math.max(0.0, s * cosA + rho * sinA) * cosA;
+        out[1] = frame.azimuth(wx, wy, wz);
+    }
+
+    @Override
     public boolean hasEdges() {
         return true;
     }
@@ -194,7 +247,7 @@ public final class Cone implements Surface {
 
     /**
      * Largest concave curvature on the patch: on the inside {@code cos²α/(from·sin α)} at the lower
-     * bound (infinite for {@code from = 0}: no ball reaches the apex), 0 on the outside.
+     * bound ({@code from > 0} there), 0 on the outside.
      *
      * @return the largest concave curvature (1/m)
      */
@@ -203,7 +256,7 @@ public final class Cone implements Surface {
         if (side == Side.OUTSIDE) {
             return 0.0;
         }
-        return from == 0.0 ? Double.POSITIVE_INFINITY : cosA * cosA / (from * sinA);
+        return cosA * cosA / (from * sinA);
     }
 
     @Override

@@ -1,12 +1,16 @@
 package org.trundle.surfaces;
 
+import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
+import org.trundle.core.TriangleMesh;
 
 /**
  * A circular cylinder of radius {@code R} (m) about the axis through {@code origin} with unit
@@ -23,6 +27,10 @@ import org.trundle.core.SurfaceDomainException;
  *   <li>closest point {@code p = o + s a + R e_ρ}; patch margin {@code min(s − from, to − s)}
  *       (edges {@code "from"} and {@code "to"}).</li>
  * </ul>
+ * Coordinates ({@link #coordinates()}): {@code axial} (m, {@code s} of the closest point) and
+ * {@code azimuth} (rad, round the axis, right-handed about {@code a}, from world down {@code −e_z}
+ * projected normal to the axis, or from {@code +e_x} projected for an axis within about 5.7° of
+ * vertical). The mesh spans {@code [from, to]}, cut to the requested box where a bound is open.
  * The axis itself ({@code ρ = 0}) has no closest point; a query there throws
  * {@link SurfaceDomainException}.
  *
@@ -55,6 +63,7 @@ public final class Cylinder implements Surface {
     private final Side side;
     private final double from;
     private final double to;
+    private final AxisFrame frame;
 
     /**
      * An unbounded cylinder.
@@ -99,6 +108,7 @@ public final class Cylinder implements Surface {
         ax = a.getX();
         ay = a.getY();
         az = a.getZ();
+        frame = new AxisFrame(a, null, "reference");
         sign = side == Side.INSIDE ? -1.0 : 1.0;
         pxx = 1 - ax * ax;
         pxy = -ax * ay;
@@ -180,6 +190,40 @@ public final class Cylinder implements Surface {
         double lo = s - from;
         double hi = to - s;
         out.setMargin(lo, EDGE_FROM, hi, EDGE_TO);
+    }
+
+    @Override
+    public TriangleMesh mesh(Box extent, int resolution) {
+        int n = GridMesh.cells(resolution);
+        double lo = from;
+        double hi = to;
+        if (!Double.isFinite(lo) || !Double.isFinite(hi)) {
+            if (extent == null) {
+                throw new IllegalArgumentException(name() + " is unbounded along its axis: its mesh needs a box, got null");
+            }
+            double[] r = extent.rangeAlong(origin(), axis());
+            lo = Math.max(lo, r[0]);
+            hi = Math.min(hi, r[1]);
+            if (!(lo < hi)) {
+                return TriangleMesh.empty();
+            }
+        }
+        return GridMesh.of((s, phi, out) -> frame.point(ox, oy, oz, s, radius, phi, out),
+            lo, hi, n, false, -Math.PI, Math.PI, n, true);
+    }
+
+    @Override
+    public List<SurfaceCoordinate> coordinates() {
+        return List.of(new SurfaceCoordinate("axial", "m", "position along the axis from the origin"), AxisFrame.AZIMUTH);
+    }
+
+    @Override
+    public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        double wx = x[0] - ox;
+        double wy = x[1] - oy;
+        double wz = x[2] - oz;
+        out[0] = wx * ax + wy * ay + wz * az;
+        out[1] = frame.azimuth(wx, wy, wz);
     }
 
     @Override

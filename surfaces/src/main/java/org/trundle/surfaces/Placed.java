@@ -1,12 +1,17 @@
 package org.trundle.surfaces;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
+import org.trundle.core.TriangleMesh;
 
 /**
  * Any surface placed in the world by a rigid transform {@code x_world = Q x_local + t}: the rotation
@@ -18,6 +23,10 @@ import org.trundle.core.Surface;
  * distance, curvatures and patch margin are invariant under rigid motion. The local query's
  * workspace (with its own hint) lives in the run's {@link ContactGeometry#scratch}, so the wrapper
  * allocates nothing per query.
+ *
+ * <p>The mesh is the local surface's mesh moved by the transform (the requested world box is
+ * handed to the local surface as the local box that holds it, so an unbounded patch may overhang
+ * the world box); the coordinates are the local surface's, of the point mapped to the local frame.
  *
  * <p>Immutable and thread-safe when the placed surface is.
  */
@@ -100,12 +109,7 @@ public final class Placed implements Surface {
         if (!out.hintValid) {
             g.hintValid = false;
         }
-        double dx = x[0] - tx;
-        double dy = x[1] - ty;
-        double dz = x[2] - tz;
-        w.x[0] = q[0] * dx + q[3] * dy + q[6] * dz;
-        w.x[1] = q[1] * dx + q[4] * dy + q[7] * dz;
-        w.x[2] = q[2] * dx + q[5] * dy + q[8] * dz;
+        toLocal(x, w.x);
         local.query(t, w.x, g);
         rotate(g.point, out.point);
         out.point[0] += tx;
@@ -135,6 +139,16 @@ public final class Placed implements Surface {
         out.hintValid = true;
     }
 
+    /** x_l = Qᵀ (x − t). */
+    private void toLocal(double[] x, double[] o) {
+        double dx = x[0] - tx;
+        double dy = x[1] - ty;
+        double dz = x[2] - tz;
+        o[0] = q[0] * dx + q[3] * dy + q[6] * dz;
+        o[1] = q[1] * dx + q[4] * dy + q[7] * dz;
+        o[2] = q[2] * dx + q[5] * dy + q[8] * dz;
+    }
+
     private void rotate(double[] v, double[] o) {
         double a = v[0];
         double b = v[1];
@@ -142,6 +156,45 @@ public final class Placed implements Surface {
         o[0] = q[0] * a + q[1] * b + q[2] * c;
         o[1] = q[3] * a + q[4] * b + q[5] * c;
         o[2] = q[6] * a + q[7] * b + q[8] * c;
+    }
+
+    @Override
+    public TriangleMesh mesh(Box extent, int resolution) {
+        Box local = null;
+        if (extent != null) {
+            List<Vector3D> corners = new ArrayList<>(8);
+            Vector3D lo = extent.min();
+            Vector3D hi = extent.max();
+            Vector3D t = translation();
+            for (int i = 0; i < 8; i++) {
+                Vector3D c = new Vector3D((i & 1) == 0 ? lo.getX() : hi.getX(), (i & 2) == 0 ? lo.getY() : hi.getY(),
+                    (i & 4) == 0 ? lo.getZ() : hi.getZ());
+                corners.add(rotation.applyInverseTo(c.subtract(t)));
+            }
+            double pad = 1e-9 * Math.max(extent.size(0), Math.max(extent.size(1), extent.size(2)));
+            local = Box.around(corners, pad);
+        }
+        return this.local.mesh(local, resolution).transformed(rotation, translation());
+    }
+
+    @Override
+    public List<SurfaceCoordinate> coordinates() {
+        return local.coordinates();
+    }
+
+    @Override
+    public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        Work w = work.scratch instanceof Work ? (Work) work.scratch : null;
+        if (w == null) {
+            w = (Work) newScratch();
+            work.scratch = w;
+        }
+        if (!work.hintValid) {
+            w.geo.hintValid = false;
+        }
+        toLocal(x, w.x);
+        local.coordinatesAt(t, w.x, w.geo, out);
+        work.hintValid = true;
     }
 
     @Override

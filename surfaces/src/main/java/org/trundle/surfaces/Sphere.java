@@ -1,12 +1,16 @@
 package org.trundle.surfaces;
 
+import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
+import org.trundle.core.TriangleMesh;
 
 /**
  * A sphere of radius {@code R} (m) about {@code centre}, with the ball {@link Side#INSIDE} (a bowl)
@@ -20,9 +24,12 @@ import org.trundle.core.SurfaceDomainException;
  *   <li>inside: {@code d = R − ρ}, {@code n = −e}, {@code H = −P/ρ}, curvatures {@code 1/R, 1/R};</li>
  *   <li>outside: {@code d = ρ − R}, {@code n = e}, {@code H = P/ρ}, curvatures {@code −1/R, −1/R};</li>
  *   <li>closest point {@code p = o + R e}; polar angle {@code θ = atan2(|e × pole|, e·pole)}; patch
- *       margin the arc length {@code R·min(θ − polarFrom, polarTo − θ)} (edges {@code "polarFrom"}
- *       and {@code "polarTo"}).</li>
+ *       margin the arc length {@code R·min(θ − polarFrom, polarTo − θ)} (edges {@code "polar_from"}
+ *       and {@code "polar_to"}).</li>
  * </ul>
+ * Coordinates ({@link #coordinates()}): {@code polar} (rad, {@code θ} above) and {@code azimuth}
+ * (rad, about the pole, right-handed, from world down projected normal to the pole, or from
+ * {@code +e_x} projected for a pole within about 5.7° of vertical). The mesh spans the cap.
  * The centre ({@code ρ = 0}) has no closest point; a query there throws
  * {@link SurfaceDomainException}.
  *
@@ -44,6 +51,7 @@ public final class Sphere implements Surface {
     private final Side side;
     private final double polarFrom;
     private final double polarTo;
+    private final AxisFrame frame;
 
     /**
      * A whole sphere (no edges).
@@ -77,6 +85,7 @@ public final class Sphere implements Surface {
             throw new IllegalArgumentException("sphere cap bounds must satisfy 0 <= polarFrom < polarTo <= pi, got polarFrom = "
                 + polarFrom + ", polarTo = " + polarTo);
         }
+        frame = new AxisFrame(a, null, "reference");
         this.side = side;
         this.polarFrom = polarFrom;
         this.polarTo = polarTo;
@@ -159,13 +168,39 @@ public final class Sphere implements Surface {
     }
 
     @Override
+    public TriangleMesh mesh(Box extent, int resolution) {
+        int n = GridMesh.cells(resolution);
+        return GridMesh.of((theta, phi, out) -> frame.point(ox, oy, oz, radius * Math.cos(theta), radius * Math.sin(theta), phi, out),
+            polarFrom, polarTo, n, false, -Math.PI, Math.PI, n, true);
+    }
+
+    @Override
+    public List<SurfaceCoordinate> coordinates() {
+        return List.of(new SurfaceCoordinate("polar", "rad", "angle at the centre from the pole, in [0, pi]"),
+            new SurfaceCoordinate("azimuth", "rad",
+                "angle about the pole in (-pi, pi], right-handed, from the default reference (down, or +x for a vertical pole)"));
+    }
+
+    @Override
+    public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        double wx = x[0] - ox;
+        double wy = x[1] - oy;
+        double wz = x[2] - oz;
+        double cx = wy * pz - wz * py;
+        double cy = wz * px - wx * pz;
+        double cz = wx * py - wy * px;
+        out[0] = Math.atan2(Math.sqrt(cx * cx + cy * cy + cz * cz), wx * px + wy * py + wz * pz);
+        out[1] = frame.azimuth(wx, wy, wz);
+    }
+
+    @Override
     public boolean hasEdges() {
         return polarFrom > 0.0 || polarTo < Math.PI;
     }
 
     @Override
     public String edgeName(int edge) {
-        return edge == EDGE_POLAR_FROM ? "polarFrom" : "polarTo";
+        return edge == EDGE_POLAR_FROM ? "polar_from" : "polar_to";
     }
 
     @Override

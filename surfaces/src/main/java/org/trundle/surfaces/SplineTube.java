@@ -1,11 +1,16 @@
 package org.trundle.surfaces;
 
+import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Box;
+import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
+import org.trundle.core.TriangleMesh;
 
 /**
  * A tube of constant or smoothly varying radius about a C² centreline: bent tubes, helical chutes.
@@ -31,10 +36,21 @@ import org.trundle.core.SurfaceDomainException;
  * <pre>  H = σ [P + v vᵀ/G'] / ℓ,   P = I − e eᵀ,  v = P C' = C' + R' e</pre>
  * whose tangential eigenvalues {@code h₁ = σ/ℓ} (normal to {@code v}) and
  * {@code h₂ = σ (1 + |v|²/G')/ℓ} give the principal curvatures {@code κ = −h/(1 − d h)} (from
- * {@code H = W (I + d W)⁻¹}). No frame is needed for this (the rotation-minimising frame serves only
- * the angular bounds of an open tube, see the last constructor); the patch margin is the distance of the
- * foot from the nearer end, {@code min(u − u₀, u_N − u)·|C'(u)|} (m, to first order in the
- * distance from the end).
+ * {@code H = W (I + d W)⁻¹}). No frame is needed for this (an angle frame, {@link AngleFrame},
+ * serves only the angular bounds of an open tube and the {@code angle} coordinate); the patch margin
+ * is the distance of the foot from the nearer end, {@code min(u − u₀, u_N − u)·|C'(u)|} (m, to
+ * first order in the distance from the end).
+ *
+ * <p>Angles round the centreline: {@code θ = atan2(e·(t × r), e·r)} in {@code (−π, π]}, with
+ * {@code t} the unit tangent (from the first point toward the last), {@code r(u)} the frame's
+ * reference normal and {@code e} the direction from the centreline to the point: θ runs
+ * right-handed about the direction of travel, from {@code r} toward {@code t × r}. For a chute
+ * running away from the viewer with a downward reference, positive angles are on the viewer's left.
+ *
+ * <p>Coordinates ({@link #coordinates()}): {@code arc_length} (m, along the centreline from the
+ * first point to the foot, by 5-point Gauss–Legendre quadrature of {@code |C'|} on each frame
+ * sample interval, common practice) and {@code angle} (rad, θ above). The mesh spans the whole
+ * length and the open tube's angle range.
  *
  * <p>The centreline ({@code ℓ = 0}) has no closest point and a query there throws
  * {@link SurfaceDomainException}, as does one where the Newton iteration fails. Immutable and
@@ -65,6 +81,11 @@ public final class SplineTube implements Surface {
     private final boolean angular;
     private final double angleFrom;
     private final double angleTo;
+    private final AngleFrame angleFrame;
+    /** Unit reference direction of the projected-reference frame (null for a rotation-minimising one). */
+    private final double[] ref;
+    /** Arc length (m) from the first point to each frame sample. */
+    private final double[] arc;
     /** Rotation-minimising frame samples: parameter, point, unit tangent, reference normal. */
     private final double[] fu;
     private final double[] fx;
@@ -74,7 +95,7 @@ public final class SplineTube implements Surface {
     /** Per-run scratch: centreline and radius values with derivatives. */
     private static final class Work {
         final double[] v = new double[12];
-        final double[] f = new double[3];
+        final double[] f = new double[6];
     }
 
     /**
@@ -100,24 +121,45 @@ public final class SplineTube implements Surface {
     }
 
     /**
-     * An open tube (a chute or half-pipe): only the wall whose angle about the centreline lies in
-     * {@code angleFrom ≤ θ ≤ angleTo} exists. The angle is measured in the plane normal to the
-     * centreline from the reference normal {@code r(u)} of a rotation-minimising frame, toward
-     * {@code t × r} ({@code t} the unit tangent). The frame starts at the first point from
-     * {@code reference} projected normal to the tangent, and is carried along the curve by the
-     * double-reflection method (W. Wang, B. Jüttler, D. Zheng, Y. Liu, "Computation of rotation
-     * minimizing frames", ACM Trans. Graphics 27 (2008) 2), not the Frenet frame, which flips at
-     * inflections. Margin to an angular edge: the arc length {@code R·Δθ} (m).
+     * An open tube whose angle is measured from the reference projected onto each cross-section
+     * ({@link AngleFrame#PROJECTED_REFERENCE}); see the full constructor.
      *
      * @param points centreline points (m), at least 2, consecutive points distinct
      * @param radii tube radius at each point (m), positive
      * @param side which side the ball is on
-     * @param reference direction of {@code θ = 0} at the first point (not along the tangent), or null
-     *     for a closed tube
+     * @param reference direction of {@code θ = 0} (never along the tangent), or null for a closed
+     *     tube
      * @param angleFrom lower angular bound (rad), {@code ≥ −π}
      * @param angleTo upper angular bound (rad), {@code ≤ π}, {@code > angleFrom}
      */
     public SplineTube(Vector3D[] points, double[] radii, Side side, Vector3D reference, double angleFrom, double angleTo) {
+        this(points, radii, side, reference, angleFrom, angleTo, AngleFrame.PROJECTED_REFERENCE);
+    }
+
+    /**
+     * An open tube (a chute or half-pipe): only the wall whose angle about the centreline lies in
+     * {@code angleFrom ≤ θ ≤ angleTo} exists. The angle is measured in the plane normal to the
+     * centreline from the reference normal {@code r(u)} of the chosen {@link AngleFrame}, toward
+     * {@code t × r} ({@code t} the unit tangent): either the reference projected onto each
+     * cross-section (the walls stay where the builder put them), or a rotation-minimising frame
+     * started from the projected reference at the first point and carried along the curve by the
+     * double-reflection method (W. Wang, B. Jüttler, D. Zheng, Y. Liu, "Computation of rotation
+     * minimizing frames", ACM Trans. Graphics 27 (2008) 2), not the Frenet frame, which flips at
+     * inflections. Without a reference the tube is closed and its {@code angle} coordinate uses a
+     * rotation-minimising frame from an arbitrary first normal. Margin to an angular edge: the arc
+     * length {@code R·Δθ} (m).
+     *
+     * @param points centreline points (m), at least 2, consecutive points distinct
+     * @param radii tube radius at each point (m), positive
+     * @param side which side the ball is on
+     * @param reference direction of {@code θ = 0} (for the projected frame, never within about
+     *     0.06° of the tangent), or null for a closed tube
+     * @param angleFrom lower angular bound (rad), {@code ≥ −π}
+     * @param angleTo upper angular bound (rad), {@code ≤ π}, {@code > angleFrom}
+     * @param angleFrame how the angle is measured along the tube
+     */
+    public SplineTube(Vector3D[] points, double[] radii, Side side, Vector3D reference, double angleFrom, double angleTo,
+                      AngleFrame angleFrame) {
         if (points == null || points.length < 2) {
             throw new IllegalArgumentException("spline tube needs at least 2 centreline points, got "
                 + (points == null ? "null" : points.length));
@@ -126,8 +168,9 @@ public final class SplineTube implements Surface {
             throw new IllegalArgumentException("spline tube needs one radius per point, got "
                 + (radii == null ? "null" : radii.length) + " radii for " + points.length + " points");
         }
-        if (side == null) {
-            throw new IllegalArgumentException("side must be given, got null");
+        if (side == null || angleFrame == null) {
+            throw new IllegalArgumentException("side and angleFrame must be given, got side = " + side
+                + ", angleFrame = " + angleFrame);
         }
         int n = points.length;
         double[] u = new double[n];
@@ -192,15 +235,16 @@ public final class SplineTube implements Surface {
         this.angular = reference != null && (angleFrom > -Math.PI || angleTo < Math.PI);
         this.angleFrom = angleFrom;
         this.angleTo = angleTo;
+        Vector3D refUnit = reference == null ? null : Checks.direction("spline tube reference direction", reference);
+        this.angleFrame = refUnit == null ? AngleFrame.ROTATION_MINIMISING : angleFrame;
+        this.ref = refUnit == null || this.angleFrame == AngleFrame.ROTATION_MINIMISING ? null : refUnit.toArray();
         int m = (n - 1) * FRAME_SAMPLES + 1;
         fu = new double[m];
         fx = new double[3 * m];
         ft = new double[3 * m];
         fr = new double[3 * m];
-        Vector3D ref = reference == null ? null : reference;
-        if (ref != null && !Double.isFinite(ref.getNorm())) {
-            throw new IllegalArgumentException("spline tube reference direction must be finite, got " + reference);
-        }
+        Vector3D refv = refUnit;
+        arc = new double[m];
         for (int j = 0; j < m; j++) {
             int i = Math.min(j / FRAME_SAMPLES, n - 2);
             int k = j - i * FRAME_SAMPLES;
@@ -214,10 +258,22 @@ public final class SplineTube implements Surface {
             ft[3 * j] = w[1] / sp;
             ft[3 * j + 1] = w[4] / sp;
             ft[3 * j + 2] = w[7] / sp;
+            if (j > 0) {
+                arc[j] = arc[j - 1] + arcLength(fu[j - 1], t, w);
+            }
+            if (ref != null) {
+                double rt = ref[0] * ft[3 * j] + ref[1] * ft[3 * j + 1] + ref[2] * ft[3 * j + 2];
+                if (!(Math.sqrt(Math.max(0.0, 1 - rt * rt)) > 1e-3)) {
+                    throw new IllegalArgumentException(String.format(Locale.ROOT,
+                        "spline tube reference direction %s runs along the centreline's tangent near u = %g m: "
+                            + "the projected-reference angle frame is undefined there (choose another reference, or the "
+                            + "rotation-minimising angle frame)", reference, t));
+                }
+            }
             if (j == 0) {
                 Vector3D t0 = new Vector3D(ft[0], ft[1], ft[2]);
-                Vector3D r0 = ref == null ? t0.orthogonal() : ref.subtract(ref.dotProduct(t0), t0);
-                if (!(r0.getNorm() > 1e-12 * (ref == null ? 1 : ref.getNorm()))) {
+                Vector3D r0 = refv == null ? t0.orthogonal() : refv.subtract(refv.dotProduct(t0), t0);
+                if (!(r0.getNorm() > 1e-12)) {
                     throw new IllegalArgumentException("spline tube reference direction must not be along the first tangent, got "
                         + reference);
                 }
@@ -281,8 +337,9 @@ public final class SplineTube implements Surface {
     }
 
     /**
-     * The rotation-minimising frame's reference normal at parameter {@code u} (allocates; for tests
-     * and setup code).
+     * The angle frame's reference normal at parameter {@code u}, the direction of angle 0 (the
+     * projected reference, or the rotation-minimising frame's normal; allocates, for tests and setup
+     * code).
      *
      * @param u chord-length parameter (m)
      * @return the unit reference normal {@code r(u)}
@@ -303,7 +360,101 @@ public final class SplineTube implements Surface {
         j = Math.max(0, Math.min(fu.length - 1, j));
         eval(u, w);
         double sp = Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);
-        reflect(fx, ft, fr, 3 * j, w[0], w[3], w[6], w[1] / sp, w[4] / sp, w[7] / sp, f, 0);
+        double tx = w[1] / sp;
+        double ty = w[4] / sp;
+        double tz = w[7] / sp;
+        if (ref != null) {
+            double rt = ref[0] * tx + ref[1] * ty + ref[2] * tz;
+            double rx = ref[0] - rt * tx;
+            double ry = ref[1] - rt * ty;
+            double rz = ref[2] - rt * tz;
+            double nr = Math.sqrt(rx * rx + ry * ry + rz * rz);
+            f[0] = rx / nr;
+            f[1] = ry / nr;
+            f[2] = rz / nr;
+            return;
+        }
+        reflect(fx, ft, fr, 3 * j, w[0], w[3], w[6], tx, ty, tz, f, 0);
+    }
+
+    /** Gauss–Legendre 5-point nodes on [-1, 1] and weights (common practice). */
+    private static final double[] GL_X = {0.0, -0.5384693101056831, 0.5384693101056831, -0.9061798459386640, 0.9061798459386640};
+    private static final double[] GL_W = {0.5688888888888889, 0.4786286704993665, 0.4786286704993665, 0.2369268850561891,
+        0.2369268850561891};
+
+    /** Arc length of the centreline between parameters a and b (m), 5-point Gauss–Legendre; overwrites w. */
+    private double arcLength(double a, double b, double[] w) {
+        double half = 0.5 * (b - a);
+        double mid = 0.5 * (a + b);
+        double sum = 0;
+        for (int k = 0; k < GL_X.length; k++) {
+            cx.evaluate(mid + half * GL_X[k], w, 0);
+            cy.evaluate(mid + half * GL_X[k], w, 3);
+            cz.evaluate(mid + half * GL_X[k], w, 6);
+            sum += GL_W[k] * Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);
+        }
+        return half * sum;
+    }
+
+    /**
+     * @param u chord-length parameter (m), clamped to the tube
+     * @return the arc length of the centreline from the first point to {@code u} (m)
+     */
+    public double arcLength(double u) {
+        double c = Math.max(fu[0], Math.min(fu[fu.length - 1], u));
+        int j = java.util.Arrays.binarySearch(fu, c);
+        if (j >= 0) {
+            return arc[j];
+        }
+        j = -j - 2;
+        return arc[j] + arcLength(fu[j], c, new double[12]);
+    }
+
+    /**
+     * @param u chord-length parameter (m)
+     * @return the centreline point {@code C(u)} (m)
+     */
+    public Vector3D centre(double u) {
+        double[] w = new double[12];
+        eval(u, w);
+        return new Vector3D(w[0], w[3], w[6]);
+    }
+
+    /**
+     * @param u chord-length parameter (m)
+     * @return the unit tangent {@code C'/|C'|} at {@code u}, from the first point toward the last
+     */
+    public Vector3D tangent(double u) {
+        double[] w = new double[12];
+        eval(u, w);
+        return new Vector3D(w[1], w[4], w[7]).normalize();
+    }
+
+    /** @return how the angle round the centreline is measured */
+    public AngleFrame angleFrame() {
+        return angleFrame;
+    }
+
+    /**
+     * The angle frame at u: writes the reference normal r to {@code fn[0..2]} and {@code t × r} to
+     * {@code fn[3..5]} and returns |C'(u)|; w holds the centreline at u on return.
+     */
+    private double crossSection(double u, double[] w, double[] fn) {
+        frame(u, w, fn);
+        double speed = Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);
+        double tx = w[1] / speed;
+        double ty = w[4] / speed;
+        double tz = w[7] / speed;
+        fn[3] = ty * fn[2] - tz * fn[1];
+        fn[4] = tz * fn[0] - tx * fn[2];
+        fn[5] = tx * fn[1] - ty * fn[0];
+        return speed;
+    }
+
+    /** Angle θ (rad) of the unit direction e about the centreline at u; w holds the centreline at u on return. */
+    private double angle(double u, double ex, double ey, double ez, double[] w, double[] fn) {
+        crossSection(u, w, fn);
+        return Math.atan2(ex * fn[3] + ey * fn[4] + ez * fn[5], ex * fn[0] + ey * fn[1] + ez * fn[2]);
     }
 
     private static double[] constant(Vector3D[] points, double radius) {
@@ -446,20 +597,52 @@ public final class SplineTube implements Surface {
         double hi = (cx.last() - u) * speed;
         out.setMargin(lo, EDGE_FROM, hi, EDGE_TO);
         if (angular) {
-            double[] fn = work.f;
-            frame(u, w, fn);
-            double tx = w[1] / speed;
-            double ty = w[4] / speed;
-            double tz = w[7] / speed;
-            double bx = ty * fn[2] - tz * fn[1];
-            double by = tz * fn[0] - tx * fn[2];
-            double bz = tx * fn[1] - ty * fn[0];
-            double theta = Math.atan2(ex * bx + ey * by + ez * bz, ex * fn[0] + ey * fn[1] + ez * fn[2]);
+            double theta = angle(u, ex, ey, ez, w, work.f);
             double a0 = r * (theta - angleFrom);
             double a1 = r * (angleTo - theta);
             out.tightenMargin(a0, EDGE_ANGLE_FROM);
             out.tightenMargin(a1, EDGE_ANGLE_TO);
         }
+    }
+
+    @Override
+    public TriangleMesh mesh(Box extent, int resolution) {
+        int n = GridMesh.cells(resolution);
+        double[] w = new double[12];
+        double[] f = new double[6];
+        return GridMesh.of((u, theta, out) -> {
+            double sp = crossSection(u, w, f);
+            // the envelope's foot direction: e·t = −R'/|C'| (from G(u) = 0 at x = C + R e)
+            double et = -w[10] / sp;
+            double en = Math.sqrt(Math.max(0.0, 1 - et * et));
+            double c = en * Math.cos(theta);
+            double s = en * Math.sin(theta);
+            double r = w[9];
+            out[0] = w[0] + r * (et * w[1] / sp + c * f[0] + s * f[3]);
+            out[1] = w[3] + r * (et * w[4] / sp + c * f[1] + s * f[4]);
+            out[2] = w[6] + r * (et * w[7] / sp + c * f[2] + s * f[5]);
+        }, cx.first(), cx.last(), n, false, angleFrom, angleTo, n, !angular);
+    }
+
+    @Override
+    public List<SurfaceCoordinate> coordinates() {
+        return List.of(new SurfaceCoordinate("arc_length", "m", "length along the centreline from the first point to the foot"),
+            new SurfaceCoordinate("angle", "rad",
+                "angle round the centreline in (-pi, pi], right-handed about the direction of travel, from the frame's reference"));
+    }
+
+    @Override
+    public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        query(t, x, work);
+        Work k = (Work) work.scratch;
+        double u = work.hint[0];
+        double[] w = k.v;
+        eval(u, w);
+        double ex = x[0] - w[0];
+        double ey = x[1] - w[3];
+        double ez = x[2] - w[6];
+        out[0] = arcLength(u);
+        out[1] = angle(u, ex, ey, ez, w, k.f);
     }
 
     @Override
@@ -475,9 +658,9 @@ public final class SplineTube implements Surface {
             case EDGE_TO:
                 return "to";
             case EDGE_ANGLE_FROM:
-                return "angleFrom";
+                return "angle_from";
             default:
-                return "angleTo";
+                return "angle_to";
         }
     }
 

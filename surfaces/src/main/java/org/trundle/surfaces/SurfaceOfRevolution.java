@@ -1,12 +1,16 @@
 package org.trundle.surfaces;
 
+import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
+import org.trundle.core.TriangleMesh;
 
 /**
  * A surface of revolution about the axis through {@code origin} with unit direction {@code a}, its
@@ -29,6 +33,9 @@ import org.trundle.core.SurfaceDomainException;
  * {@code W_φ/(1 + d W_φ)}); principal curvatures {@code −W_m}, {@code −W_φ}. The patch margin is the
  * axial distance of the foot from the nearer end (m).
  *
+ * <p>Coordinates ({@link #coordinates()}): {@code axial} (m, the foot's {@code z}) and
+ * {@code azimuth} (rad, round the axis as for {@link Cylinder}). The mesh spans the profile.
+ *
  * <p>The axis ({@code ρ = 0}) has no closest point; a query there, or one beyond a centre of
  * curvature of the profile, throws {@link SurfaceDomainException}. Immutable and thread-safe.
  */
@@ -49,6 +56,7 @@ public final class SurfaceOfRevolution implements Surface {
     private final Side side;
     private final double length;
     private final double maxConcave;
+    private final AxisFrame frame;
 
     /**
      * @param origin a point of the axis, where {@code z = 0} (m)
@@ -67,6 +75,7 @@ public final class SurfaceOfRevolution implements Surface {
         for (int i = 0; i < radius.length; i++) {
             Checks.positive("profile radius[" + i + "]", radius[i]);
         }
+        frame = new AxisFrame(a, null, "reference");
         this.side = side;
         this.length = profile.last() - profile.first();
         ox = origin.getX();
@@ -208,6 +217,29 @@ public final class SurfaceOfRevolution implements Surface {
         double lo = z - profile.first();
         double hi = profile.last() - z;
         out.setMargin(lo, EDGE_FROM, hi, EDGE_TO);
+    }
+
+    @Override
+    public TriangleMesh mesh(Box extent, int resolution) {
+        int n = GridMesh.cells(resolution);
+        double[] e = new double[3];
+        return GridMesh.of((z, phi, out) -> {
+            profile.evaluate(z, e, 0);
+            frame.point(ox, oy, oz, z, e[0], phi, out);
+        }, profile.first(), profile.last(), n, false, -Math.PI, Math.PI, n, true);
+    }
+
+    @Override
+    public List<SurfaceCoordinate> coordinates() {
+        return List.of(new SurfaceCoordinate("axial", "m", "profile position z of the closest point along the axis from the origin"),
+            AxisFrame.AZIMUTH);
+    }
+
+    @Override
+    public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        query(t, x, work);
+        out[0] = work.hint[0];
+        out[1] = frame.azimuth(x[0] - ox, x[1] - oy, x[2] - oz);
     }
 
     @Override

@@ -1,12 +1,16 @@
 package org.trundle.surfaces;
 
+import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
+import org.trundle.core.TriangleMesh;
 
 /**
  * A ring torus about the axis through {@code centre} with unit direction {@code a}: major radius
@@ -30,8 +34,12 @@ import org.trundle.core.SurfaceDomainException;
  *   <li>principal curvatures (inside; negated outside): meridian {@code 1/b}, circumferential
  *       {@code cos ψ/(R + b cos ψ)} (Meusnier's theorem; common practice);</li>
  *   <li>patch margin: arc lengths {@code (R + b cos ψ)(φ − azimuthFrom)}, … , {@code b (tubeTo − ψ)}
- *       (edges {@code "azimuthFrom"}, {@code "azimuthTo"}, {@code "tubeFrom"}, {@code "tubeTo"}).</li>
+ *       (edges {@code "azimuth_from"}, {@code "azimuth_to"}, {@code "tube_from"}, {@code "tube_to"}).</li>
  * </ul>
+ * Coordinates ({@link #coordinates()}): {@code ring_angle} (rad, the azimuth {@code φ} about the
+ * axis from the reference, right-handed) and {@code tube_angle} (rad, {@code ψ} above). Without a
+ * reference, azimuth 0 is world down {@code −e_z} projected normal to the axis, or {@code +e_x}
+ * projected for an axis within about 5.7° of vertical. The mesh spans the patch's angle ranges.
  * The axis ({@code ρ = 0}) and the core circle ({@code ℓ = 0}) have no closest point; a query there
  * throws {@link SurfaceDomainException}.
  *
@@ -68,6 +76,7 @@ public final class Torus implements Surface {
     private final double tubeTo;
     private final boolean azBounded;
     private final boolean tubeBounded;
+    private final AxisFrame frame;
 
     /**
      * A whole torus (no edges).
@@ -119,13 +128,7 @@ public final class Torus implements Surface {
             throw new IllegalArgumentException("torus tube-angle bounds must satisfy -pi <= tubeFrom < tubeTo <= pi, got tubeFrom = "
                 + tubeFrom + ", tubeTo = " + tubeTo);
         }
-        Vector3D ref = reference == null ? a.orthogonal() : Checks.finite("reference", reference);
-        Vector3D c = ref.subtract(a.scalarMultiply(ref.dotProduct(a)));
-        if (!(c.getNorm() > 1e-12 * ref.getNorm())) {
-            throw new IllegalArgumentException("torus reference direction must not be parallel to the axis, got " + reference);
-        }
-        c = c.normalize();
-        Vector3D b = Vector3D.crossProduct(a, c);
+        frame = new AxisFrame(a, reference, "torus reference direction");
         this.side = side;
         this.azFrom = azimuthFrom;
         this.azTo = azimuthTo;
@@ -139,12 +142,12 @@ public final class Torus implements Surface {
         ax = a.getX();
         ay = a.getY();
         az = a.getZ();
-        cx = c.getX();
-        cy = c.getY();
-        cz = c.getZ();
-        bx = b.getX();
-        by = b.getY();
-        bz = b.getZ();
+        cx = frame.cx;
+        cy = frame.cy;
+        cz = frame.cz;
+        bx = frame.bx;
+        by = frame.by;
+        bz = frame.bz;
     }
 
     /** @return major radius R (m) */
@@ -240,6 +243,33 @@ public final class Torus implements Surface {
     }
 
     @Override
+    public TriangleMesh mesh(Box extent, int resolution) {
+        int n = GridMesh.cells(resolution);
+        return GridMesh.of((phi, psi, out) -> frame.point(ox, oy, oz, minor * Math.sin(psi), major + minor * Math.cos(psi), phi, out),
+            azFrom, azTo, n, !azBounded, tubeFrom, tubeTo, n, !tubeBounded);
+    }
+
+    @Override
+    public List<SurfaceCoordinate> coordinates() {
+        return List.of(new SurfaceCoordinate("ring_angle", "rad", "azimuth about the axis from the reference, in (-pi, pi], right-handed"),
+            new SurfaceCoordinate("tube_angle", "rad",
+                "angle round the tube from the outward radial direction toward the axis, in (-pi, pi]"));
+    }
+
+    @Override
+    public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
+        double wx = x[0] - ox;
+        double wy = x[1] - oy;
+        double wz = x[2] - oz;
+        double s = wx * ax + wy * ay + wz * az;
+        double rx = wx - s * ax;
+        double ry = wy - s * ay;
+        double rz = wz - s * az;
+        out[0] = frame.azimuth(wx, wy, wz);
+        out[1] = Math.atan2(s, Math.sqrt(rx * rx + ry * ry + rz * rz) - major);
+    }
+
+    @Override
     public boolean hasEdges() {
         return azBounded || tubeBounded;
     }
@@ -248,13 +278,13 @@ public final class Torus implements Surface {
     public String edgeName(int edge) {
         switch (edge) {
             case EDGE_AZIMUTH_FROM:
-                return "azimuthFrom";
+                return "azimuth_from";
             case EDGE_AZIMUTH_TO:
-                return "azimuthTo";
+                return "azimuth_to";
             case EDGE_TUBE_FROM:
-                return "tubeFrom";
+                return "tube_from";
             default:
-                return "tubeTo";
+                return "tube_to";
         }
     }
 

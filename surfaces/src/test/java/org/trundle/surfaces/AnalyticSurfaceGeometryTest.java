@@ -108,7 +108,7 @@ class AnalyticSurfaceGeometryTest {
         assertEquals(1 / 0.3, g.curvature2, 1e-12);
         assertEquals(0.01, g.distance, 1e-15);
         assertEquals(0.3 * Math.PI / 3, g.patchMargin, 1e-12);
-        assertEquals("polarTo", bowl.edgeName(g.edge));
+        assertEquals("polar_to", bowl.edgeName(g.edge));
         assertThrows(SurfaceDomainException.class, () -> GeometryAssertions.query(bowl, new double[] {0, 0, 0.3}));
     }
 
@@ -126,7 +126,6 @@ class AnalyticSurfaceGeometryTest {
         assertEquals(t - 0.02 / Math.cos(alpha), g.patchMargin, 1e-14);
         assertEquals("from", funnel.edgeName(g.edge));
         assertEquals(Math.cos(alpha) * Math.cos(alpha) / (0.02 * Math.sin(alpha)), funnel.maxConcaveCurvature(), 1e-12);
-        assertEquals(Double.POSITIVE_INFINITY, new Cone(Vector3D.ZERO, Vector3D.PLUS_K, alpha, Side.INSIDE).maxConcaveCurvature());
     }
 
     @Test
@@ -155,7 +154,7 @@ class AnalyticSurfaceGeometryTest {
         assertEquals(Math.cos(psi) / (0.1 + 0.01 * Math.cos(psi)), g.curvature2, 1e-10);
         assertEquals(0.01 - Math.hypot(0.001, 0.004), g.distance, 1e-15);
         assertEquals(-0.01 * psi, g.patchMargin, 1e-12);
-        assertEquals("tubeTo", groove.edgeName(g.edge));
+        assertEquals("tube_to", groove.edgeName(g.edge));
         // outside, on the inner equator: saddle with concave circumferential curvature 1/(R - b)
         Torus ring = new Torus(Vector3D.ZERO, Vector3D.PLUS_K, 0.1, 0.01, Side.OUTSIDE);
         ContactGeometry h = GeometryAssertions.query(ring, new double[] {0.085, 0, 0});
@@ -171,7 +170,7 @@ class AnalyticSurfaceGeometryTest {
         double phi = Math.toRadians(30);
         ContactGeometry q = GeometryAssertions.query(quarter, new double[] {0.1 * Math.cos(phi), 0.1 * Math.sin(phi), -0.005});
         assertEquals(0.1 * phi, q.patchMargin, 1e-12);
-        assertEquals("azimuthFrom", quarter.edgeName(q.edge));
+        assertEquals("azimuth_from", quarter.edgeName(q.edge));
         assertTrue(quarter.hasEdges());
     }
 
@@ -192,5 +191,40 @@ class AnalyticSurfaceGeometryTest {
             assertEquals(b.hessian[i], a.hessian[i], 1e-12);
         }
         assertEquals(b.distance, a.distance, 1e-15);
+    }
+
+    @Test
+    void directionsOfAnyFiniteSizeWork() {
+        // issue 18 item 8: an axis (0, 0, 1e200) once became {0; 0; 0}, a 1e300 torus axis threw
+        // the math library's exception; directions are now normalised with scaling
+        Cylinder huge = new Cylinder(Vector3D.ZERO, new Vector3D(0, 0, 1e200), 0.015, Side.INSIDE);
+        assertEquals(0.004, GeometryAssertions.query(huge, new double[] {0.011, 0, 0.2}).distance, 1e-15);
+        Plane floor = new Plane(Vector3D.ZERO, new Vector3D(0, 0, 1e200));
+        assertEquals(0.25, GeometryAssertions.query(floor, new double[] {1, 2, 0.25}).distance, 1e-15);
+        Plane tiny = new Plane(Vector3D.ZERO, new Vector3D(0, 0, 1e-160));
+        assertEquals(0.25, GeometryAssertions.query(tiny, new double[] {1, 2, 0.25}).distance, 1e-15);
+        Torus big = new Torus(Vector3D.ZERO, new Vector3D(0, 0, 1e300), new Vector3D(1e300, 0, 0), 0.1, 0.01,
+            Side.INSIDE, -Math.PI, Math.PI, -Math.PI, Math.PI);
+        Torus plain = new Torus(Vector3D.ZERO, Vector3D.PLUS_K, Vector3D.PLUS_I, 0.1, 0.01, Side.INSIDE,
+            -Math.PI, Math.PI, -Math.PI, Math.PI);
+        double[] x = {0.104, 0.01, -0.003};
+        assertEquals(GeometryAssertions.query(plain, x).distance, GeometryAssertions.query(big, x).distance, 0.0);
+        IllegalArgumentException parallel = assertThrows(IllegalArgumentException.class, () -> new Torus(Vector3D.ZERO,
+            new Vector3D(0, 0, 1e300), new Vector3D(0, 0, -1e300), 0.1, 0.01, Side.INSIDE, -1, 1, -Math.PI, Math.PI));
+        assertTrue(parallel.getMessage().contains("torus reference direction must not be parallel"), parallel.getMessage());
+        IllegalArgumentException zero = assertThrows(IllegalArgumentException.class,
+            () -> new Torus(Vector3D.ZERO, Vector3D.ZERO, 0.1, 0.01, Side.INSIDE));
+        assertTrue(zero.getMessage().startsWith("axis must be a non-zero direction"), zero.getMessage());
+    }
+
+    @Test
+    void insideConeReachingTheApexIsRejected() {
+        // issue 18 item 11: the concave curvature cos²α/(s sin α) has no bound at the apex, so no
+        // ball fits an inside cone with from = 0; it is rejected when built, naming from
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+            () -> new Cone(Vector3D.ZERO, Vector3D.PLUS_K, 0.5, Side.INSIDE));
+        assertTrue(e.getMessage().contains("from > 0") && e.getMessage().contains("from = 0"), e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> new Cone(Vector3D.ZERO, Vector3D.PLUS_K, 0.5, Side.INSIDE, 0.0, 1.0));
+        assertEquals(0.0, new Cone(Vector3D.ZERO, Vector3D.PLUS_K, 0.5, Side.OUTSIDE).maxConcaveCurvature());
     }
 }

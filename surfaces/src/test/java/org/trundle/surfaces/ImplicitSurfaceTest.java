@@ -72,13 +72,13 @@ class ImplicitSurfaceTest {
         switch (kind) {
             case "cylinder":
                 closed = new Cylinder(Vector3D.ZERO, Vector3D.PLUS_K, TUBE_B, side);
-                custom = new ImplicitSurface("cylinder", CYLINDER, side, TUBE_B, Double.NaN);
+                custom = ImplicitSurface.of(CYLINDER).label("cylinder").side(side).lengthScale(TUBE_B).build();
                 x = new double[] {in * TUBE_B * Math.cos(phi), in * TUBE_B * Math.sin(phi), rnd.nextDouble(-1, 1)};
                 len = TUBE_B;
                 break;
             case "sphere": {
                 closed = new Sphere(Vector3D.ZERO, BIG_R, side);
-                custom = new ImplicitSurface("sphere", SPHERE, side, BIG_R, Double.NaN);
+                custom = ImplicitSurface.of(SPHERE).label("sphere").side(side).lengthScale(BIG_R).build();
                 double th = rnd.nextDouble(0.1, 3.0);
                 x = new double[] {in * BIG_R * Math.sin(th) * Math.cos(phi), in * BIG_R * Math.sin(th) * Math.sin(phi),
                     in * BIG_R * Math.cos(th)};
@@ -87,7 +87,7 @@ class ImplicitSurfaceTest {
             }
             default: {
                 closed = new Torus(Vector3D.ZERO, Vector3D.PLUS_K, BIG_R, TUBE_B, side);
-                custom = new ImplicitSurface("torus", TORUS, side, BIG_R, Double.NaN);
+                custom = ImplicitSurface.of(TORUS).label("torus").side(side).lengthScale(BIG_R).build();
                 double psi = rnd.nextDouble(-Math.PI, Math.PI);
                 double rho = BIG_R + in * TUBE_B * Math.cos(psi);
                 x = new double[] {rho * Math.cos(phi), rho * Math.sin(phi), in * TUBE_B * Math.sin(psi)};
@@ -125,7 +125,7 @@ class ImplicitSurfaceTest {
             }
         };
         // largest curvature of an ellipse a/b² at the ends of the minor... here 0.03/0.02² = 75 1/m
-        return new ImplicitSurface("elliptic tube 0.03 x 0.02 m", f, Side.INSIDE, 0.02, 0.03 / (0.02 * 0.02));
+        return ImplicitSurface.of(f).label("elliptic tube 0.03 x 0.02 m").side(Side.INSIDE).lengthScale(0.02).maxConcaveCurvature(0.03 / (0.02 * 0.02)).build();
     }
 
     @Test
@@ -151,9 +151,9 @@ class ImplicitSurfaceTest {
     @Test
     void badInputAndDomain() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-            () -> new ImplicitSurface("s", SPHERE, Side.INSIDE, -1, Double.NaN));
+            () -> ImplicitSurface.of(SPHERE).label("s").side(Side.INSIDE).lengthScale(-1).build());
         assertTrue(e.getMessage().contains("lengthScale") && e.getMessage().contains("-1"), e.getMessage());
-        Surface s = new ImplicitSurface("sphere", SPHERE, Side.INSIDE, BIG_R, 1 / BIG_R);
+        Surface s = ImplicitSurface.of(SPHERE).label("sphere").side(Side.INSIDE).lengthScale(BIG_R).maxConcaveCurvature(1 / BIG_R).build();
         // the centre of the sphere is a focal point: no unique closest point
         assertThrows(SurfaceDomainException.class, () -> GeometryAssertions.query(s, new double[] {0, 0, 0}));
     }

@@ -74,7 +74,7 @@ public class SurfaceQueryBenchmark {
                 base = new double[] {0.011, 0.0, 0.1};
                 break;
             case "implicitCylinder":
-                s = new ImplicitSurface("cylinder", cyl, Side.INSIDE, 0.015, 1 / 0.015);
+                s = ImplicitSurface.of(cyl).label("cylinder").side(Side.INSIDE).lengthScale(0.015).maxConcaveCurvature(1 / 0.015).build();
                 base = new double[] {0.011, 0.0, 0.1};
                 break;
             case "sphere":

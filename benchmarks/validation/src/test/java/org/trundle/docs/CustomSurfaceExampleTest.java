@@ -9,11 +9,13 @@ import org.junit.jupiter.api.Test;
 import org.trundle.contact.PureRolling;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
+import org.trundle.core.ContactGeometry;
 import org.trundle.core.EndReason;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.Surface;
+import org.trundle.surfaces.Bounded;
 import org.trundle.surfaces.ImplicitFunction;
 import org.trundle.surfaces.ImplicitSurface;
 import org.trundle.surfaces.Side;
@@ -32,13 +34,28 @@ class CustomSurfaceExampleTest {
             }
         };
         // Ball inside (where f < 0); length scale 20 mm; largest concave curvature a/b² = 75 1/m.
-        Surface tube = new ImplicitSurface("elliptic tube 30 x 20 mm", ellipse, Side.INSIDE, 0.020, 0.030 / (0.020 * 0.020));
+        Surface tube = ImplicitSurface.of(ellipse).label("elliptic tube 30 x 20 mm").side(Side.INSIDE)
+            .lengthScale(0.020).maxConcaveCurvature(0.030 / (0.020 * 0.020)).build();
         Simulation sim = Simulation.builder().ball(Ball.solid(0.005, 0.004)).surface(tube)
             .law(new PureRolling()).gravity(new Vector3D(0, 0, -9.81))
             .settings(SolverSettings.defaults().withSampleInterval(1e-3)).build();
         BallState start = sim.rollingStart(new Vector3D(0.025, 0, 0), new Vector3D(0, 0.6, 0));
         RunResult result = sim.run(start, 0.5);
+        // The same tube cut to 0 <= z <= 0.3 m: leaving through either plane is an exit event.
+        Surface shortTube = Bounded.of(tube)
+            .plane("bottom", Vector3D.ZERO, Vector3D.PLUS_K)           // keep z >= 0
+            .plane("top", new Vector3D(0, 0, 0.3), Vector3D.MINUS_K)    // keep z <= 0.3 m
+            .build();
         // --- README example end ---
+        ContactGeometry g = new ContactGeometry();
+        g.scratch = shortTube.newScratch();
+        shortTube.query(0, new double[] {0.025, 0, 0.01}, g);
+        assertEquals("bottom", shortTube.edgeName(g.edge));
+        assertEquals(0.01, g.patchMargin, 1e-12);
+        g.hintValid = false;  // a new point far from the last: no Newton seed
+        shortTube.query(0, new double[] {0.0, 0.015, 0.29}, g);
+        assertEquals("top", shortTube.edgeName(g.edge));
+        assertEquals(0.01, g.patchMargin, 1e-12);
         assertEquals(EndReason.DURATION, result.endReason(), result.message());
         assertTrue(result.energy().relativeResidual() < 1e-8, result.energy().toString());
         assertTrue(result.maxDistanceError() < 1e-9 * 0.005, "distance residual " + result.maxDistanceError());

@@ -42,7 +42,7 @@ class FitCheckTest {
             Arguments.of("torus hole", new Torus(Vector3D.ZERO, Vector3D.PLUS_K, 0.2, 0.03, Side.OUTSIDE), 0.17, "torus(outside"),
             Arguments.of("placed bowl", new Placed(sphere, new Rotation(Vector3D.PLUS_I, 1.0, RotationConvention.VECTOR_OPERATOR),
                 Vector3D.PLUS_J), 0.1, "placed(sphere(inside"),
-            Arguments.of("elliptic tube", new ImplicitSurface("elliptic tube", ellipse, Side.INSIDE, 0.02, 0.03 / 0.0004),
+            Arguments.of("elliptic tube", ImplicitSurface.of(ellipse).label("elliptic tube").side(Side.INSIDE).lengthScale(0.02).maxConcaveCurvature(0.03 / 0.0004).build(),
                 0.0004 / 0.03, "implicit(elliptic tube"));
     }
 

@@ -74,7 +74,7 @@ class PlacementAndExitTest {
         Vector3D e = c.subtract(new Vector3D(0, 0, 0.3)).normalize();
         double theta = Vector3D.angle(e, Vector3D.MINUS_K);
         System.out.println("bowl exit: " + exit + " polar angle " + Math.toDegrees(theta));
-        assertEquals("polarTo", exit.edge());
+        assertEquals("polar_to", exit.edge());
         assertEquals(Math.toRadians(40), theta, 1e-9);
     }
 }

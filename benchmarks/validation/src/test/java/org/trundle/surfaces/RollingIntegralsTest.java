@@ -178,7 +178,7 @@ class RollingIntegralsTest {
                         return x.divide(0.03).square().add(y.divide(0.02).square()).subtract(1.0);
                     }
                 };
-                s.surface = new ImplicitSurface("elliptic tube 0.03 x 0.02 m", f, Side.INSIDE, 0.02, 0.03 / (0.02 * 0.02));
+                s.surface = ImplicitSurface.of(f).label("elliptic tube 0.03 x 0.02 m").side(Side.INSIDE).lengthScale(0.02).maxConcaveCurvature(0.03 / (0.02 * 0.02)).build();
                 s.near = new Vector3D(0.03 * Math.cos(az), 0.02 * Math.sin(az), 0);
                 s.velocity = new Vector3D(-0.03 * Math.sin(az), 0.02 * Math.cos(az), 0).normalize().scalarMultiply(rnd.nextDouble(0.4, 0.8));
                 s.duration = 0.2;
