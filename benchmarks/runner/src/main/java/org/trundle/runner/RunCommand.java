@@ -78,6 +78,7 @@ final class RunCommand implements Callable<Integer> {
             doc = ScenarioPath.parse("run.max_rows").set(doc, maxRows);
         }
         Scenario sc = Scenario.parse(doc);
+        RunOutputs.warn(spec.commandLine().getErr(), sc);
         RunOutputs.Report o = RunOutputs.execute(sc, out, false, !noPlot);
         if (doc.has("sweep")) {
             spec.commandLine().getOut().println("Note:     the sweep section is ignored by run (use: trundle sweep)");

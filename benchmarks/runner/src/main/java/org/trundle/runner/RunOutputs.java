@@ -99,11 +99,41 @@ final class RunOutputs {
             BallState last = rec.lastState() != null ? rec.lastState() : rec.validatedStart();
             summary = SummaryJson.failed(sc.description(), failure, last != null ? last : sc.start(), rec.events());
         }
+        addNotes(summary, sc);
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         if (plot) {
             RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
         }
         return new Report(result, failure, rec, plot);
+    }
+
+    /**
+     * Adds {@code warnings} (implausible values, always present, possibly empty) and, when
+     * {@code start.on_surface: true} moved the start, {@code placement} ({@code moved} m,
+     * {@code from} and {@code to}: the centre as given and as placed, m).
+     */
+    static void addNotes(ObjectNode summary, Scenario sc) {
+        com.fasterxml.jackson.databind.node.ArrayNode w = summary.putArray("warnings");
+        sc.warnings().forEach(w::add);
+        if (sc.placed()) {
+            ObjectNode p = summary.putObject("placement");
+            p.put("moved", sc.placement().distance());
+            p.set("from", SummaryJson.vec(sc.placement().given()));
+            p.set("to", SummaryJson.vec(sc.placement().centre()));
+        }
+    }
+
+    /**
+     * Prints the scenario's warnings on standard error, one {@code trundle: warning:} line each.
+     *
+     * @param err standard error
+     * @param sc the scenario
+     */
+    static void warn(PrintWriter err, Scenario sc) {
+        for (String w : sc.warnings()) {
+            err.println("trundle: warning: " + w);
+        }
+        err.flush();
     }
 
     /** A library exception as one line: its message, or its type when it has none. */
@@ -181,6 +211,11 @@ final class RunOutputs {
     static void print(PrintWriter out, Scenario sc, Report o, Path dir) {
         if (!sc.description().isEmpty()) {
             out.println("Scenario: " + sc.description());
+        }
+        if (sc.placed()) {
+            out.println(String.format(Locale.ROOT, "Placed:   start centre moved %.3e m along the surface normal onto the"
+                + " surface, from %s to %s m", sc.placement().distance(), vec(sc.placement().given()),
+                vec(sc.placement().centre())));
         }
         if (o.result() == null) {
             out.println("Result:   the run failed: " + o.failure());

@@ -98,6 +98,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
         }
         OutputFolder.check(out, force); // before the points are checked: that may take a while
         JsonNode doc = RunCommand.override(ScenarioFiles.read(scenario), duration, null);
+        RunOutputs.warn(spec.commandLine().getErr(), Scenario.parse(doc));
         SweepJob job = SweepJob.of(doc);
         if (!engine.equals("local")) {
             return distributed(job);

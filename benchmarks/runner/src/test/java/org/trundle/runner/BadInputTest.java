@@ -141,8 +141,10 @@ class BadInputTest {
     void contactStartNotOnTheSurfaceIsRefused() {
         assertRejected(Cli.demoWith("\"spin\": \"rolling\"", "\"spin\": \"rolling\", \"on_surface\": true",
             "[0.011, 0, -0.002]", "[0.010, 0, -0.002]"),
-            "start.position: contact start not on the surface: the centre is 0.004999999999999999 m from the surface, a"
-            + " contact start needs the ball radius 0.004 m (within 4.0E-9 m); leave out start.on_surface for a flight start");
+            "start.position: contact start not on the surface: centre {0.01; 0; -0.002} is 0.00500000 m from the surface;"
+            + " placing it at the ball radius 0.00400000 m would move it 0.00100 m, more than the 0.000400 m allowed (the"
+            + " contact tolerance is 4.00e-09 m, 1e-06 of the radius); start.placement_limit (m) allows a larger move;"
+            + " leave out start.on_surface for a flight start");
         assertRejected(Cli.demoWith("[0.011, 0, -0.002]", "[0.011, 0, 0.002]"),
             "start.position: contact start not on the surface: the contact point lies 0.002");
         assertRejected(Cli.demoWith("[0.011, 0, -0.002]", "[0.012, 0, -0.002]"),

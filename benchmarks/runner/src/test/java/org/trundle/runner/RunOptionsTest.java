@@ -144,4 +144,84 @@ class RunOptionsTest {
         List<String> rows = Files.readAllLines(out.resolve("trajectory.csv"));
         assertTrue(rows.size() > 100 && rows.get(rows.size() - 1).endsWith("end"), "rows until the failure");
     }
+
+    /**
+     * Issue 17, item 2: a scenario written in millimetres and grams (radius 4, mass 2.1, bore 15)
+     * and friction in percent is legal and runs, with warnings on standard error and in
+     * summary.json; the demo (SI) has none.
+     */
+    @Test
+    void implausibleValuesAreWarnedAndStillRun() throws IOException {
+        String mm = Cli.demoWith("\"radius\": 0.004, \"mass\": 0.0021", "\"radius\": 4, \"mass\": 2.1",
+            "\"radius\": 0.015", "\"radius\": 15", "\"from\": -0.25", "\"from\": -250",
+            "[0.011, 0, -0.002]", "[11, 0, -2]", "\"static_friction\": 0.4, \"kinetic_friction\": 0.3",
+            "\"static_friction\": 40, \"kinetic_friction\": 30", "\"duration\": 2.0", "\"duration\": 0.05");
+        Path f = Cli.write(dir, "mm.json", mm);
+        Path out = dir.resolve("mm");
+        Cli.Result r = Cli.run("run", f.toString(), "--out", out.toString(), "--no-plot");
+        assertEquals(0, r.code(), r.err());
+        List<String> lines = r.err().strip().lines().toList();
+        assertEquals(List.of(
+            "trundle: warning: ball: mass 2.1 kg and radius 4.0 m give a mean density of 0.00783 kg/m^3, outside what"
+                + " any ball is made of (1 to 23,000 kg/m^3) (all values are read in SI units: m, kg, s)",
+            "trundle: warning: contact.static_friction = 40.0 is above 2, more than any dry pair gives (is it in"
+                + " percent?) (all values are read in SI units: m, kg, s)",
+            "trundle: warning: contact.kinetic_friction = 30.0 is above 2, more than any dry pair gives (is it in"
+                + " percent?) (all values are read in SI units: m, kg, s)"), lines);
+        JsonNode w = ScenarioFiles.JSON.readTree(out.resolve("summary.json").toFile()).get("warnings");
+        assertEquals(3, w.size());
+        assertEquals(lines.get(0).substring("trundle: warning: ".length()), w.get(0).asText());
+        Path demo = dir.resolve("demo");
+        Cli.Result d = Cli.run("demo", "--out", demo.toString());
+        assertEquals("", d.err());
+        assertEquals(0, ScenarioFiles.JSON.readTree(demo.resolve("summary.json").toFile()).get("warnings").size());
+    }
+
+    /**
+     * Issue 17, item 4: a start 0.1 mm off the wall of an invented helical chute, with
+     * {@code start.on_surface: true}, is moved onto the wall, reported, and runs.
+     */
+    @Test
+    void onSurfaceMovesANearbyStartOntoTheSurfaceAndSaysSo() throws IOException {
+        StringBuilder line = new StringBuilder();
+        for (int i = 0; i <= 32; i++) {
+            double a = 2 * Math.PI * i / 16;
+            line.append(i == 0 ? "" : ", ").append(String.format(java.util.Locale.ROOT, "[%.17g, %.17g, %.17g]",
+                0.1 * Math.cos(a), 0.1 * Math.sin(a), -0.05 * i / 16));
+        }
+        double a2 = 2 * Math.PI * 2 / 16;
+        // below the third centreline point: 12 mm bore radius - 4 mm ball radius = 8 mm, then 0.1 mm short of it
+        String start = String.format(java.util.Locale.ROOT, "[%.17g, %.17g, %.17g]", 0.1 * Math.cos(a2),
+            0.1 * Math.sin(a2), -0.05 * 2 / 16 - 0.0079);
+        String json = "{\"description\": \"Invented helical chute\", \"ball\": {\"radius\": 0.004, \"mass\": 0.0021},"
+            + " \"surface\": {\"type\": \"spline_tube\", \"centerline\": [" + line + "], \"radius\": 0.012},"
+            + " \"contact\": {\"law\": \"coulomb\", \"static_friction\": 0.4, \"kinetic_friction\": 0.3},"
+            + " \"start\": {\"position\": " + start + ", \"velocity\": [0, 0, 0], \"spin\": \"rolling\","
+            + " \"on_surface\": ON},"
+            + " \"run\": {\"duration\": 0.1, \"sample_interval\": 0.01}}";
+        Path refused = Cli.write(dir, "off.json", json.replace("ON", "true").replace(", \"on_surface\": true", ""));
+        Cli.Result flight = Cli.run("run", refused.toString(), "--out", dir.resolve("f").toString(), "--no-plot");
+        assertEquals(2, flight.code(), "without on_surface the start is a flight start, and rolling needs contact");
+        Path f = Cli.write(dir, "helix.json", json.replace("ON", "true"));
+        Path out = dir.resolve("helix");
+        Cli.Result r = Cli.run("run", f.toString(), "--out", out.toString(), "--no-plot");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("Placed:   start centre moved 1.2"), r.out());
+        JsonNode p = ScenarioFiles.JSON.readTree(out.resolve("summary.json").toFile()).get("placement");
+        // the given centre is 0.1 mm short of the wall straight down; the wall is tilted by the
+        // helix's pitch and the centreline spline is not the exact helix, so the move is of that
+        // size, and the placed centre lies on the offset surface (distance r to 1e-3 of the tolerance)
+        double moved = p.get("moved").doubleValue();
+        assertTrue(moved > 0.9e-4 && moved < 1.5e-4, "moved " + moved);
+        org.trundle.scenario.Scenario sc = org.trundle.scenario.Scenario.parse(ScenarioFiles.read(f));
+        double gap = sc.simulation().geometryAt(sc.start().centre(), 0).distance - 0.004;
+        assertTrue(Math.abs(gap) < 1e-3 * 4e-9, "gap " + gap);
+        assertEquals(sc.start().centre().getX(), p.get("to").get(0).doubleValue(), 0.0);
+        assertEquals(moved, sc.placement().distance(), 0.0);
+        Path tight = Cli.write(dir, "tight.json", json.replace("ON", "true, \"placement_limit\": 5e-5"));
+        Cli.Result t = Cli.run("run", tight.toString(), "--out", dir.resolve("t").toString());
+        assertEquals(2, t.code());
+        assertTrue(t.err().contains("more than the 5.00e-05 m allowed (the contact tolerance is 4.00e-09 m, 1e-06 of the"
+            + " radius)"), t.err());
+    }
 }

@@ -9,6 +9,7 @@ import org.trundle.core.BallState;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
+import org.trundle.core.StartPlacement;
 import org.trundle.core.Surface;
 import org.trundle.core.sweep.RunSpec;
 
@@ -25,8 +26,12 @@ import org.trundle.core.sweep.RunSpec;
  * @param simulation the configured simulation
  * @param start the start state
  * @param duration simulated time (s)
+ * @param warnings values that are legal but implausible ({@link Plausibility}), one line each
+ * @param placement how {@code start.on_surface: true} moved the start centre, or null when it did
+ *     not apply (the start state already holds the placed centre)
  */
-public record Scenario(JsonNode document, String description, Simulation simulation, BallState start, double duration) {
+public record Scenario(JsonNode document, String description, Simulation simulation, BallState start, double duration,
+    List<String> warnings, StartPlacement placement) {
     /** Keys allowed at the top level. */
     static final List<String> TOP_KEYS = List.of("description", "ball", "surface", "contact", "gravity", "start", "run",
         "sweep");
@@ -96,8 +101,10 @@ public record Scenario(JsonNode document, String description, Simulation simulat
             String m = e.getMessage();
             throw new ScenarioException((m.contains("does not fit") ? "ball does not fit: " : "") + m);
         }
-        BallState start = startSpec.state(sim);
-        return new Scenario(doc, description, sim, start, duration);
+        StartPlacement placement = startSpec.placement(sim);
+        BallState start = (placement == null ? startSpec : startSpec.at(placement.centre())).state(sim);
+        List<String> warnings = Plausibility.warnings(doc, ball.radius(), ball.mass(), gravity);
+        return new Scenario(doc, description, sim, start, duration, List.copyOf(warnings), placement);
     }
 
     private static Ball ball(Section s) {
@@ -142,6 +149,11 @@ public record Scenario(JsonNode document, String description, Simulation simulat
     public long maxRows() {
         Section run = Section.root(document).section("run");
         return run.has("max_rows") ? maxRows(run) : DEFAULT_MAX_ROWS;
+    }
+
+    /** @return whether {@code start.on_surface: true} moved the start centre */
+    public boolean placed() {
+        return placement != null && placement.distance() > 0;
     }
 
     /** @return this scenario as a run of the core sweep API */

@@ -2,12 +2,14 @@ package org.trundle.scenario;
 
 import java.util.Locale;
 import java.util.Optional;
+import java.util.OptionalDouble;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.BallState;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Phase;
 import org.trundle.core.Simulation;
+import org.trundle.core.StartPlacement;
 import org.trundle.core.SurfaceDomainException;
 
 /**
@@ -20,21 +22,28 @@ import org.trundle.core.SurfaceDomainException;
  *       {@code v = speed·(cos el cos az, cos el sin az, sin el)} in world axes;</li>
  *   <li>{@code spin}: {@code "rolling"} (the no-slip spin {@code ω = n × v / r} for the velocity,
  *       zero about the normal; a contact start only) or a vector (rad/s);</li>
- *   <li>{@code on_surface} (optional): {@code true} requires a contact start (an error if the
- *       ball is not on the surface), {@code false} forces a flight start; left out, a centre at
- *       distance r from the surface (within the contact tolerance) is a contact start and any
- *       other a flight start.</li>
+ *   <li>{@code on_surface} (optional): {@code true} makes a contact start, moving a centre that
+ *       lies within {@code placement_limit} (m, default a tenth of the ball radius) of the offset
+ *       surface onto it along the normal ({@link StartPlacement}; an error farther away),
+ *       {@code false} forces a flight start; left out, a centre at distance r from the surface
+ *       (within the contact tolerance) is a contact start and any other a flight start.</li>
  * </ul>
  *
  * @param position centre (m)
  * @param velocity velocity (m/s)
  * @param spin spin vector (rad/s), or null for "rolling"
  * @param onSurface the forced choice, empty for automatic
+ * @param placementLimit farthest placement move (m), empty for the default
  */
-record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<Boolean> onSurface) {
+record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<Boolean> onSurface,
+    OptionalDouble placementLimit) {
+
+    /** Default farthest move of {@code on_surface: true} placement, as a fraction of the ball radius. */
+    static final double DEFAULT_PLACEMENT_FRACTION = 0.1;
 
     static StartSpec parse(Section s) {
-        s.allow("position", "velocity", "speed", "elevation_deg", "azimuth_deg", "spin", "on_surface");
+        s.allow("position", "velocity", "speed", "elevation_deg", "azimuth_deg", "spin", "on_surface",
+            "placement_limit");
         Vector3D pos = s.vector("position", "m");
         Vector3D vel;
         boolean polar = s.has("speed") || s.has("elevation_deg") || s.has("azimuth_deg");
@@ -70,7 +79,44 @@ record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<B
             throw new ScenarioException(s.where("spin") + " must be \"rolling\" or a vector [x, y, z] (rad/s), got "
                 + Section.kind(s.raw("spin")));
         }
-        return new StartSpec(pos, vel, spin, s.optionalBool("on_surface"));
+        OptionalDouble limit = s.has("placement_limit")
+            ? OptionalDouble.of(s.nonNegative("placement_limit", "m", 0.0)) : OptionalDouble.empty();
+        if (limit.isPresent() && !s.optionalBool("on_surface").orElse(false)) {
+            throw new ScenarioException(s.where("placement_limit") + " needs " + s.where("on_surface") + ": true");
+        }
+        return new StartSpec(pos, vel, spin, s.optionalBool("on_surface"), limit);
+    }
+
+    /**
+     * With {@code on_surface: true}, moves the start centre onto the surface along the normal
+     * ({@link StartPlacement}) when it lies within {@code placement_limit} (default a tenth of the
+     * ball radius) of where it belongs.
+     *
+     * @param sim the simulation
+     * @return the placement (no move when already within the contact tolerance), or null without
+     *     {@code on_surface: true}
+     */
+    StartPlacement placement(Simulation sim) {
+        if (!onSurface.orElse(false)) {
+            return null;
+        }
+        double r = sim.ball().radius();
+        double limit = placementLimit.orElse(DEFAULT_PLACEMENT_FRACTION * r);
+        try {
+            return StartPlacement.onSurface(sim, position, limit);
+        } catch (IllegalArgumentException e) {
+            throw new ScenarioException("start.position: contact start not on the surface: " + e.getMessage()
+                + (placementLimit.isPresent() ? "" : "; start.placement_limit (m) allows a larger move")
+                + "; leave out start.on_surface for a flight start");
+        }
+    }
+
+    /**
+     * @param centre a new start centre (m)
+     * @return this start from that centre
+     */
+    StartSpec at(Vector3D centre) {
+        return new StartSpec(centre, velocity, spin, onSurface, placementLimit);
     }
 
     /**
@@ -129,8 +175,10 @@ record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<B
         if (contact && !touching) {
             throw new ScenarioException(String.format(Locale.ROOT,
                 "start.position: contact start not on the surface: the centre is %s m from the surface, a contact"
-                    + " start needs the ball radius %s m (within %s m); leave out start.on_surface for a flight start",
-                g.distance, r, tol));
+                    + " start needs the ball radius %s m within the contact tolerance %s m (%s of the radius); set"
+                    + " start.on_surface: true to move a centre up to %s m away onto the surface, or leave out"
+                    + " start.on_surface for a flight start", g.distance, r, tol, sim.settings().contactTolerance(),
+                DEFAULT_PLACEMENT_FRACTION * r));
         }
         if (!contact) {
             if (spin == null) {

@@ -29,6 +29,7 @@ class ScenarioFolderTest {
             JsonNode doc = ScenarioFiles.read(f);
             Scenario sc = Scenario.parse(doc);
             assertTrue(sc.description().contains("invented"), f + " says its data are invented");
+            assertEquals(List.of(), sc.warnings(), f + " is in SI units and plausible");
             if (doc.has("sweep")) {
                 SweepSpec sw = SweepSpec.parse(doc);
                 assertTrue(sw.space().size() > 1, f.toString());

@@ -13,6 +13,7 @@ import org.trundle.core.BallState;
 import org.trundle.core.EndReason;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
+import org.trundle.core.StartPlacement;
 import org.trundle.core.Surface;
 import org.trundle.core.sweep.Axis;
 import org.trundle.core.sweep.Grid;
@@ -23,7 +24,7 @@ import org.trundle.core.sweep.SweepRun;
 import org.trundle.surfaces.Cylinder;
 import org.trundle.surfaces.Side;
 
-/** Keeps the README's Java examples (a run, a sweep) compiling and running (copies kept in sync by hand). */
+/** Keeps the README's Java examples (a run, a placed start, a sweep) compiling and running (copies kept in sync by hand). */
 class ReadmeExampleTest {
     @Test
     void readmeExampleRuns() {
@@ -37,6 +38,11 @@ class ReadmeExampleTest {
         BallState start = sim.rollingStart(new Vector3D(0.011, 0, -0.001), new Vector3D(0, 0.8, -0.3));
         RunResult result = sim.run(start, 3.0);
         result.exit().ifPresent(e -> System.out.println("left through " + e.edge() + " at " + e.time() + " s"));
+
+        StartPlacement placed = StartPlacement.onSurface(sim, new Vector3D(0.0109, 0, -0.001), 0.4e-3);
+        BallState onWall = sim.rollingStart(placed.centre(), new Vector3D(0, 0.8, -0.3));  // placed.distance(): 1e-4 m
+        assertEquals(1e-4, placed.distance(), 1e-15);
+        assertEquals(start.centre().getX(), onWall.centre().getX(), 1e-17);
 
         Grid grid = Grid.of(Axis.linear("speed", 0.3, 1.5, 13), Axis.linear("angle_deg", -60, 0, 7));
         RunFactory entries = p -> {
