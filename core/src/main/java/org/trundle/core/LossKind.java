@@ -11,5 +11,7 @@ public enum LossKind {
     /** Work of the pivoting-resistance couple against the spin about the normal. */
     PIVOTING_RESISTANCE,
     /** Work of any other contact couple. */
-    OTHER
+    OTHER,
+    /** Work of the damping of a compliant contact's normal force ({@link Compliance}, Hunt–Crossley). */
+    CONTACT_DAMPING
 }

@@ -13,6 +13,7 @@ import org.trundle.core.EndReason;
 import org.trundle.core.EnergyBudget;
 import org.trundle.core.PhaseSpan;
 import org.trundle.core.RunEvent;
+import org.trundle.core.RunObserver;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
 import org.trundle.core.SimulationException;
@@ -26,7 +27,8 @@ import org.trundle.scenario.ScenarioFiles;
 /**
  * Runs one scenario and writes its outputs into the {@code --out} folder: {@code summary.json}
  * ({@link SummaryJson}), {@code trajectory.csv} ({@link RunRecorder}) and {@code run.png}
- * ({@link RunPlot}); then prints a short text summary.
+ * ({@link RunPlot}), and with materials given {@code contacts.csv} ({@link ContactsCsv}, the wall loads)
+ * and their peaks in {@code summary.json}'s {@code wall_loads}; then prints a short text summary.
  */
 final class RunOutputs {
     /**
@@ -69,10 +71,12 @@ final class RunOutputs {
         checkRows(sc);
         Vector3D up = up(sc);
         RunRecorder rec = new RunRecorder(dir.resolve("trajectory.csv"), up, () -> OutputFolder.create(dir, demo));
+        ContactsCsv contacts = sc.wallLoads().map(w -> new ContactsCsv(dir.resolve("contacts.csv"), w, rec)).orElse(null);
+        RunObserver observer = contacts != null ? contacts : rec;
         RunResult result = null;
         String failure = null;
         try {
-            result = sim.run(sc.start(), sc.duration(), rec);
+            result = sim.run(sc.start(), sc.duration(), observer);
         } catch (java.io.UncheckedIOException e) {
             throw e.getCause();
         } catch (IllegalArgumentException e) {
@@ -89,6 +93,9 @@ final class RunOutputs {
                 OutputFolder.create(dir, demo);
             }
             rec.close();
+            if (contacts != null) {
+                contacts.close();
+            }
         }
         ObjectNode summary;
         String[] title = {headline(sc), result != null ? "Result: " + endText(result) : "Result: the run failed: "
@@ -98,6 +105,9 @@ final class RunOutputs {
         } else {
             BallState last = rec.lastState() != null ? rec.lastState() : rec.validatedStart();
             summary = SummaryJson.failed(sc.description(), failure, last != null ? last : sc.start(), rec.events());
+        }
+        if (contacts != null) {
+            summary.set("wall_loads", contacts.summary());
         }
         addNotes(summary, sc);
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);

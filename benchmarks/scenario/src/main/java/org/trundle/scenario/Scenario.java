@@ -1,12 +1,15 @@
 package org.trundle.scenario;
 
 import java.util.List;
+import java.util.Optional;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.contact.WallLoads;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
 import org.trundle.core.ContactLaw;
+import org.trundle.core.Material;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.StartPlacement;
@@ -63,7 +66,8 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         root.allow(TOP_KEYS.toArray(new String[0]));
         String description = root.text("description", "");
         Ball ball = ball(root.section("ball"));
-        Surface surface = SurfaceFactory.create(root.section("surface"));
+        Surface surface = SurfaceFactory.create(root.section("surface").without("material"));
+        wallLoadMaterials(root);
         ContactLaw law = ContactFactory.create(root.section("contact"));
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
@@ -108,7 +112,7 @@ public record Scenario(JsonNode document, String description, Simulation simulat
     }
 
     private static Ball ball(Section s) {
-        s.allow("radius", "mass", "inertia");
+        s.allow("radius", "mass", "inertia", "material");
         double r = s.positive("radius", "m");
         double m = s.positive("mass", "kg");
         double k = Ball.SOLID;
@@ -128,6 +132,49 @@ public record Scenario(JsonNode document, String description, Simulation simulat
             }
         }
         return Ball.of(r, m, k);
+    }
+
+    /** The id of the scenario's one patch (its {@code surface} section) in wall loads. */
+    public static final String PATCH_ID = "surface";
+
+    /**
+     * Reads {@code ball.material} and {@code surface.material}: both or neither.
+     *
+     * @return the two materials (ball, wall), or empty when neither is given
+     */
+    private static Optional<Material[]> wallLoadMaterials(Section root) {
+        Section ball = root.section("ball");
+        Section surface = root.section("surface");
+        if (!ball.has("material") && !surface.has("material")) {
+            return Optional.empty();
+        }
+        if (!ball.has("material") || !surface.has("material")) {
+            throw new ScenarioException("wall loads need both ball.material and surface.material; "
+                + (ball.has("material") ? "surface.material" : "ball.material") + " is missing");
+        }
+        return Optional.of(new Material[] {material(ball.section("material")), material(surface.section("material"))});
+    }
+
+    /** A material from {@code {"youngs_modulus": Pa, "poisson_ratio": ...}}. */
+    private static Material material(Section s) {
+        s.allow("youngs_modulus", "poisson_ratio");
+        double e = s.positive("youngs_modulus", "Pa");
+        double nu = s.number("poisson_ratio", "");
+        if (!(nu >= 0 && nu <= 0.5)) {
+            throw new ScenarioException(s.where("poisson_ratio") + " must lie in [0, 0.5], got " + nu);
+        }
+        return Material.of(e, nu);
+    }
+
+    /**
+     * The loads the wall sees, when the scenario gives {@code ball.material} and {@code surface.material}
+     * (each {@code {"youngs_modulus": Pa, "poisson_ratio": ν}}); the patch id is {@link #PATCH_ID}.
+     *
+     * @return a fresh calculator for one run, or empty without materials
+     */
+    public Optional<WallLoads> wallLoads() {
+        return wallLoadMaterials(Section.root(document)).map(m -> new WallLoads(PATCH_ID, simulation.surface(),
+            simulation.ball().radius(), m[0], m[1]));
     }
 
     /** Default cap on the rows of {@code trajectory.csv} (about 600 MB of text). */

@@ -91,6 +91,19 @@ final class Section {
         return new Section(where(key), (ObjectNode) n);
     }
 
+    /**
+     * @param key a key to leave out
+     * @return this section, at the same path, without {@code key} (a copy; this section is unchanged)
+     */
+    Section without(String key) {
+        if (!node.has(key)) {
+            return this;
+        }
+        ObjectNode copy = node.deepCopy();
+        copy.remove(key);
+        return new Section(path, copy);
+    }
+
     Optional<Section> optionalSection(String key) {
         return has(key) ? Optional.of(section(key)) : Optional.empty();
     }
