@@ -56,6 +56,16 @@ public final class SpinCreepPivoting implements ContactLaw {
     private final double minRollingSpeed;
     private final double contactModulus;
     private final double shearModulus;
+    /**
+     * The unit-load mean radius of the last curvatures seen (an immutable holder, replaced whole): on a
+     * surface of constant curvature (plane, tube, sphere) every later call skips the root find. A race
+     * between threads only costs a recomputation; the value is the same either way (deterministic).
+     */
+    private volatile UnitRadius last;
+
+    /** Mean radius under a unit load for one ball radius and curvature pair. */
+    private record UnitRadius(double ballRadius, double curvature1, double curvature2, double meanRadius) {
+    }
 
     /**
      * Spin creep with {@code C₃₃ = 1.0} and the default speed floor.
@@ -123,7 +133,14 @@ public final class SpinCreepPivoting implements ContactLaw {
         }
         ContactGeometry g = c.geometry();
         double r = c.ball().radius();
-        double mean = HertzContact.meanRadius(fn, r, g.curvature1, g.curvature2, contactModulus);
+        UnitRadius u = last;
+        if (u == null || u.ballRadius() != r || u.curvature1() != g.curvature1 || u.curvature2() != g.curvature2) {
+            u = new UnitRadius(r, g.curvature1, g.curvature2,
+                HertzContact.meanRadius(1.0, r, g.curvature1, g.curvature2, contactModulus));
+            last = u;
+        }
+        // c = √(ab) scales with P^{1/3} (HertzContact.meanRadius computes it the same way)
+        double mean = u.meanRadius() * Math.cbrt(fn);
         double c2 = mean * mean;
         return shearModulus * c2 * c2 * c33 / Math.max(rollingSpeed(c), minRollingSpeed);
     }

@@ -255,6 +255,33 @@ class LawFormulaTest {
     }
 
     /**
+     * The spin-creep law's cache of the unit-load patch gives exactly the direct value, when the
+     * curvatures change between calls and when they repeat (bit for bit: runs stay deterministic).
+     */
+    @Test
+    void spinCreepCacheGivesTheDirectValue() {
+        SpinCreepPivoting law = new SpinCreepPivoting(Material.STEEL, Material.NYLON, Double.POSITIVE_INFINITY);
+        double eStar = Material.STEEL.contactModulus(Material.NYLON);
+        double g = Material.STEEL.combinedShearModulus(Material.NYLON);
+        double r = 0.003;
+        Ball ball = Ball.solid(r, 0.001);
+        double[][] curvatures = {{50, 0}, {50, 0}, {20, -10}, {50, 0}, {0, 0}, {0, 0}};
+        double[] loads = {0.3, 1.7, 0.3, 0.01, 2, 2};
+        for (int i = 0; i < curvatures.length; i++) {
+            ContactGeometry geo = new ContactGeometry();
+            geo.normal[2] = 1;
+            geo.curvature1 = curvatures[i][0];
+            geo.curvature2 = curvatures[i][1];
+            ContactContext ctx = new ContactContext();
+            ctx.prepare(ball, geo, loads[i], Phase.ROLLING, new double[3], new double[] {0, 100, 3});
+            double c = HertzContact.meanRadius(loads[i], r, curvatures[i][0], curvatures[i][1], eStar);
+            double c2 = c * c;   // the law's order of operations, so the comparison can be exact
+            double expected = g * c2 * c2 * SpinCreepPivoting.C33_CIRCULAR / SpinCreepPivoting.rollingSpeed(ctx);
+            assertEquals(expected, law.damping(ctx), 0.0, "call " + i);
+        }
+    }
+
+    /**
      * Combination with {@code and} (the ContactLaw contract): grips take the smaller, sliding forces
      * and couples add, hold limits add, one restitution at most.
      */
