@@ -154,7 +154,10 @@ class BadInputTest {
             "\"velocity\": [0.1, 0.5, 0]"), "start.velocity: a contact start must move along the surface, but the"
             + " velocity has a normal component -0.1 m/s");
         assertRejected(Cli.demoWith("[0.011, 0, -0.002]", "[0.005, 0, -0.002]"),
-            "start.spin: \"rolling\" needs a contact start, but the ball starts in flight");
+            "start.spin: \"rolling\" needs a contact start, but the ball starts in flight (its centre is"
+            + " 0.009999999999999998 m from the surface, the ball radius is 0.004 m, beyond the contact tolerance 4.0E-9"
+            + " m); give the spin as a vector (rad/s), or set start.on_surface: true to move a centre up to 4.0E-4 m away"
+            + " onto the surface");
     }
 
     @Test

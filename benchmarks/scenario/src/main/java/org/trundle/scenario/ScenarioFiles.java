@@ -22,6 +22,8 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.util.JsonParserDelegate;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.databind.DeserializationFeature;
@@ -150,10 +152,7 @@ public final class ScenarioFiles {
         }
         String t = !text.isEmpty() && text.charAt(0) == '\uFEFF' ? text.substring(1) : text;
         try {
-            if (mapper == YAML) {
-                rejectAliases(t);
-            }
-            JsonNode n = mapper.readTree(t);
+            JsonNode n = mapper == YAML ? readYaml(t) : mapper.readTree(t);
             if (n == null || n.isMissingNode()) {
                 throw new ScenarioException("malformed " + format + ": the file is empty");
             }
@@ -165,23 +164,48 @@ public final class ScenarioFiles {
             JsonLocation loc = e.getLocation();
             String where = loc == null || loc.getLineNr() < 1 ? "" : " at line " + loc.getLineNr() + ", column "
                 + loc.getColumnNr();
-            throw new ScenarioException("malformed " + format + where + ": " + plain(e.getOriginalMessage()));
+            String m = e.getOriginalMessage();
+            if (m != null && m.contains("AliasEvent")) {
+                throw new ScenarioException("YAML alias" + where + ": scenario files take no anchors and aliases; write"
+                    + " the value out in full");
+            }
+            throw new ScenarioException("malformed " + format + where + ": " + plain(m));
         } catch (IOException e) {
             throw new ScenarioException("malformed " + format + ": " + plain(e.getMessage()));
         }
     }
 
-    /** YAML aliases ({@code *name}) would read as the anchor's name: refuse them instead. */
-    private static void rejectAliases(String text) throws IOException {
+    /**
+     * Reads one YAML document in one pass, refusing aliases ({@code *name}: Jackson would read them
+     * as the anchor's name) and a second document.
+     */
+    private static JsonNode readYaml(String text) throws IOException {
         try (JsonParser p = YAML.getFactory().createParser(text)) {
-            while (p.nextToken() != null) {
-                if (((YAMLParser) p).isCurrentAlias()) {
-                    JsonLocation l = p.currentTokenLocation();
-                    throw new ScenarioException("YAML alias *" + Texts.clip(p.getText()) + " at line " + l.getLineNr()
-                        + ", column " + l.getColumnNr() + ": scenario files take no anchors and aliases; write the"
-                        + " value out in full");
+            JsonParser checked = new JsonParserDelegate(p) {
+                @Override
+                public JsonToken nextToken() throws IOException {
+                    JsonToken t = super.nextToken();
+                    if (((YAMLParser) delegate).isCurrentAlias()) {
+                        JsonLocation l = delegate.currentTokenLocation();
+                        throw new ScenarioException("YAML alias *" + Texts.clip(delegate.getText()) + " at line "
+                            + l.getLineNr() + ", column " + l.getColumnNr() + ": scenario files take no anchors and"
+                            + " aliases; write the value out in full");
+                    }
+                    return t;
                 }
+
+                @Override
+                public String nextFieldName() throws IOException {
+                    return nextToken() == JsonToken.FIELD_NAME ? currentName() : null;
+                }
+            };
+            JsonNode n = YAML.readTree(checked);
+            if (n != null && checked.nextToken() != null) {
+                JsonLocation l = p.currentTokenLocation();
+                throw new ScenarioException("malformed YAML at line " + l.getLineNr() + ", column " + l.getColumnNr()
+                    + ": more after the end of the document (a scenario file holds one)");
             }
+            return n;
         }
     }
 
@@ -221,6 +245,8 @@ public final class ScenarioFiles {
             m = m.substring(0, cut);
         }
         m = m.replaceAll("\\[Source: .*?; line: ", "[line: ");
+        m = m.replaceAll("Trailing token .*", "more after the end of the document (a scenario file holds one)");
+        m = m.replaceAll("<org\\.yaml\\.snakeyaml\\.events\\.(\\w+)Event\\(.*?\\)>", "a YAML $1");
         m = m.replaceAll(": enable `[^`]*` to allow", " (scenario numbers must be finite)");
         m = m.replaceAll("\\s*\\(not recognized as one since Feature '[A-Z_]+' not enabled for parser\\)",
             " (comments are not allowed in JSON)");

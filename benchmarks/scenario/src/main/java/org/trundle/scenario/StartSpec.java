@@ -184,8 +184,9 @@ record StartSpec(Vector3D position, Vector3D velocity, Vector3D spin, Optional<B
             if (spin == null) {
                 throw new ScenarioException(String.format(Locale.ROOT,
                     "start.spin: \"rolling\" needs a contact start, but the ball starts in flight (its centre is %s m"
-                        + " from the surface, the ball radius is %s m); give the spin as a vector (rad/s)",
-                    g.distance, r));
+                        + " from the surface, the ball radius is %s m, beyond the contact tolerance %s m); give the spin"
+                        + " as a vector (rad/s), or set start.on_surface: true to move a centre up to %s m away onto the"
+                        + " surface", g.distance, r, tol, DEFAULT_PLACEMENT_FRACTION * r));
             }
             return BallState.flying(position, velocity, spin);
         }

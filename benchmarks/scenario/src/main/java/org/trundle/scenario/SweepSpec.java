@@ -156,9 +156,14 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
         org.trundle.core.Surface surface = SurfaceFactory.create(root.section("surface"));
         if (surface.hasEdges()) {
             for (int i = 0; i < 16; i++) {
-                String o = "exit_" + surface.edgeName(i);
+                String o;
+                try {
+                    o = "exit_" + surface.edgeName(i);
+                } catch (RuntimeException pastTheLastEdge) {
+                    break; // a surface may refuse an index past its last edge
+                }
                 if (out.contains(o)) {
-                    break; // edge indices past the last repeat its name
+                    break; // or repeat the last edge's name
                 }
                 out.add(o);
             }

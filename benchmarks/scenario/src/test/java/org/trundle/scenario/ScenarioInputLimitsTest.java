@@ -94,6 +94,11 @@ class ScenarioInputLimitsTest {
         String m = message(() -> ScenarioFiles.read(p));
         assertEquals("YAML alias *d at line 4, column 16: scenario files take no anchors and aliases; write the value"
             + " out in full", m);
+        Path key = file("key.yaml", "base: &b 1\n*b : 2\n".getBytes(StandardCharsets.UTF_8));
+        assertTrue(message(() -> ScenarioFiles.read(key)).startsWith("YAML alias at line 2, column 3: scenario files take no anchors and aliases"));
+        Path two = file("two.yaml", (YAML_DEMO + "---\n" + YAML_DEMO).getBytes(StandardCharsets.UTF_8));
+        assertEquals("malformed YAML at line 7, column 1: more after the end of the document (a scenario file holds one)",
+            message(() -> ScenarioFiles.read(two)));
     }
 
     @Test
@@ -103,6 +108,7 @@ class ScenarioInputLimitsTest {
             {"{ // note\n \"ball\": 1 }", "(comments are not allowed in JSON)"},
             {"{\"ball\": 007}", "malformed JSON at line 1"},
             {"{'ball': 1}", "was expecting double-quote to start field name"},
+            {"{} {}", "more after the end of the document (a scenario file holds one)"},
         };
         for (String[] c : cases) {
             String m = message(() -> ScenarioFiles.parse(c[0]));
