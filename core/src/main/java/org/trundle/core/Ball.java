@@ -10,6 +10,9 @@ package org.trundle.core;
  * inertia). Any {@code 0 < k ≤ 2/3} describes a layered ball whose density does not increase
  * outward-to-inward beyond the shell limit.
  *
+ * <p>The mass, the moment of inertia and their inverses must be finite numbers (a radius of 1e300 m
+ * or a mass of 1e-320 kg is refused), since the solver divides by both.
+ *
  * <p>Immutable and thread-safe.
  */
 public final class Ball {
@@ -30,6 +33,14 @@ public final class Ball {
                 "inertia factor k must lie in (0, 2/3], got k = " + inertiaFactor);
         }
         this.inertiaFactor = inertiaFactor;
+        // the solver divides by m and I = k m r²: both and their inverses must be finite numbers
+        double inertia = momentOfInertia();
+        if (!Double.isFinite(1.0 / mass) || !(inertia > 0) || !Double.isFinite(inertia)
+            || !Double.isFinite(1.0 / inertia)) {
+            throw new IllegalArgumentException("ball of radius " + radius + " m, mass " + mass + " kg and inertia factor "
+                + inertiaFactor + " has moment of inertia k m r^2 = " + inertia + " kg m^2; the mass, the moment of"
+                + " inertia and their inverses must be finite numbers (a double spans about 1e-308 to 1e308)");
+        }
     }
 
     /**

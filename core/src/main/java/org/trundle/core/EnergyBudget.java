@@ -19,6 +19,7 @@ public final class EnergyBudget {
     private final double impacts;
     private final double appliedWork;
     private final double scale;
+    private final double contactDamping;
 
     /**
      * @param initial initial mechanical energy (J)
@@ -34,6 +35,29 @@ public final class EnergyBudget {
     public EnergyBudget(double initial, double fin, double slidingFriction, double rollingResistance,
                         double pivotingResistance, double otherCouples, double impacts, double appliedWork,
                         double scale) {
+        this(initial, fin, slidingFriction, rollingResistance, pivotingResistance, otherCouples, impacts, appliedWork,
+            scale, 0.0);
+    }
+
+    /**
+     * A budget with the damping work of a compliant contact ({@link LossKind#CONTACT_DAMPING}); with a compliant
+     * contact the mechanical energies include the elastic energy stored in the contact.
+     *
+     * @param initial initial mechanical energy (J)
+     * @param fin final mechanical energy (J)
+     * @param slidingFriction energy lost to sliding friction, including sticking impulses (J)
+     * @param rollingResistance energy lost to rolling resistance (J)
+     * @param pivotingResistance energy lost to pivoting resistance (J)
+     * @param otherCouples energy lost to other contact couples (J)
+     * @param impacts energy lost in impacts (J)
+     * @param appliedWork work done by applied loads (J)
+     * @param scale energy scale E_scale (J)
+     * @param contactDamping energy lost to the damping of a compliant contact (J)
+     */
+    public EnergyBudget(double initial, double fin, double slidingFriction, double rollingResistance,
+                        double pivotingResistance, double otherCouples, double impacts, double appliedWork,
+                        double scale, double contactDamping) {
+        this.contactDamping = contactDamping;
         this.initial = initial;
         this.fin = fin;
         this.slidingFriction = slidingFriction;
@@ -80,6 +104,11 @@ public final class EnergyBudget {
         return impacts;
     }
 
+    /** @return energy lost to the damping of a compliant contact (J) */
+    public double contactDampingLoss() {
+        return contactDamping;
+    }
+
     /** @return work done on the ball by applied loads (J) */
     public double appliedWork() {
         return appliedWork;
@@ -87,7 +116,7 @@ public final class EnergyBudget {
 
     /** @return total dissipated energy (J) */
     public double totalLoss() {
-        return slidingFriction + rollingResistance + pivotingResistance + otherCouples + impacts;
+        return slidingFriction + rollingResistance + pivotingResistance + otherCouples + impacts + contactDamping;
     }
 
     /** @return {@code E_final − E_initial + losses − appliedWork} (J); zero for a closed budget */
@@ -109,7 +138,7 @@ public final class EnergyBudget {
     public String toString() {
         return String.format(java.util.Locale.ROOT,
             "E0=%.6e J, E1=%.6e J, friction=%.3e, rolling=%.3e, pivoting=%.3e, other=%.3e, impacts=%.3e,"
-                + " applied=%.3e, residual/scale=%.2e", initial, fin, slidingFriction, rollingResistance,
-            pivotingResistance, otherCouples, impacts, appliedWork, relativeResidual());
+                + " damping=%.3e, applied=%.3e, residual/scale=%.2e", initial, fin, slidingFriction, rollingResistance,
+            pivotingResistance, otherCouples, impacts, contactDamping, appliedWork, relativeResidual());
     }
 }

@@ -38,9 +38,11 @@ public final class RightHandSide {
      * @param t time (s)
      * @param y state array
      * @param yDot output derivative array
+     * @throws ArithmeticException when the derivative is not finite (the message names the
+     *     component and its likely source) or the law returns a NaN or negative force bound
      */
     public void evaluate(double t, double[] y, double[] yDot) {
-        dyn.evaluate(t, y, yDot);
+        dyn.evaluateChecked(t, y, yDot);
     }
 
     /** @return the normal force (N) of the last evaluation */

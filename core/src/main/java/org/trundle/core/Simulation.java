@@ -35,6 +35,8 @@ public final class Simulation {
     private final Vector3D gravity;
     private final AppliedLoad load;
     private final SolverSettings settings;
+    /** The patch's compliant contact, or null for the rigid contact. */
+    private final Compliance compliance;
     /** The immutable problem handed to the engine. */
     private final Model model;
 
@@ -54,6 +56,7 @@ public final class Simulation {
         this.gravity = Checks.finite("gravity", b.gravity);
         this.load = b.load == null ? AppliedLoad.NONE : b.load;
         this.settings = b.settings == null ? SolverSettings.defaults() : b.settings;
+        this.compliance = b.compliance;
         double kmax = surface.maxConcaveCurvature();
         if (Double.isFinite(kmax) && ball.radius() * kmax >= 1.0) {
             throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
@@ -66,7 +69,7 @@ public final class Simulation {
                 throw new IllegalArgumentException("restitution must lie in [0, 1], got " + e);
             }
         });
-        this.model = new Model(ball, surface, law, gravity, load, settings, ContextAccessor.INSTANCE);
+        this.model = new Model(ball, surface, law, gravity, load, settings, compliance, ContextAccessor.INSTANCE);
     }
 
     /** @return the immutable model the engine runs (internal use: {@code RightHandSide}) */
@@ -81,7 +84,8 @@ public final class Simulation {
 
     /** @return a builder holding this simulation's configuration */
     public Builder toBuilder() {
-        return new Builder().ball(ball).surface(surface).law(law).gravity(gravity).load(load).settings(settings);
+        return new Builder().ball(ball).surface(surface).law(law).gravity(gravity).load(load).settings(settings)
+            .compliance(compliance);
     }
 
     /** @return the ball */
@@ -92,6 +96,11 @@ public final class Simulation {
     /** @return the surface */
     public Surface surface() {
         return surface;
+    }
+
+    /** @return the patch's compliant contact, or empty for the rigid contact */
+    public java.util.Optional<Compliance> compliance() {
+        return java.util.Optional.ofNullable(compliance);
     }
 
     /** @return the contact law */
@@ -128,10 +137,14 @@ public final class Simulation {
      * @param start start state; its phase says what is asked for (rolling, sliding: the centre must
      *     be at distance r from the surface within {@link SolverSettings#contactTolerance()};
      *     flight: anywhere not penetrating)
-     * @param duration simulated time (s), finite and positive
+     * @param duration simulated time (s), finite, positive and long enough to advance the clock
+     *     (1000 units in the last place of the end time, the integrator's shortest interval)
      * @return the result
      * @throws IllegalArgumentException for an inconsistent start, naming the quantity and value
-     * @throws SimulationException when the integration fails numerically
+     * @throws SimulationException for every failure of the run, with the last good state: a number
+     *     past the range of double, an answer from the surface or law that breaks its contract, an
+     *     exception thrown by user code (the cause), an interrupt of the thread
+     *     ({@link SimulationInterruptedException})
      */
     public RunResult run(BallState start, double duration) {
         return run(start, duration, RunObserver.NONE);
@@ -142,13 +155,21 @@ public final class Simulation {
      *
      * @param start start state (see {@link #run(BallState, double)})
      * @param duration simulated time (s)
-     * @param observer receives samples and events
+     * @param observer receives samples and events; what it throws ends the run with a
+     *     {@link SimulationException} whose cause it is
      * @return the result
+     * @throws IllegalArgumentException for an inconsistent start
+     * @throws SimulationException for every failure of the run (see {@link #run(BallState, double)})
      */
     public RunResult run(BallState start, double duration, RunObserver observer) {
         Checks.positive("duration", duration);
         if (start == null) {
             throw new IllegalArgumentException("start state must be given, got null");
+        }
+        double shortest = Engine.shortestInterval(start.time(), start.time() + duration);
+        if (!(duration >= shortest)) {
+            throw new IllegalArgumentException("duration " + duration + " s is too short to advance the clock from t = "
+                + start.time() + " s: the integrator needs at least " + shortest + " s");
         }
         return Engine.run(model, start, duration, observer == null ? RunObserver.NONE : observer);
     }
@@ -222,8 +243,24 @@ public final class Simulation {
         private Vector3D gravity = Vector3D.ZERO;
         private AppliedLoad load = AppliedLoad.NONE;
         private SolverSettings settings = SolverSettings.defaults();
+        private Compliance compliance;
 
         private Builder() {
+        }
+
+        /**
+         * Makes the patch's contact compliant: instead of the rigid constraints, the ball moves as in flight
+         * under gravity, applied loads and the compliant contact's force ({@link Compliance}: Hertz law with
+         * Hunt–Crossley damping; the law gives the friction, regularised below the settle speed, and its
+         * couples). The contact starts and ends with {@code impact} and {@code lift_off} events; the phase
+         * stays {@code flight}; samples report the contact force while the ball presses the wall.
+         *
+         * @param c the compliant contact, or null for the rigid contact (the default)
+         * @return this builder
+         */
+        public Builder compliance(Compliance c) {
+            this.compliance = c;
+            return this;
         }
 
         /**

@@ -2,6 +2,7 @@ package org.trundle.runner;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -75,10 +76,19 @@ final class RunOutputs {
         RunObserver observer = contacts != null ? contacts : rec;
         RunResult result = null;
         String failure = null;
+        BallState lastGood = null;
         try {
             result = sim.run(sc.start(), sc.duration(), observer);
         } catch (java.io.UncheckedIOException e) {
             throw e.getCause();
+        } catch (SimulationException e) {
+            if (e.getCause() instanceof java.io.UncheckedIOException) {
+                // the library wraps what its observer throws: a recorder that could not write is
+                // an output error, not a failure of the run
+                throw ((java.io.UncheckedIOException) e.getCause()).getCause();
+            }
+            lastGood = e.lastGoodState();
+            failure = failureText(e);
         } catch (IllegalArgumentException e) {
             if (rec.validatedStart() == null) {
                 throw new ScenarioException("start: " + e.getMessage());
@@ -103,7 +113,7 @@ final class RunOutputs {
         if (result != null) {
             summary = SummaryJson.of(sc.description(), result);
         } else {
-            BallState last = rec.lastState() != null ? rec.lastState() : rec.validatedStart();
+            BallState last = lastGood != null ? lastGood : rec.lastState() != null ? rec.lastState() : rec.validatedStart();
             summary = SummaryJson.failed(sc.description(), failure, last != null ? last : sc.start(), rec.events());
         }
         if (contacts != null) {
@@ -258,7 +268,8 @@ final class RunOutputs {
                 r.maxNormalForce(), r.maxDistanceError()));
         }
         out.println("Files:    " + String.join(", ", List.of(dir.resolve("summary.json").toString(),
-            dir.resolve("trajectory.csv").toString())) + (o.plotted() ? ", " + dir.resolve("run.png")
+            dir.resolve("trajectory.csv").toString())) + (Files.exists(dir.resolve("contacts.csv")) ? ", "
+            + dir.resolve("contacts.csv") : "") + (o.plotted() ? ", " + dir.resolve("run.png")
             : " (no picture: --no-plot)"));
         out.flush();
     }
@@ -273,9 +284,11 @@ final class RunOutputs {
      */
     static String energyText(EnergyBudget e) {
         return String.format(Locale.ROOT, "initial %.6e J, final %.6e J; losses: friction %.3e J, rolling resistance"
-            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J; applied work %.3e J;"
+            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J;"
             + " budget residual %.1e of scale", e.initial(), e.fin(), e.slidingFrictionLoss(), e.rollingResistanceLoss(),
-            e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.appliedWork(), e.relativeResidual());
+            e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.contactDampingLoss() != 0
+                ? String.format(Locale.ROOT, ", contact damping %.3e J", e.contactDampingLoss()) : "",
+            e.appliedWork(), e.relativeResidual());
     }
 
     static String vec(Vector3D v) {

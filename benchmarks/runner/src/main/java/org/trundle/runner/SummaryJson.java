@@ -66,6 +66,7 @@ final class SummaryJson {
         en.put("pivoting_resistance_loss", e.pivotingResistanceLoss());
         en.put("impact_loss", e.impactLoss());
         en.put("other_loss", e.otherCoupleLoss());
+        en.put("contact_damping_loss", e.contactDampingLoss());
         en.put("applied_work", e.appliedWork());
         en.put("residual", e.residual());
         en.put("relative_residual", e.relativeResidual());

@@ -5,9 +5,11 @@ import java.util.Optional;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.trundle.contact.HertzStiffness;
 import org.trundle.contact.WallLoads;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
+import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.Material;
 import org.trundle.core.Simulation;
@@ -68,7 +70,9 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         Ball ball = ball(root.section("ball"));
         Surface surface = SurfaceFactory.create(root.section("surface").without("material"));
         wallLoadMaterials(root);
-        ContactLaw law = ContactFactory.create(root.section("contact"));
+        Section contactSection = root.section("contact");
+        ContactLaw law = ContactFactory.create(contactSection.without("compliant"));
+        Compliance compliance = compliance(root, contactSection, law);
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
         Section run = root.section("run");
@@ -100,7 +104,8 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         }
         Simulation sim;
         try {
-            sim = Simulation.builder().ball(ball).surface(surface).law(law).gravity(gravity).settings(set).build();
+            sim = Simulation.builder().ball(ball).surface(surface).law(law).gravity(gravity).settings(set)
+                .compliance(compliance).build();
         } catch (IllegalArgumentException e) {
             String m = e.getMessage();
             throw new ScenarioException((m.contains("does not fit") ? "ball does not fit: " : "") + m);
@@ -153,6 +158,27 @@ public record Scenario(JsonNode document, String description, Simulation simulat
                 + (ball.has("material") ? "surface.material" : "ball.material") + " is missing");
         }
         return Optional.of(new Material[] {material(ball.section("material")), material(surface.section("material"))});
+    }
+
+    /**
+     * {@code contact.compliant: true} makes the contact a compliant Hertz contact with Hunt–Crossley damping
+     * ({@link HertzStiffness#compliance}) from {@code ball.material}, {@code surface.material} and
+     * {@code contact.restitution} (at least 0.1).
+     *
+     * @return the compliance, or null for the rigid contact
+     */
+    private static Compliance compliance(Section root, Section contact, ContactLaw law) {
+        if (!contact.bool("compliant", false)) {
+            return null;
+        }
+        Material[] m = wallLoadMaterials(root).orElseThrow(() -> new ScenarioException(
+            "contact.compliant needs ball.material and surface.material (the Hertz stiffness comes from them)"));
+        double e = law.restitution().orElse(0.0);
+        if (!(e >= Compliance.MIN_RESTITUTION)) {
+            throw new ScenarioException("contact.compliant needs contact.restitution of at least "
+                + Compliance.MIN_RESTITUTION + " (Hunt-Crossley damping), got " + e);
+        }
+        return HertzStiffness.compliance(m[0], m[1], e);
     }
 
     /** A material from {@code {"youngs_modulus": Pa, "poisson_ratio": ...}}. */

@@ -2,6 +2,7 @@ package org.trundle.core.engine;
 
 import static org.trundle.core.engine.StateMapper.APPLIED;
 import static org.trundle.core.engine.StateMapper.C;
+import static org.trundle.core.engine.StateMapper.DAMPING;
 import static org.trundle.core.engine.StateMapper.DIM;
 import static org.trundle.core.engine.StateMapper.LOSS;
 import static org.trundle.core.engine.StateMapper.PATH;
@@ -17,6 +18,7 @@ import static org.trundle.core.engine.Vec.zero;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.trundle.core.AppliedLoad;
 import org.trundle.core.Ball;
+import org.trundle.core.Compliance;
 import org.trundle.core.ContactContext;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;
@@ -66,6 +68,16 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final Surface surface;
     private final ContactLaw law;
     private final AppliedLoad load;
+    /** The patch's compliant contact, or null for the rigid contact. */
+    private final Compliance compliance;
+    /** Normal speed (m/s) at which the current compliant contact began (sets its damping). */
+    double touchSpeed = 1.0;
+    /** Slip speed (m/s) below which a compliant contact's friction is viscous (regularised Coulomb). */
+    double compliantSlipSpeed = 1e-3;
+    /** Whether the last flight evaluation found the ball pressing a compliant patch. */
+    boolean pressing;
+    /** Damping power (W) of the last compliant evaluation. */
+    private double lossDamp;
 
     final ContactGeometry geo;
     final ContactContext ctx;
@@ -148,10 +160,12 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     }
 
     Dynamics(Model model, ContactSlot slot) {
-        this(model.ball(), slot, model.gravity().toArray(), model.load(), model.access());
+        this(model.ball(), slot, model.gravity().toArray(), model.load(), model.access(), model.compliance());
     }
 
-    private Dynamics(Ball ball, ContactSlot slot, double[] gravity, AppliedLoad load, ContextAccess access) {
+    private Dynamics(Ball ball, ContactSlot slot, double[] gravity, AppliedLoad load, ContextAccess access,
+                     Compliance compliance) {
+        this.compliance = compliance;
         this.ball = ball;
         this.r = ball.radius();
         this.m = ball.mass();
@@ -294,6 +308,24 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     }
 
     /**
+     * Evaluates the derivative of a full-layout state for a caller outside the engine
+     * ({@code RightHandSide}), where the engine's own failure type must not escape.
+     *
+     * @param t time (s)
+     * @param y full-layout state
+     * @param yDot output derivative (full layout)
+     * @throws ArithmeticException when the derivative is not finite or a law or surface breaks its
+     *     contract, with the engine's message
+     */
+    public void evaluateChecked(double t, double[] y, double[] yDot) {
+        try {
+            evaluate(t, y, yDot);
+        } catch (RunFailure e) {
+            throw new ArithmeticException(e.getMessage());
+        }
+    }
+
+    /**
      * Evaluates the derivative of a full-layout state.
      *
      * @param t time (s)
@@ -310,6 +342,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         w[0] = y[W];
         w[1] = y[W + 1];
         w[2] = y[W + 2];
+        if (!Double.isFinite(c[0] + c[1] + c[2])) {
+            // an integrator stage past the range of double: say so before a surface sees the point
+            throw nonFiniteCentre(t, c);
+        }
         if (loaded) {
             q[0] = y[Q];
             q[1] = y[Q + 1];
@@ -326,6 +362,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         lossPivot = 0;
         lossSlide = 0;
         lossOther = 0;
+        lossDamp = 0;
+        pressing = false;
         // one method per phase keeps each small enough for the JIT to inline its callees
         if (phase == Phase.ROLLING || phase == Phase.REST) {
             rollingForces(t, y, yDot);
@@ -357,7 +395,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double ix = tau[0];
         double iy = tau[1];
         double iz = tau[2];
-        if (phase != Phase.FLIGHT) {
+        if (phase != Phase.FLIGHT || pressing) {
             double[] n = geo.normal;
             double nx = n[0];
             double ny = n[1];
@@ -380,6 +418,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
         yDot[APPLIED] = applied;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        yDot[DAMPING] = lossDamp;
         checkFinite(t, yDot);
     }
 
@@ -402,7 +441,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[W + 2] = alz;
     }
 
-    /** Throws {@link NumericalFailure} naming the first non-finite component of a derivative. */
+    /** Throws {@link RunFailure} naming the first non-finite component of a derivative and its likely source. */
     private void checkFinite(double t, double[] yDot) {
         // one test for all: a sum of finite numbers of this size is finite, and NaN or ±∞ spread
         // (three partial sums, so that the additions do not form one long dependency chain)
@@ -414,15 +453,60 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             s1 += yDot[i + 1];
             s2 += yDot[i + 2];
         }
-        double sum = s0 + s1 + s2 + yDot[18];
+        double sum = s0 + s1 + s2 + yDot[18] + yDot[19];
         if (!Double.isFinite(sum)) {
             for (int i = 0; i < DIM; i++) {
                 if (!Double.isFinite(yDot[i])) {
-                    throw new NumericalFailure("non-finite derivative component " + i + " = " + yDot[i]
-                        + " at t = " + t + " s in phase " + phase.label());
+                    throw new RunFailure("non-finite derivative of " + StateMapper.componentName(i) + " = " + yDot[i]
+                        + " at t = " + t + " s in phase " + phase.label() + ": " + diagnose());
                 }
             }
         }
+    }
+
+    /** The likely source of a non-finite derivative, from what the last evaluation used (failure path only). */
+    private String diagnose() {
+        if (phase != Phase.FLIGHT && !(Vec.allFinite(geo.normal) && Vec.allFinite(geo.hessian))) {
+            return "surface " + surface.name() + " returned normal " + java.util.Arrays.toString(geo.normal)
+                + " and distance Hessian " + java.util.Arrays.toString(geo.hessian) + " at centre "
+                + java.util.Arrays.toString(c) + " m";
+        }
+        if (loaded && !(Vec.allFinite(fApp) && Vec.allFinite(tApp))) {
+            return "the applied load returned force " + java.util.Arrays.toString(fApp) + " N and torque "
+                + java.util.Arrays.toString(tApp) + " N·m";
+        }
+        if (phase != Phase.FLIGHT && !(Vec.allFinite(access.torque(ctx)) && Vec.allFinite(access.lossRate(ctx)))) {
+            return "contact law " + law.name() + " added couple " + java.util.Arrays.toString(access.torque(ctx))
+                + " N·m with loss rates " + java.util.Arrays.toString(access.lossRate(ctx)) + " W";
+        }
+        if (phase != Phase.FLIGHT && !Double.isFinite(normalForce)) {
+            return "the normal force F_n = m(-v.Hv - n.g) - n.F_app is " + normalForce + " N (mass " + m
+                + " kg, radius " + r + " m, speed " + norm(vel) + " m/s): the numbers exceed the range of double";
+        }
+        return "the numbers of the run (speed " + norm(vel) + " m/s, spin " + norm(w) + " rad/s, normal force "
+            + normalForce + " N, contact couple " + (phase == Phase.FLIGHT ? 0.0 : norm(access.torque(ctx)))
+            + " N·m, mass " + m + " kg, radius " + r + " m) exceed the range of double";
+    }
+
+    /** A centre that is not finite (an integrator stage whose numbers overflowed), for the failure. */
+    static RunFailure nonFiniteCentre(double t, double[] centre) {
+        return new RunFailure("the centre reached " + java.util.Arrays.toString(centre) + " m at t = " + t
+            + " s: the numbers of the run (its speeds, spins, forces or couples) exceed the range of double");
+    }
+
+    /**
+     * A contact law's force, impulse or couple bound that is NaN or negative (sliding friction: or
+     * infinite), which would let friction drive the motion it opposes.
+     */
+    RunFailure badBound(String what, double value, String unit) {
+        if (!Double.isFinite(ctx.normalForce())) {
+            // the law was handed a broken normal force: name where that came from
+            return new RunFailure(diagnose());
+        }
+        boolean impulse = ctx.isImpulse();
+        return new RunFailure("contact law " + law.name() + " returned " + what + " " + value + " " + unit
+            + " at normal " + (impulse ? "impulse " : "force ") + ctx.normalForce() + (impulse ? " N·s" : " N")
+            + "; it must be a number >= 0" + (what.startsWith("sliding") ? " and finite" : ""));
     }
 
     /**
@@ -488,7 +572,11 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         friction[2] = fz;
         normalForce = fn;
         neededTangential = Math.sqrt(fx * fx + fy * fy + fz * fz);
-        grip = law.gripLimit(ctx);
+        double gl = law.gripLimit(ctx);
+        if (!(gl >= 0)) {
+            throw badBound("grip limit", gl, "N");
+        }
+        grip = gl;
         slipSpeed = 0;
         if (couples) {
             double[] lr = access.lossRate(ctx);
@@ -548,6 +636,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         }
         access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, w, false);
         double f = law.slidingFriction(ctx);
+        if (!(f >= 0 && f < Double.POSITIVE_INFINITY)) {
+            throw badBound("sliding friction", f, "N");
+        }
         law.addCouples(ctx);
         double[] ct = access.torque(ctx);
         for (int i = 0; i < 3; i++) {
@@ -580,6 +671,63 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         neededTangential = 0;
         grip = Double.NaN;
         slipSpeed = 0;
+        if (compliance != null) {
+            compliantForces(t);
+        }
+    }
+
+    /**
+     * The force of a compliant contact in flight ({@link Compliance}): with the approach
+     * {@code δ = r − d > 0} on the patch, the normal force {@code F_n = K δ^{3/2}(1 + χ δ̇/v₀)} (clamped at
+     * zero; {@code K} from the wall's principal curvatures at the foot point, {@code δ̇ = −n·v}, {@code v₀} the
+     * normal speed at which this contact began), the law's friction {@code f(F_n)} against the slip of the
+     * contact point {@code s = P(v − r ω × n)}, regularised below the slip speed {@code ε_c}:
+     * {@code F_t = −f s / max(|s|, ε_c)} (viscous below {@code ε_c}, Coulomb above), and the law's couples. The
+     * forces act at {@code c − r n} (the approach, a few micrometres, is neglected in the lever arm). The
+     * damping power {@code (F_n − K δ^{3/2}) δ̇} is booked as contact damping; the elastic part is stored in
+     * the contact and counted in the energy ({@link Model#energy}).
+     */
+    private void compliantForces(double t) {
+        surface.query(t, c, geo);
+        double delta = r - geo.distance;
+        if (!(delta > 0) || geo.patchMargin < 0) {
+            return;
+        }
+        pressing = true;
+        double[] n = geo.normal;
+        // the integrator's trial stages of a long flight step may land deep in the wall and very fast: hold
+        // the law at an approach of one radius and an approach rate of ten times the impact speed there (no
+        // accepted state comes near either; without the hold such a trial stage could overflow)
+        delta = Math.min(delta, r);
+        double rate = Math.min(-dot(vel, n), 10 * touchSpeed);
+        double kh = compliance.stiffness(r, geo.curvature1, geo.curvature2);
+        double elastic = kh * delta * Math.sqrt(delta);
+        double fn = compliance.force(kh, delta, rate, touchSpeed);
+        ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
+        double sp = norm(slip);
+        access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, w, false);
+        double f = fn > 0 ? law.slidingFriction(ctx) : 0.0;
+        double visc = f / Math.max(sp, compliantSlipSpeed);
+        for (int i = 0; i < 3; i++) {
+            friction[i] = -visc * slip[i];
+            force[i] = fn * n[i] + friction[i];
+        }
+        if (couples && fn > 0) {
+            law.addCouples(ctx);
+            double[] ct = access.torque(ctx);
+            for (int i = 0; i < 3; i++) {
+                tau[i] += ct[i];
+            }
+            double[] lr = access.lossRate(ctx);
+            lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+        }
+        normalForce = fn;
+        neededTangential = visc * sp;
+        slipSpeed = sp;
+        lossSlide = visc * sp * sp;
+        lossDamp = (fn - elastic) * rate;
     }
 
     /**
@@ -614,7 +762,11 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         zero(hv);
         access.set(ctx, ball, geo, fn, Phase.ROLLING, slip, hv, false);
         double scaleF = slack * m * Math.max(norm(g), 1e-300) + slack * norm(fApp);
-        if (norm(f) > law.gripLimit(ctx) + scaleF) {
+        double gl = law.gripLimit(ctx);
+        if (!(gl >= 0)) {
+            throw badBound("grip limit", gl, "N");
+        }
+        if (norm(f) > gl + scaleF) {
             return false;
         }
         cross(n, f, tau);
@@ -624,7 +776,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double tn = dot(tau, n);
         double tt = Math.sqrt(Math.max(0.0, dot(tau, tau) - tn * tn));
         double scaleT = scaleF * r + slack * norm(tApp);
-        return tt <= law.rollingHoldLimit(ctx) + scaleT && Math.abs(tn) <= law.pivotHoldLimit(ctx) + scaleT;
+        double holdRoll = law.rollingHoldLimit(ctx);
+        double holdPivot = law.pivotHoldLimit(ctx);
+        if (!(holdRoll >= 0)) {
+            throw badBound("rolling hold limit", holdRoll, "N·m");
+        }
+        if (!(holdPivot >= 0)) {
+            throw badBound("pivoting hold limit", holdPivot, "N·m");
+        }
+        return tt <= holdRoll + scaleT && Math.abs(tn) <= holdPivot + scaleT;
     }
 
     /** Thrown when the evaluation budget is used up. */
@@ -633,15 +793,6 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
 
         BudgetExhausted() {
             super("evaluation budget exhausted", null, false, false);
-        }
-    }
-
-    /** Thrown when a derivative is not finite. */
-    static final class NumericalFailure extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        NumericalFailure(String message) {
-            super(message, null, false, false);
         }
     }
 }

@@ -20,6 +20,7 @@ import org.trundle.core.RunEvent;
 import org.trundle.core.RunObserver;
 import org.trundle.core.RunResult;
 import org.trundle.core.SimulationException;
+import org.trundle.core.SimulationInterruptedException;
 import org.trundle.core.SurfaceDomainException;
 
 /**
@@ -52,7 +53,55 @@ public final class Engine {
      * @throws SimulationException when the integration fails numerically
      */
     public static RunResult run(Model model, BallState start, double duration, RunObserver observer) {
-        return new Engine(model, observer).run(start, duration);
+        Engine engine;
+        try {
+            engine = new Engine(model, observer);
+        } catch (RuntimeException e) {
+            // user code asked while setting up (restitution, couples, scratch)
+            throw new SimulationException("run failed before its start: " + e, start, e);
+        }
+        try {
+            return engine.run(start, duration);
+        } catch (RuntimeException e) {
+            throw engine.failure(e, start);
+        }
+    }
+
+    /**
+     * The exception boundary of a run: every exception that leaves it is the engine's own
+     * rejection of the start ({@link IllegalArgumentException}) or a {@link SimulationException}
+     * with the last good state; a failure of the engine's own checks ({@link RunFailure}) gives its
+     * message, anything else (user code, the integrator) becomes the cause.
+     */
+    private RuntimeException failure(RuntimeException e, BallState start) {
+        if (e == run.rejection) {
+            return e;
+        }
+        BallState last = run.lastGoodBallState(start);
+        String at = "run failed at t = " + last.time() + " s: ";
+        if (e instanceof Interrupted) {
+            return new SimulationInterruptedException("run interrupted at t = " + last.time() + " s", last);
+        } else if (e instanceof RunFailure) {
+            return new SimulationException(at + e.getMessage(), last, null);
+        } else if (e instanceof MathRuntimeException) {
+            return new SimulationException(at + "the integrator failed: " + e.getMessage(), last, e);
+        } else if (e instanceof Dynamics.BudgetExhausted || e instanceof Segment.ProjectionRestart) {
+            return new SimulationException(at + "internal signal escaped: " + e.getMessage(), last, null);
+        }
+        return new SimulationException(at + e, last, e);
+    }
+
+    /**
+     * The shortest interval the integrator accepts between two times (Hipparchus refuses one below
+     * 1000 units in the last place of the larger): a run whose remaining time is below it has
+     * reached its end.
+     *
+     * @param t0 one time (s)
+     * @param t1 the other (s)
+     * @return the shortest interval (s)
+     */
+    public static double shortestInterval(double t0, double t1) {
+        return 1000 * Math.ulp(Math.max(Math.abs(t0), Math.abs(t1)));
     }
 
     private static String budgetMessage(long max) {
@@ -65,13 +114,14 @@ public final class Engine {
         long maxEvaluations = run.set.maxEvaluations();
         double gn = Vec.norm(run.g);
         double eScale = setScales(start, duration, gn);
-        dyn.budget = maxEvaluations;
 
         Phase phase0;
         try {
+            // the start's checks are not budgeted (they count): the first turn of the loop stops a
+            // run whose budget they used up
             phase0 = transitions.startPhase(start.phase());
         } catch (SurfaceDomainException e) {
-            throw new IllegalArgumentException("start state is not valid on this surface: " + e.getMessage(), e);
+            throw run.reject("start state is not valid on this surface: " + e.getMessage(), e);
         }
         run.setPhase(phase0);
         BallState s0 = run.toState(run.t, run.y, phase0);
@@ -89,16 +139,18 @@ public final class Engine {
             run.observer.event(e);
         }
 
+        dyn.budget = maxEvaluations;
         EndReason reason = null;
         String message = "";
         try {
             while (reason == null) {
+                Interrupted.check();
                 if (run.events.size() >= run.set.maxEvents()) {
                     reason = EndReason.BUDGET;
                     message = "event budget of " + run.set.maxEvents() + " events exhausted";
                     break;
                 }
-                if (run.t >= run.endTime) {
+                if (run.endTime - run.t < shortestInterval(run.t, run.endTime)) {
                     reason = EndReason.DURATION;
                     break;
                 }
@@ -137,8 +189,6 @@ public final class Engine {
                     message = e.getMessage();
                     run.restoreLastGood();
                     break;
-                } catch (Dynamics.NumericalFailure | MathRuntimeException e) {
-                    throw new SimulationException("run failed: " + e.getMessage(), run.lastGoodBallState(), e);
                 }
                 run.t = end.getTime();
                 run.y = run.snapshots.fullState(end);
@@ -169,6 +219,11 @@ public final class Engine {
             reason = EndReason.BUDGET;
             message = budgetMessage(maxEvaluations);
             run.restoreLastGood();
+        } catch (SurfaceDomainException e) {
+            // outside the integrator: the rest test, a projection or a start-of-segment check
+            reason = EndReason.GEOMETRY;
+            message = e.getMessage();
+            run.restoreLastGood();
         }
         return close(reason, message, e0, gn, eScale);
     }
@@ -189,6 +244,8 @@ public final class Engine {
         run.impactSlack = 1e-9 * r;
         run.restSpeed = run.set.restSpeedFraction() * run.speedScale;
         run.dyn.stickEps = run.stickEps;
+        run.dyn.compliantSlipSpeed = run.settleSpeed;
+        run.dyn.touchSpeed = run.settleSpeed;
         run.model.access().setSpins(run.slot.ctx, run.set.smoothingSpinFraction() * run.speedScale / r,
             run.stickEps / r);
         double tol = run.set.tolerance();
@@ -214,7 +271,12 @@ public final class Engine {
         return eScale;
     }
 
-    /** The closing bookkeeping: end state, last sample, energy budget, result. */
+    /**
+     * The closing bookkeeping: end state, last sample, energy budget, result. After a geometry
+     * stop the surface may refuse even the last good state (a Newton-based surface seeded from the
+     * failed query): the end state then keeps the velocity stored with it and the closing sample
+     * is left out. A result holding a number that is not finite is not returned.
+     */
     private RunResult close(EndReason reason, String message, double e0, double gn, double eScale) {
         Run run = this.run;
         // the closing bookkeeping evaluates the right-hand side a few more times: lift the budget
@@ -222,8 +284,16 @@ public final class Engine {
         run.dyn.budget = Long.MAX_VALUE;
         run.closeSpan();
         Phase phase = run.phase();
-        BallState endState = run.toState(run.t, run.y, phase);
-        run.emitSample(run.t, run.y, phase, true);
+        BallState endState;
+        try {
+            endState = run.toState(run.t, run.y, phase);
+            run.emitSample(run.t, run.y, phase, true);
+        } catch (SurfaceDomainException e) {
+            if (reason != EndReason.GEOMETRY) {
+                throw e;
+            }
+            endState = run.storedState(run.t, run.y, phase);
+        }
         double ke = endState.kineticEnergy(run.ball);
         run.maxKinetic = Math.max(run.maxKinetic, ke);
         double e1 = run.model.energy(endState);
@@ -234,9 +304,14 @@ public final class Engine {
             y[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.OTHER.ordinal()],
-            run.impactLoss, y[APPLIED], scale);
+            run.impactLoss, y[APPLIED], scale, y[StateMapper.DAMPING]);
         RunResult result = new RunResult(reason, message, endState, run.events, run.spans, budget,
             run.maxDistanceError, run.maxNormalForce, run.dyn.evaluations, run.steps);
+        String bad = Results.nonFinite(result);
+        if (bad != null) {
+            throw new RunFailure("the result holds a number that is not finite (" + bad
+                + "): the run's numbers exceed the range of double");
+        }
         run.observer.finish(result);
         return result;
     }

@@ -14,7 +14,9 @@ import org.trundle.core.Phase;
  * approaches, on the patch (a ball that left a tube through its end does not hit the wall's
  * continuation). The function is offset by a slack of {@code 1e-9 r} so that it is strictly
  * positive when a flight starts on the surface; the reaction rewinds to {@code d = r} and applies
- * the impact impulses (design notes §6).
+ * the impact impulses (design notes §6). With a compliant contact the event only marks the start of the
+ * contact (no rewind, no impulse): it records the normal speed that sets the contact's damping, and the
+ * rule rests until {@link ReleaseRule} sees the ball leave.
  */
 final class ImpactRule extends SwitchRule {
     ImpactRule(Run run) {
@@ -28,7 +30,7 @@ final class ImpactRule extends SwitchRule {
 
     @Override
     boolean watches(Phase phase) {
-        return phase == Phase.FLIGHT;
+        return phase == Phase.FLIGHT && !run.touching;
     }
 
     @Override
@@ -47,11 +49,22 @@ final class ImpactRule extends SwitchRule {
 
     @Override
     void prepare(Transitions x) {
-        x.rewindToContact();
+        if (run.compliance == null) {
+            x.rewindToContact();
+        }
     }
 
     @Override
     EndReason react(Transitions x, BallState before) {
+        if (run.compliance != null) {
+            // a compliant contact begins: its damping is set from the normal speed now
+            run.surface.query(run.t, run.centreOf(run.y), run.dyn.geo);
+            double vn = -ContactKinematics.normalPart(run.y, V, run.dyn.geo.normal);
+            run.dyn.touchSpeed = Math.max(vn, run.settleSpeed);
+            run.touching = true;
+            run.log(EventKind.IMPACT, before, null, Vector3D.ZERO);
+            return null;
+        }
         Vector3D j = x.impact();
         run.log(EventKind.IMPACT, before, null, j);
         return null;

@@ -12,6 +12,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
+import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EventKind;
 import org.trundle.core.Phase;
@@ -45,6 +46,10 @@ final class Run {
     final ContactLaw law;
     final Dynamics dyn;
     final Snapshots snapshots;
+    /** The patch's compliant contact, or null for the rigid contact. */
+    final Compliance compliance;
+    /** With a compliant contact: whether the ball is in a contact that began with an impact event. */
+    boolean touching;
     private final double[] centreWork = new double[3];
 
     // scales of the run (set at the start)
@@ -59,6 +64,8 @@ final class Run {
 
     /** The message of a typed stop a rule reacted with (geometry). */
     String stopMessage = "";
+    /** The engine's own rejection of the start, the one {@link IllegalArgumentException} a run may throw. */
+    IllegalArgumentException rejection;
 
     // where the run is
     double t;
@@ -87,6 +94,8 @@ final class Run {
     double[] lastGoodY;
     /** The last accepted step end, kept as the integrator's state until its full form is needed. */
     ODEStateAndDerivative lastGoodState;
+    /** The normal at {@link #lastGoodState} (its rolling velocity {@code r ω × n} needs it). */
+    final double[] lastGoodNormal = new double[3];
     double lastGoodT;
     Phase lastGoodPhase;
 
@@ -105,6 +114,7 @@ final class Run {
         this.surface = slot.surface;
         this.law = slot.law;
         this.dyn = new Dynamics(model, slot);
+        this.compliance = model.compliance();
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
         this.dyn.stageObserver = snapshots::stageAtStepEnd;
@@ -120,10 +130,17 @@ final class Run {
         contacts.setPhase(p);
     }
 
-    /** The full state of the last accepted step end (expanded on first use, in the segment's layout). */
+    /**
+     * The full state of the last accepted step end (expanded on first use, in the segment's layout,
+     * with the normal kept at that step end: it evaluates nothing, so it cannot fail).
+     */
     double[] lastGoodY() {
         if (lastGoodY == null) {
-            lastGoodY = snapshots.fullState(lastGoodState);
+            double[] out = dyn.expand(lastGoodState.getPrimaryState(), new double[StateMapper.DIM]);
+            if (dyn.derivedVelocity()) {
+                ContactKinematics.noSlipVelocity(r, out[W], out[W + 1], out[W + 2], lastGoodNormal, out, V);
+            }
+            lastGoodY = out;
             lastGoodState = null;
         }
         return lastGoodY;
@@ -135,9 +152,41 @@ final class Run {
         setPhase(lastGoodPhase);
     }
 
-    BallState lastGoodBallState() {
-        dyn.budget = Long.MAX_VALUE;
-        return toState(lastGoodT, lastGoodY(), lastGoodPhase);
+    /**
+     * The last good state for a failure, built without evaluating anything (its velocity slot
+     * holds the rolling velocity already).
+     *
+     * @param start the run's start, for a failure before the start was validated
+     * @return the state
+     */
+    BallState lastGoodBallState(BallState start) {
+        if (lastGoodPhase == null) {
+            return start;
+        }
+        try {
+            return storedState(lastGoodT, lastGoodY(), lastGoodPhase);
+        } catch (IllegalArgumentException e) {
+            // a state past the range of double (BallState refuses it): the start is the last good one
+            return start;
+        }
+    }
+
+    /** A domain state with the velocity stored in the array (no evaluation). */
+    BallState storedState(double ts, double[] ys, Phase p) {
+        return StateMapper.toState(ts, ys, p, ys[V], ys[V + 1], ys[V + 2]);
+    }
+
+    /**
+     * Records and returns the engine's own rejection of the start (so that the exception boundary
+     * lets it through, where an {@link IllegalArgumentException} from user code is wrapped).
+     */
+    IllegalArgumentException reject(String message) {
+        return reject(message, null);
+    }
+
+    IllegalArgumentException reject(String message, Throwable cause) {
+        rejection = new IllegalArgumentException(message, cause);
+        return rejection;
     }
 
     /**
@@ -180,7 +229,7 @@ final class Run {
     }
 
     void trackForce(double ts, double[] ys, Phase p) {
-        if (p.inContact()) {
+        if (p.inContact() || compliance != null) {
             Phase keep = dyn.phase;
             dyn.phase = p;
             dyn.evaluate(ts, ys);
@@ -209,7 +258,7 @@ final class Run {
         Vector3D fr = new Vector3D(dyn.friction[0], dyn.friction[1], dyn.friction[2]);
         Vector3D cp = null;
         Vector3D onBall = null;
-        boolean touching = p != Phase.FLIGHT;
+        boolean touching = p != Phase.FLIGHT || dyn.pressing;
         if (touching) {
             double[] n = dyn.geo.normal;
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);

@@ -31,7 +31,7 @@ final class Segment {
         this.transitions = transitions;
         this.rules = new SwitchRule[] {
             new LiftOffRule(run), new RestRule(run), new FitRule(run), new ExitRule(run),
-            new SlipRule(run), new StickRule(run), new ImpactRule(run)};
+            new SlipRule(run), new StickRule(run), new ImpactRule(run), new ReleaseRule(run)};
     }
 
     /**
@@ -48,7 +48,9 @@ final class Segment {
         dyn.phase = phase;
         int[] layout = layouts[phase.ordinal()];
         if (layout == null) {
-            layout = StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE);
+            // a compliant contact integrates flight with every loss (its friction, couples and damping)
+            layout = run.compliance != null ? StateMapper.identity()
+                : StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE);
             layouts[phase.ordinal()] = layout;
         }
         double[] abs = new double[layout.length];
@@ -127,6 +129,7 @@ final class Segment {
                         break;
                     }
                     run.sampleIndex++;
+                    Interrupted.check();
                     ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
                     run.emitSample(ts, run.snapshots.fullState(si), phase, false);
                 }
@@ -153,8 +156,17 @@ final class Segment {
             run.extent = Math.max(run.extent, Math.sqrt(dx * dx + dy * dy + dz * dz));
             run.lastGoodY = yc;
             run.lastGoodState = yc == null ? cur : null;
+            if (yc == null) {
+                double[] sn = s.normal;
+                run.lastGoodNormal[0] = sn[0];
+                run.lastGoodNormal[1] = sn[1];
+                run.lastGoodNormal[2] = sn[2];
+            }
             run.lastGoodT = tc;
             run.lastGoodPhase = phase;
+            if (phase == Phase.FLIGHT && run.compliance != null) {
+                run.trackForce(tc, yc != null ? yc : run.snapshots.fullState(cur), phase);
+            }
             if (phase.inContact()) {
                 trackResiduals(run.snapshots.at(cur));
                 // a whole step (no event cut it short) whose end drifted past the thresholds: leave
@@ -165,6 +177,7 @@ final class Segment {
                     throw ProjectionRestart.INSTANCE;
                 }
             }
+            Interrupted.check();
         }
     }
 }

@@ -7,6 +7,7 @@ import static org.trundle.core.engine.StateMapper.W;
 import java.util.Arrays;
 
 import org.hipparchus.ode.ODEStateAndDerivative;
+import org.trundle.core.ContactGeometry;
 import org.trundle.core.Phase;
 
 /**
@@ -87,6 +88,8 @@ final class Snapshots {
                 return i;
             }
         }
+        // a new state: an event check, or a step end; a run in a long flight makes many of these per step
+        Interrupted.check();
         int slot = nextSlot(ts, ys, phase);
         evaluate(ts, dyn.expand(ys, eventFull), values[slot], phase);
         return slot;
@@ -121,7 +124,11 @@ final class Snapshots {
         if (phase.inContact()) {
             dyn.evaluate(ts, ys);
         } else {
-            run.surface.query(ts, run.centreOf(ys), dyn.geo);
+            double[] c = run.centreOf(ys);
+            if (!Double.isFinite(c[0] + c[1] + c[2])) {
+                throw Dynamics.nonFiniteCentre(ts, c);
+            }
+            run.surface.query(ts, c, dyn.geo);
         }
         fill(ys, dyn.lastDerivative(), v, phase);
     }
@@ -147,6 +154,11 @@ final class Snapshots {
         v.hessianNorm = Math.sqrt(hn);
         v.fitMargin = 1.0 - r * dyn.geo.curvature1;
         double[] n = dyn.geo.normal;
+        double n2 = n[0] * n[0] + n[1] * n[1] + n[2] * n[2];
+        if (!(Math.abs(n2 - 1) <= UNIT_NORMAL && Double.isFinite(v.distance + v.hessianNorm)
+            && !Double.isNaN(v.patchMargin) && !Double.isNaN(v.fitMargin))) {
+            throw brokenGeometry(ys, n2);
+        }
         v.normal[0] = n[0];
         v.normal[1] = n[1];
         v.normal[2] = n[2];
@@ -155,6 +167,38 @@ final class Snapshots {
         double vy = contact ? dyn.vel[1] : ys[V + 1];
         double vz = contact ? dyn.vel[2] : ys[V + 2];
         v.kinetic = run.kinetic(vx, vy, vz, ys);
+    }
+
+    /**
+     * How far from 1 the squared length of a surface's normal may be: far above the rounding of any
+     * normalisation (1e-15), far below an error that matters (the rolling centre moves at
+     * {@code r ω × n}, so a normal off unit length by ε changes the speed by ε).
+     */
+    static final double UNIT_NORMAL = 1e-6;
+
+    /** A surface answer that breaks the {@code Surface} contract, described for the failure. */
+    private RunFailure brokenGeometry(double[] ys, double n2) {
+        ContactGeometry g = dyn.geo;
+        StringBuilder what = new StringBuilder();
+        if (!(Math.abs(n2 - 1) <= UNIT_NORMAL)) {
+            what.append(", normal ").append(Arrays.toString(g.normal)).append(" of length ").append(Math.sqrt(n2))
+                .append(" (must be a unit vector)");
+        }
+        if (!Double.isFinite(g.distance)) {
+            what.append(", distance ").append(g.distance).append(" m (must be finite)");
+        }
+        if (!Vec.allFinite(g.hessian)) {
+            what.append(", distance Hessian ").append(Arrays.toString(g.hessian)).append(" 1/m (must be finite)");
+        }
+        if (Double.isNaN(g.curvature1)) {
+            what.append(", curvature NaN");
+        }
+        if (Double.isNaN(g.patchMargin)) {
+            what.append(", patch margin NaN");
+        }
+        return new RunFailure("surface " + run.surface.name() + " returned a broken geometry at centre ("
+            + ys[0] + ", " + ys[1] + ", " + ys[2] + ") m: " + (what.length() > 0 ? what.substring(2)
+            : "a distance Hessian too large for its norm to be a finite number"));
     }
 
     /**

@@ -10,9 +10,10 @@ import org.trundle.core.Phase;
  * The one mapping between the domain state {@link BallState} and the solver's arrays, and the
  * per-phase integrated layouts.
  *
- * <p>Full layout ({@link #DIM} = 19): centre c (m) [0,3), velocity v (m/s) [3,6), quaternion q
+ * <p>Full layout ({@link #DIM} = 20): centre c (m) [0,3), velocity v (m/s) [3,6), quaternion q
  * [6,10), spin ω (rad/s) [10,13), dissipated work by {@link LossKind} (J) [13,17), applied-load work
- * (J) [17], centre path length (m) [18].
+ * (J) [17], centre path length (m) [18], work of a compliant contact's damping (J) [19] (booked as
+ * {@link LossKind#CONTACT_DAMPING}).
  *
  * <p>Quaternion convention: the array holds the Hamilton quaternion, scalar first, body to world
  * ({@code x_world = q x_body q*}, {@code q̇ = ½ (0, ω) ⊗ q}); Hipparchus' {@link Rotation} stores the
@@ -35,8 +36,10 @@ public final class StateMapper {
     public static final int APPLIED = 17;
     /** Index of the centre path length. */
     public static final int PATH = 18;
+    /** Index of the compliant contact's damping work ({@link LossKind#CONTACT_DAMPING}). */
+    public static final int DAMPING = 19;
     /** Length of the full layout. */
-    public static final int DIM = 19;
+    public static final int DIM = 20;
 
     private static final int[] IDENTITY = java.util.stream.IntStream.range(0, DIM).toArray();
 
@@ -118,6 +121,26 @@ public final class StateMapper {
         }
         out[n++] = PATH;
         return n == DIM ? IDENTITY : java.util.Arrays.copyOf(out, n);
+    }
+
+    /**
+     * @param i a full-layout index
+     * @return the component's name for messages ("velocity y", "loss rolling resistance", …)
+     */
+    static String componentName(int i) {
+        String[] axis = {"x", "y", "z"};
+        if (i < V) {
+            return "centre " + axis[i - C];
+        } else if (i < Q) {
+            return "velocity " + axis[i - V];
+        } else if (i < W) {
+            return "quaternion q" + (i - Q);
+        } else if (i < LOSS) {
+            return "spin " + axis[i - W];
+        } else if (i < APPLIED) {
+            return "loss " + LossKind.values()[i - LOSS].name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
+        }
+        return i == APPLIED ? "applied work" : "path length";
     }
 
     /** @return the full layout (identity map) */

@@ -53,29 +53,40 @@ final class Transitions {
         double gap = dyn.geo.distance - r;
         double tolLen = run.set.contactTolerance() * r;
         String name = run.surface.name();
-        if (requested == Phase.FLIGHT) {
+        if (run.compliance != null) {
+            // a compliant contact is a force in flight: any start integrates as flight; a start pressing the
+            // wall is a contact already under way (its damping set from the settle speed)
             if (gap < -tolLen) {
                 throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
+                    name, dyn.geo.distance, r));
+            }
+            run.touching = gap < 0 && dyn.geo.patchMargin >= 0;
+            return Phase.FLIGHT;
+        }
+        if (requested == Phase.FLIGHT) {
+            if (gap < -tolLen) {
+                throw run.reject(String.format(Locale.ROOT,
                     "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
                     name, dyn.geo.distance, r));
             }
             return Phase.FLIGHT;
         }
         if (Math.abs(gap) > tolLen) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
+            throw run.reject(String.format(Locale.ROOT,
                 "start centre is %s m from surface %s, but a %s start needs distance r = %s m (tolerance %s m);"
                     + " use a flight start for a ball off the surface",
                 dyn.geo.distance, name, requested.label(), r, tolLen));
         }
         if (dyn.geo.patchMargin < 0) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
+            throw run.reject(String.format(Locale.ROOT,
                 "start contact point lies outside the patch of surface %s by %s m (edge %s)",
                 name, -dyn.geo.patchMargin, run.surface.edgeName(dyn.geo.edge)));
         }
         double vn = ContactKinematics.normalPart(y, V, dyn.geo.normal);
         double tolSpeed = run.set.contactTolerance() * run.speedScale;
         if (Math.abs(vn) > tolSpeed) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
+            throw run.reject(String.format(Locale.ROOT,
                 "start velocity has a normal component %s m/s on surface %s (tolerance %s m/s);"
                     + " a contact start must move tangentially",
                 vn, name, tolSpeed));
@@ -85,7 +96,7 @@ final class Transitions {
         double slip = Vec.norm(s);
         if (requested == Phase.ROLLING || requested == Phase.REST) {
             if (slip > tolSpeed) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                throw run.reject(String.format(Locale.ROOT,
                     "start velocity violates the no-slip condition v = r w x n by %s m/s (tolerance %s m/s);"
                         + " build a rolling start with Simulation.rollingStart(centre, velocity)",
                     slip, tolSpeed));
@@ -220,9 +231,15 @@ final class Transitions {
         double[] w = {y[W], y[W + 1], y[W + 2]};
         run.model.access().set(dyn.ctx, run.ball, dyn.geo, jn, Phase.SLIDING, s, w, true);
         double gripJ = run.law.gripLimit(dyn.ctx);
+        if (!(gripJ >= 0)) {
+            throw dyn.badBound("grip limit", gripJ, "N·s");
+        }
         double jtn = Vec.norm(jt);
         if (jtn > gripJ) {
             double slideJ = run.law.slidingFriction(dyn.ctx);
+            if (!(slideJ >= 0 && slideJ < Double.POSITIVE_INFINITY)) {
+                throw dyn.badBound("sliding friction", slideJ, "N·s");
+            }
             double sp = Vec.norm(s);
             for (int i = 0; i < 3; i++) {
                 jt[i] = sp > 0 ? -slideJ * s[i] / sp : 0.0;

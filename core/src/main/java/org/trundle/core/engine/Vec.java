@@ -40,4 +40,14 @@ final class Vec {
         out[1] = h[3] * v[0] + h[4] * v[1] + h[5] * v[2];
         out[2] = h[6] * v[0] + h[7] * v[1] + h[8] * v[2];
     }
+
+    /** Whether every element of {@code a} is finite. */
+    static boolean allFinite(double[] a) {
+        for (double x : a) {
+            if (!Double.isFinite(x)) {
+                return false;
+            }
+        }
+        return true;
+    }
 }

@@ -8,6 +8,7 @@ import java.util.function.Consumer;
 import org.trundle.core.RunObserver;
 import org.trundle.core.RunResult;
 import org.trundle.core.Sample;
+import org.trundle.core.SimulationException;
 
 /**
  * Runs every point of a {@link ParameterSpace} through a {@link RunFactory} on a number of worker
@@ -178,8 +179,9 @@ public final class Sweep {
         try {
             RunResult r = spec.simulation().run(spec.start(), spec.duration(), watch);
             return SweepRun.succeeded(p, r);
-        } catch (Abandoned e) {
-            return null;
+        } catch (SimulationException e) {
+            // the run wraps what its observer throws, the abandonment too
+            return e.getCause() instanceof Abandoned ? null : SweepRun.failed(p, SweepRun.reasonOf(e));
         } catch (RuntimeException e) {
             return SweepRun.failed(p, SweepRun.reasonOf(e));
         }

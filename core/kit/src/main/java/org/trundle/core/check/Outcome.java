@@ -8,11 +8,13 @@ public enum Outcome {
     VALID,
     /** The library refused the input with an {@link IllegalArgumentException} carrying a message. */
     REJECTED,
-    /** The run stopped in a typed way with a message: end reason budget or geometry, a
-     *  {@link org.trundle.core.SimulationException} or {@link org.trundle.core.SurfaceDomainException}. */
+    /** The run stopped in a typed way with a message: end reason budget or geometry, or a
+     *  {@link org.trundle.core.SimulationException} with a finite last good state. */
     TYPED_STOP,
-    /** Anything else: a non-finite number in a result, a typed stop without a message, an
-     *  exception of another type, or an exception without a message. */
+    /** Anything else: a non-finite number in a result, a typed stop without a message or without a
+     *  finite last good state, an exception of another type (a
+     *  {@link org.trundle.core.SurfaceDomainException} out of a run among them), or an exception
+     *  without a message. */
     FAILURE;
 
     /** @return the lower-case name */

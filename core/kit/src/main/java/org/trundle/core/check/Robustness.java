@@ -18,8 +18,10 @@ import org.trundle.core.SurfaceDomainException;
 /**
  * The robustness probe: runs an attempt (building the inputs and running the solver, so that
  * rejected constructions count too) and classifies what happens as an {@link Outcome}. The rule:
- * a valid result, a clear rejection or a typed stop — never a NaN in a result, never an
- * unexplained exception. A hang is prevented by the attempt's own budget
+ * a valid result, a clear rejection or a typed stop (a {@link SimulationException} with a message
+ * and a finite last good state, or a result ending {@code budget} or {@code geometry} with a
+ * message) — never a NaN in a result, never an unexplained exception, never a
+ * {@link SurfaceDomainException} out of a run. A hang is prevented by the attempt's own budget
  * ({@link org.trundle.core.SolverSettings#withMaxEvaluations(long)}), which ends the run with
  * {@link org.trundle.core.EndReason#BUDGET}.
  */
@@ -41,9 +43,16 @@ public final class Robustness {
         } catch (IllegalArgumentException e) {
             return messageOf(e) == null ? new Probe(Outcome.FAILURE, description, "rejection without a message: " + e)
                 : new Probe(Outcome.REJECTED, description, e.getMessage());
-        } catch (SimulationException | SurfaceDomainException e) {
-            return messageOf(e) == null ? new Probe(Outcome.FAILURE, description, "typed stop without a message: " + e)
+        } catch (SimulationException e) {
+            if (messageOf(e) == null) {
+                return new Probe(Outcome.FAILURE, description, "typed stop without a message: " + e);
+            }
+            String bad = state("last good state", e.lastGoodState());
+            return bad != null ? new Probe(Outcome.FAILURE, description, "typed stop with a broken " + bad)
                 : new Probe(Outcome.TYPED_STOP, description, e.getClass().getSimpleName() + ": " + e.getMessage());
+        } catch (SurfaceDomainException e) {
+            // a run turns the surface's refusal into a geometry stop; the start's into a rejection
+            return new Probe(Outcome.FAILURE, description, "surface exception escaped the run: " + e.getMessage());
         } catch (RuntimeException | StackOverflowError e) {
             return new Probe(Outcome.FAILURE, description, "unexplained " + e + " at " + where(e));
         }

@@ -1,0 +1,72 @@
+package org.trundle.runner;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Path;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.trundle.scenario.ScenarioFiles;
+
+/**
+ * {@code contact.compliant}: a steel ball dropped on a compliant steel floor (invented check) bounces with
+ * impact and lift-off events, the damping's work is reported, and the budget closes; the key needs both
+ * materials and a restitution of at least 0.1.
+ */
+class CompliantScenarioTest {
+    static final String DROP = "{\n"
+        + "  \"description\": \"Invented check: a 10 mm steel ball dropped 5 cm onto a compliant steel floor\",\n"
+        + "  \"ball\": {\"radius\": 0.005, \"mass\": 0.0041,"
+        + " \"material\": {\"youngs_modulus\": 210e9, \"poisson_ratio\": 0.3}},\n"
+        + "  \"surface\": {\"type\": \"plane\", \"origin\": [0, 0, 0], \"normal\": [0, 0, 1],"
+        + " \"material\": {\"youngs_modulus\": 210e9, \"poisson_ratio\": 0.3}},\n"
+        + "  \"contact\": {\"law\": \"coulomb\", \"static_friction\": 0.3, \"kinetic_friction\": 0.3,"
+        + " \"restitution\": 0.8, \"compliant\": true},\n"
+        + "  \"start\": {\"position\": [0, 0, 0.055], \"velocity\": [0, 0, 0], \"spin\": [0, 0, 0]},\n"
+        + "  \"run\": {\"duration\": 0.2, \"sample_interval\": 0.01}\n"
+        + "}\n";
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void compliantFloorBouncesWithDampingBooked() throws IOException {
+        Path out = dir.resolve("drop");
+        Cli.Result r = Cli.run("run", Cli.write(dir, "drop.json", DROP).toString(), "--out", out.toString(), "--no-plot");
+        assertEquals(0, r.code(), r.err());
+        JsonNode s = ScenarioFiles.JSON.readTree(out.resolve("summary.json").toFile());
+        JsonNode ev = s.get("events");
+        assertEquals("impact", ev.get(0).get("kind").asText());
+        assertEquals("lift_off", ev.get(1).get("kind").asText());
+        // free fall through 5 cm (common practice): the contact begins at sqrt(2h/g)
+        assertEquals(Math.sqrt(2 * 0.05 / 9.81), ev.get(0).get("time").asDouble(), 1e-9);
+        double m = 0.0041;
+        double v1sq = 2 * 9.81 * 0.05;
+        // the damping takes about (1 - e^2) of the impact's kinetic energy (exact without gravity; gravity's
+        // impulse over the 30 microsecond contact changes it by far less than 1e-3)
+        assertEquals(0.5 * m * v1sq * (1 - 0.64), s.get("energy").get("contact_damping_loss").asDouble(),
+            1e-3 * 0.5 * m * v1sq);
+        assertTrue(s.get("energy").get("relative_residual").asDouble() < 1e-6);
+        // an elastic impact at 0.99 m/s peaks at K δ_m^{3/2} = 431 N (Johnson 1985, §11.4); the run's largest
+        // normal force, taken at step ends during the 30 µs contact, is of that size (the samples every 0.01 s
+        // miss the impact, so the wall loads of contacts.csv see only its event instants)
+        double peak = s.get("max_normal_force").asDouble();
+        assertTrue(peak > 200 && peak < 650, "largest normal force " + peak + " N");
+    }
+
+    @Test
+    void compliantNeedsMaterialsAndRestitution() {
+        String noMaterials = DROP.replace(", \"material\": {\"youngs_modulus\": 210e9, \"poisson_ratio\": 0.3}}", "}")
+            .replace(" \"material\": {\"youngs_modulus\": 210e9, \"poisson_ratio\": 0.3}}", "}");
+        Cli.Result r = Cli.run("run", Cli.write(dir, "a.json", noMaterials).toString(), "--out", dir.resolve("a").toString());
+        assertEquals(2, r.code(), r.out() + r.err());
+        assertTrue(r.err().contains("contact.compliant needs ball.material and surface.material"), r.err());
+        String low = DROP.replace("\"restitution\": 0.8", "\"restitution\": 0.05");
+        Cli.Result r2 = Cli.run("run", Cli.write(dir, "b.json", low).toString(), "--out", dir.resolve("b").toString());
+        assertEquals(2, r2.code(), r2.out() + r2.err());
+        assertTrue(r2.err().contains("contact.compliant needs contact.restitution of at least 0.1"), r2.err());
+    }
+}
