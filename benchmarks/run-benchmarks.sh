@@ -24,4 +24,6 @@ java -cp "$JAR" org.trundle.bench.ResultsReport "$OUT/jmh.json" "$OUT/work-preci
   "benchmarks/run-benchmarks.sh (JMH_OPTS=\"$JMH_OPTS\", LONG_RUN_STEPS=$LONG_RUN_STEPS)" "$START_LOAD" \
   > benchmarks/RESULTS.md
 { echo; echo "## Sweep"; echo; cat "$OUT/sweep.md"; } >> benchmarks/RESULTS.md
+# hand-measured figures (start-up with hyperfine, tolerance counts, profiles), kept across runs
+if [ -f "$OUT/round-two.md" ]; then { echo; cat "$OUT/round-two.md"; } >> benchmarks/RESULTS.md; fi
 echo "wrote benchmarks/RESULTS.md and $OUT/"

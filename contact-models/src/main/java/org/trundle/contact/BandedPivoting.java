@@ -23,9 +23,11 @@ import org.trundle.core.LossKind;
  * <p>The couple works only against the spin about the normal: the power it dissipates,
  * {@code −M·(ω − ω_surface) = min(c_v|s|, δ_p F_n)|s| ≥ 0}, is booked as
  * {@link LossKind#PIVOTING_RESISTANCE}. With {@code c_v} finite the law is single-valued and
- * needs no regularisation; the pure Coulomb form ({@code c_v = ∞}) is set-valued at {@code s = 0}
- * and, until the solver holds it with an exact stick event, is regularised with the solver's smoothing
- * spin {@code ω_s} ({@link ContactContext#smoothingSpin()}), that is {@code c_v = δ_p F_n / ω_s}.
+ * needs no regularisation; the pure Coulomb form ({@code c_v = ∞}) is set-valued at {@code s = 0}:
+ * while rolling the solver holds it with an exact pivoting stick ({@link #hasPivotStick()},
+ * {@link #pivotStickLimit}); away from the hold, and while sliding, it is regularised with the
+ * solver's smoothing spin {@code ω_s} ({@link ContactContext#smoothingSpin()}), that is
+ * {@code c_v = δ_p F_n / ω_s}.
  * A ball at rest is held while the couple needed about the normal is at most {@code δ_p F_n} (static
  * friction holds a twist of a contact at rest; the viscous band describes rolling contacts).
  *
@@ -125,7 +127,7 @@ public final class BandedPivoting implements ContactLaw {
         }
         double limit = length * fn;
         if (Double.isInfinite(damping)) {
-            // pure Coulomb: regularised with the solver's smoothing spin until the exact stick event
+            // pure Coulomb: regularised with the solver's smoothing spin away from the pivoting stick
             return -limit * s / Math.max(Math.abs(s), c.smoothingSpin());
         }
         double viscous = damping * Math.abs(s);
@@ -136,6 +138,17 @@ public final class BandedPivoting implements ContactLaw {
     @Override
     public boolean addsCouples() {
         return true;
+    }
+
+    /** @return true for the pure Coulomb law ({@code c_v = ∞}), whose couple is set-valued at zero spin */
+    @Override
+    public boolean hasPivotStick() {
+        return Double.isInfinite(damping);
+    }
+
+    @Override
+    public double pivotStickLimit(ContactContext c) {
+        return Double.isInfinite(damping) ? length * Math.max(c.normalForce(), 0.0) : 0.0;
     }
 
     @Override

@@ -15,18 +15,15 @@ import org.trundle.core.LossKind;
  * (K. L. Johnson, Contact Mechanics, 1985, §5.8): see {@link #hertzLength(double, double)} and
  * {@link HertzContact}.
  *
- * <p>Set-valued at zero spin: {@code sign(w)} is regularised as {@code w / max(|w|, ω_s)} with the
- * solver's smoothing spin {@link ContactContext#smoothingSpin()}, so the couple never reverses the
- * spin it opposes (inside the band the spin decays exponentially, at the rate
- * {@code δ_p F_n/(I ω_s)}). A ball at rest is held while the couple needed about the normal is at
- * most {@code δ_p F_n}.
- *
- * <p>Known limitation: the smoothing makes the couple viscous inside the band, so where the couple
- * needed to hold the spin about the normal falls within {@code δ_p F_n} while the ball keeps rolling
- * (a ball in a horizontal tube locking into a steady helix), the spin still drains at the rate set by
- * the smoothing parameter instead of locking: a numerical artefact, removed when the solver holds the
- * couple with an exact pivoting stick event. For a physical small-spin band use
- * {@link BandedPivoting} or {@link SpinCreepPivoting}.
+ * <p>Set-valued at zero spin ({@link #hasPivotStick()}): while rolling, the solver holds the spin
+ * about the normal at zero with an exact pivoting stick as long as the couple needed for that is
+ * within {@code δ_p F_n} ({@link #pivotStickLimit}), and releases it when not (a ball in a horizontal
+ * tube locks into a steady helix). Away from the hold, and while sliding, {@code sign(w)} is
+ * regularised as {@code w / max(|w|, ω_s)} with the solver's smoothing spin
+ * {@link ContactContext#smoothingSpin()}, so the couple never reverses the spin it opposes; the
+ * stick event fires before the band matters. A ball at rest is held while the couple needed about
+ * the normal is at most {@code δ_p F_n}. For a physical small-spin band use {@link BandedPivoting}
+ * or {@link SpinCreepPivoting}.
  *
  * <p>Immutable and thread-safe.
  */
@@ -73,6 +70,17 @@ public final class PivotingResistance implements ContactLaw {
     @Override
     public double pivotHoldLimit(ContactContext c) {
         return length * Math.max(c.normalForce(), 0.0);
+    }
+
+    /** @return true for a positive length: the couple is set-valued at zero spin about the normal */
+    @Override
+    public boolean hasPivotStick() {
+        return length > 0;
+    }
+
+    @Override
+    public double pivotStickLimit(ContactContext c) {
+        return pivotHoldLimit(c);
     }
 
     @Override

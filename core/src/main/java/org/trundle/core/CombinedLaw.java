@@ -55,6 +55,16 @@ final class CombinedLaw implements ContactLaw {
     }
 
     @Override
+    public boolean hasPivotStick() {
+        return a.hasPivotStick() || b.hasPivotStick();
+    }
+
+    @Override
+    public double pivotStickLimit(ContactContext c) {
+        return a.pivotStickLimit(c) + b.pivotStickLimit(c);
+    }
+
+    @Override
     public OptionalDouble restitution() {
         return restitution;
     }

@@ -86,6 +86,33 @@ public interface ContactLaw {
         return 0.0;
     }
 
+    /**
+     * Whether the law's couple about the normal is set-valued at zero relative normal spin
+     * {@code s = (ω − ω_surface)·n} while the ball rolls (a Coulomb pivoting couple
+     * {@code −δ_p F_n sgn(s)}). The solver then holds {@code s} at zero with an exact pivoting stick
+     * while the couple needed for that is within {@link #pivotStickLimit}, instead of relying on the
+     * regularisation of {@link ContactContext#smoothingSpin()}. Asked once per run; default {@code false}.
+     *
+     * @return whether the solver should watch for a pivoting stick
+     */
+    default boolean hasPivotStick() {
+        return false;
+    }
+
+    /**
+     * The set-valued part of the couple about the normal while rolling: the largest couple (N·m) the
+     * contact supplies at zero relative normal spin, {@code δ_p F_n} for Coulomb pivoting; zero for a
+     * law whose couple about the normal is single-valued (viscous, spin creep). While held, the solver
+     * replaces the law's couple about the normal with the couple that keeps the relative normal spin
+     * zero, and releases the hold when that couple exceeds this limit.
+     *
+     * @param c the contact
+     * @return the stick limit (N·m, ≥ 0)
+     */
+    default double pivotStickLimit(ContactContext c) {
+        return 0.0;
+    }
+
     /** @return the normal coefficient of restitution in [0, 1], or empty when this law does not set it */
     default OptionalDouble restitution() {
         return OptionalDouble.empty();

@@ -3,7 +3,7 @@ package org.trundle.core;
 /**
  * Energy account of a run (J). Mechanical energy is {@code E = ½ m |v|² + ½ I |ω|² − m g·c}
  * (potential zero at the world origin). The budget closes when
- * {@code E_final − E_initial + losses − appliedWork ≈ 0}; {@link #residual()} is that sum, and
+ * {@code E_final − E_initial + losses − appliedWork − driveWork ≈ 0}; {@link #residual()} is that sum, and
  * {@link #scale()} is {@code E_scale = max kinetic energy + m |g| L} with {@code L} the run's extent
  * (the largest distance of the centre from its start), against which residuals are judged.
  *
@@ -18,6 +18,7 @@ public final class EnergyBudget {
     private final double otherCouples;
     private final double impacts;
     private final double appliedWork;
+    private final double driveWork;
     private final double scale;
     private final double contactDamping;
 
@@ -57,6 +58,28 @@ public final class EnergyBudget {
     public EnergyBudget(double initial, double fin, double slidingFriction, double rollingResistance,
                         double pivotingResistance, double otherCouples, double impacts, double appliedWork,
                         double scale, double contactDamping) {
+        this(initial, fin, slidingFriction, rollingResistance, pivotingResistance, otherCouples, impacts, appliedWork,
+            0.0, scale, contactDamping);
+    }
+
+    /**
+     * A budget with the drive work of moving surfaces and the damping work of a compliant contact.
+     *
+     * @param initial initial mechanical energy (J)
+     * @param fin final mechanical energy (J)
+     * @param slidingFriction energy lost to sliding friction, including sticking impulses (J)
+     * @param rollingResistance energy lost to rolling resistance (J)
+     * @param pivotingResistance energy lost to pivoting resistance (J)
+     * @param otherCouples energy lost to other contact couples (J)
+     * @param impacts energy lost in impacts (J)
+     * @param appliedWork work done by applied loads (J)
+     * @param driveWork work done on the ball by moving surfaces (J)
+     * @param scale energy scale E_scale (J)
+     * @param contactDamping energy lost to the damping of a compliant contact (J)
+     */
+    public EnergyBudget(double initial, double fin, double slidingFriction, double rollingResistance,
+                        double pivotingResistance, double otherCouples, double impacts, double appliedWork,
+                        double driveWork, double scale, double contactDamping) {
         this.contactDamping = contactDamping;
         this.initial = initial;
         this.fin = fin;
@@ -66,6 +89,7 @@ public final class EnergyBudget {
         this.otherCouples = otherCouples;
         this.impacts = impacts;
         this.appliedWork = appliedWork;
+        this.driveWork = driveWork;
         this.scale = scale;
     }
 
@@ -114,14 +138,26 @@ public final class EnergyBudget {
         return appliedWork;
     }
 
+    /**
+     * Work done on the ball by moving surfaces (J): the power {@code F·u(p) + τ_c·Ω} of the contact
+     * force and couple at the contact point of a patch moving with velocity field {@code u} and spin
+     * {@code Ω}, integrated over the run, plus {@code J·u(p)} of every contact impulse (design notes
+     * §9). Zero on still surfaces.
+     *
+     * @return drive work (J)
+     */
+    public double driveWork() {
+        return driveWork;
+    }
+
     /** @return total dissipated energy (J) */
     public double totalLoss() {
         return slidingFriction + rollingResistance + pivotingResistance + otherCouples + impacts + contactDamping;
     }
 
-    /** @return {@code E_final − E_initial + losses − appliedWork} (J); zero for a closed budget */
+    /** @return {@code E_final − E_initial + losses − appliedWork − driveWork} (J); zero for a closed budget */
     public double residual() {
-        return fin - initial + totalLoss() - appliedWork;
+        return fin - initial + totalLoss() - appliedWork - driveWork;
     }
 
     /** @return E_scale (J) */
@@ -138,7 +174,8 @@ public final class EnergyBudget {
     public String toString() {
         return String.format(java.util.Locale.ROOT,
             "E0=%.6e J, E1=%.6e J, friction=%.3e, rolling=%.3e, pivoting=%.3e, other=%.3e, impacts=%.3e,"
-                + " damping=%.3e, applied=%.3e, residual/scale=%.2e", initial, fin, slidingFriction, rollingResistance,
-            pivotingResistance, otherCouples, impacts, contactDamping, appliedWork, relativeResidual());
+                + " damping=%.3e, applied=%.3e, drive=%.3e, residual/scale=%.2e", initial, fin, slidingFriction,
+            rollingResistance, pivotingResistance, otherCouples, impacts, contactDamping, appliedWork, driveWork,
+            relativeResidual());
     }
 }

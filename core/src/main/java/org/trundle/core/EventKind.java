@@ -1,7 +1,8 @@
 package org.trundle.core;
 
 /**
- * Kinds of logged run events. Each phase change has one of these as its cause.
+ * Kinds of logged run events. Each phase change has one of these as its cause; the pivoting stick
+ * and release change no phase (they hold and free the spin about the normal while rolling).
  */
 public enum EventKind {
     /** The contact point crossed the patch edge. */
@@ -15,7 +16,19 @@ public enum EventKind {
     /** The ball met the surface from flight. */
     IMPACT,
     /** The ball came to rest in static equilibrium. */
-    REST;
+    REST,
+    /**
+     * The contact point crossed an edge of its patch onto a neighbouring patch that continues the
+     * surface: the contact moves to the neighbour with no impulse.
+     */
+    HANDOVER,
+    /**
+     * While rolling, the spin about the normal fell to zero and the couple needed to keep it there is
+     * within the law's set-valued pivoting couple: it is held at zero (exact pivoting stick).
+     */
+    PIVOT_STICK,
+    /** The couple needed to hold the spin about the normal at zero exceeded the pivoting couple. */
+    PIVOT_RELEASE;
 
     /** @return the lower-case name used in files ({@code lift_off}) */
     public String label() {

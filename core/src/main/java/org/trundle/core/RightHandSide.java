@@ -8,10 +8,10 @@ import org.trundle.core.engine.StateMapper;
  * for users who couple Trundle's dynamics to their own integrator. The kernel allocates nothing
  * per call.
  *
- * <p>State array layout ({@link #dimension()} = 19): centre (m) [0,3), velocity (m/s) [3,6),
+ * <p>State array layout ({@link #dimension()} = 21): centre (m) [0,3), velocity (m/s) [3,6),
  * orientation quaternion, scalar first, Hamilton convention body to world (the conjugate of the components Hipparchus' {@code Rotation} stores) [6,10), spin (rad/s) [10,13), dissipated work by
- * {@link LossKind} (J) [13,17), applied-load work (J) [17], centre path length (m) [18]. In the
- * rolling phase the centre's derivative is the no-slip velocity {@code r ω × n(c)}.
+ * {@link LossKind} (J) [13,17), applied-load work (J) [17], centre path length (m) [18], damping work
+ * of a compliant contact (J) [19], work done by a moving surface (J) [20]. In the rolling phase the centre's derivative is the no-slip velocity {@code r ω × n(c)}.
  *
  * <p>Not thread-safe: one instance per thread (it owns the workspaces).
  */

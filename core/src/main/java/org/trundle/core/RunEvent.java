@@ -5,7 +5,8 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 /**
  * One logged event of a run: its time (s), kind, the state at the instant (before any jump), the
  * state right after it (after an impact impulse or a phase change), the phase entered, the patch
- * edge crossed (exits only) and the impulse the wall gave the ball (impacts and sticking, N·s).
+ * edge crossed (exits only), the impulse the wall gave the ball (impacts and sticking, N·s), the
+ * patch it happened on and, for a hand-over, the patch left and the patch entered.
  *
  * <p>Immutable.
  */
@@ -15,8 +16,13 @@ public final class RunEvent {
     private final BallState after;
     private final String edge;
     private final Vector3D impulse;
+    private final String patch;
+    private final String from;
+    private final String to;
 
     /**
+     * An event on no named patch (a one-patch run built before scenes existed).
+     *
      * @param kind event kind
      * @param before state at the instant, before any jump
      * @param after state right after the event
@@ -24,6 +30,24 @@ public final class RunEvent {
      * @param impulse impulse on the ball (N·s), zero when none
      */
     public RunEvent(EventKind kind, BallState before, BallState after, String edge, Vector3D impulse) {
+        this(kind, before, after, edge, impulse, null, null, null);
+    }
+
+    /**
+     * @param kind event kind
+     * @param before state at the instant, before any jump
+     * @param after state right after the event
+     * @param edge name of the edge crossed, or null
+     * @param impulse impulse on the ball (N·s), zero when none
+     * @param patch id of the patch the event happened on (for a hand-over: the patch entered), or null
+     * @param from hand-over only: id of the patch left, else null
+     * @param to hand-over only: id of the patch entered, else null
+     */
+    public RunEvent(EventKind kind, BallState before, BallState after, String edge, Vector3D impulse, String patch,
+                    String from, String to) {
+        this.patch = patch;
+        this.from = from;
+        this.to = to;
         this.kind = kind;
         this.before = before;
         this.after = after;
@@ -61,6 +85,21 @@ public final class RunEvent {
         return edge;
     }
 
+    /** @return id of the patch the event happened on (hand-over: the patch entered), or null */
+    public String patch() {
+        return patch;
+    }
+
+    /** @return hand-over: id of the patch left; otherwise null */
+    public String from() {
+        return from;
+    }
+
+    /** @return hand-over: id of the patch entered; otherwise null */
+    public String to() {
+        return to;
+    }
+
     /** @return impulse given to the ball by the wall (N·s); zero vector when none */
     public Vector3D impulse() {
         return impulse;
@@ -69,6 +108,7 @@ public final class RunEvent {
     @Override
     public String toString() {
         return kind.label() + " at t=" + before.time() + " s -> " + after.phase().label()
-            + (edge != null ? " (edge " + edge + ")" : "");
+            + (patch != null ? " on " + patch : "") + (edge != null ? " (edge " + edge + ")" : "")
+            + (from != null ? " from " + from + " to " + to : "");
     }
 }

@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import java.util.List;
+
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.engine.Engine;
 import org.trundle.core.engine.Model;
@@ -25,12 +27,25 @@ import org.trundle.core.engine.Model;
  * distance residual passes {@link SolverSettings#projectionThreshold()} (and the residual is
  * reported).
  *
+ * <p>A scene of several patches ({@link Builder#patch}) is run the same way: the ball touches one
+ * patch at a time; where its contact point crosses an edge onto a neighbouring patch that continues
+ * the surface it is handed over (event {@code handover}); leaving every patch is flight (event
+ * {@code exit}), in which impacts are found against every patch; a flight start needs no closest
+ * point. A simulation built with one {@link Builder#surface} is a one-patch scene.
+ *
  * <p>Immutable and thread-safe: each {@link #run} owns its workspaces, so one simulation may run
  * many starts in parallel with identical results to sequential runs.
  */
 public final class Simulation {
+    /** Id of the one patch of a simulation built with {@link Builder#surface}. */
+    public static final String SINGLE_PATCH = "surface";
+
     private final Ball ball;
+    private final List<Patch> patches;
+    /** Whether the scene was given as patches (else: one surface, with an optional motion). */
+    private final boolean scene;
     private final Surface surface;
+    private final SurfaceMotion motion;
     private final ContactLaw law;
     private final Vector3D gravity;
     private final AppliedLoad load;
@@ -44,32 +59,63 @@ public final class Simulation {
         if (b.ball == null) {
             throw new IllegalArgumentException("ball must be given, got null");
         }
-        if (b.surface == null) {
+        if (b.surface == null && b.patches.isEmpty()) {
             throw new IllegalArgumentException("surface must be given, got null");
+        }
+        if (b.surface != null && !b.patches.isEmpty()) {
+            throw new IllegalArgumentException("give either one surface or a scene of patches, got a surface and "
+                + b.patches.size() + " patches");
         }
         if (b.law == null) {
             throw new IllegalArgumentException("contact law must be given, got null");
         }
         this.ball = b.ball;
-        this.surface = b.surface;
+        this.scene = !b.patches.isEmpty();
+        this.patches = scene ? List.copyOf(b.patches)
+            : List.of(new Patch(SINGLE_PATCH, b.surface, b.motion, null));
+        this.surface = patches.get(0).surface();
+        this.motion = patches.get(0).motion();
         this.law = b.law;
+        java.util.Set<String> ids = new java.util.HashSet<>();
+        for (Patch p : patches) {
+            if (!ids.add(p.id())) {
+                throw new IllegalArgumentException("patch ids must be unique, got \"" + p.id() + "\" twice");
+            }
+        }
         this.gravity = Checks.finite("gravity", b.gravity);
         this.load = b.load == null ? AppliedLoad.NONE : b.load;
         this.settings = b.settings == null ? SolverSettings.defaults() : b.settings;
         this.compliance = b.compliance;
-        double kmax = surface.maxConcaveCurvature();
-        if (Double.isFinite(kmax) && ball.radius() * kmax >= 1.0) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                "ball of radius %s m does not fit surface %s: r*kappa_max = %s >= 1 "
-                    + "(smallest concave radius of curvature %s m)",
-                ball.radius(), surface.name(), ball.radius() * kmax, 1.0 / kmax));
-        }
-        law.restitution().ifPresent(e -> {
-            if (!(e >= 0 && e <= 1)) {
-                throw new IllegalArgumentException("restitution must lie in [0, 1], got " + e);
+        if (compliance != null) {
+            if (patches.size() > 1) {
+                throw new IllegalArgumentException("a compliant contact needs a scene of one patch, got "
+                    + patches.size() + " patches");
             }
-        });
-        this.model = new Model(ball, surface, law, gravity, load, settings, compliance, ContextAccessor.INSTANCE);
+            if (!motion.stationary()) {
+                throw new IllegalArgumentException("a compliant patch must not move: patch " + patches.get(0).id()
+                    + " has a motion and a compliant contact");
+            }
+        }
+        for (Patch p : patches) {
+            double kmax = p.surface().maxConcaveCurvature();
+            if (Double.isFinite(kmax) && ball.radius() * kmax >= 1.0) {
+                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
+                    "ball of radius %s m does not fit surface %s: r*kappa_max = %s >= 1 "
+                        + "(smallest concave radius of curvature %s m)",
+                    ball.radius(), p.surface().name(), ball.radius() * kmax, 1.0 / kmax));
+            }
+        }
+        List<Patch> resolved = new java.util.ArrayList<>();
+        for (Patch p : patches) {
+            ContactLaw l = p.law() != null ? p.law() : law;
+            l.restitution().ifPresent(e -> {
+                if (!(e >= 0 && e <= 1)) {
+                    throw new IllegalArgumentException("restitution must lie in [0, 1], got " + e);
+                }
+            });
+            resolved.add(p.withLaw(l));
+        }
+        this.model = new Model(ball, resolved, law, gravity, load, settings, compliance, ContextAccessor.INSTANCE);
     }
 
     /** @return the immutable model the engine runs (internal use: {@code RightHandSide}) */
@@ -84,8 +130,14 @@ public final class Simulation {
 
     /** @return a builder holding this simulation's configuration */
     public Builder toBuilder() {
-        return new Builder().ball(ball).surface(surface).law(law).gravity(gravity).load(load).settings(settings)
+        Builder b = new Builder().ball(ball).law(law).gravity(gravity).load(load).settings(settings)
             .compliance(compliance);
+        if (scene) {
+            patches.forEach(b::patch);
+        } else {
+            b.surface(surface).motion(motion);
+        }
+        return b;
     }
 
     /** @return the ball */
@@ -93,9 +145,22 @@ public final class Simulation {
         return ball;
     }
 
-    /** @return the surface */
+    /** @return the surface (of the first patch in a scene) */
     public Surface surface() {
         return surface;
+    }
+
+    /**
+     * @return the scene's patches as given (a simulation built with one surface has one patch,
+     *     id {@value #SINGLE_PATCH})
+     */
+    public List<Patch> patches() {
+        return patches;
+    }
+
+    /** @return the surface's rigid motion (of the first patch in a scene; {@link SurfaceMotion#NONE} when it stands still) */
+    public SurfaceMotion motion() {
+        return motion;
     }
 
     /** @return the patch's compliant contact, or empty for the rigid contact */
@@ -187,41 +252,80 @@ public final class Simulation {
     }
 
     /**
-     * A consistent rolling start at time 0 with a given spin about the normal.
+     * A consistent rolling start at time 0 with a given spin about the normal. On a moving surface
+     * the spin rolls relative to the surface under the ball: {@code ω = Ω + (n × (v − u(c)))/r + ω_n n},
+     * so that the contact point moves with the surface, {@code v − r ω × n = u(p)}, with {@code Ω} the
+     * surface's spin and {@code u} its velocity field at time 0.
      *
      * @param centre centre (m), at distance r from the surface
      * @param velocity centre velocity (m/s), tangent to the surface
-     * @param normalSpin spin about the normal {@code ω·n} (rad/s)
+     * @param normalSpin spin about the normal relative to the surface, {@code (ω − Ω)·n} (rad/s)
      * @return the start state
      */
     public BallState rollingStart(Vector3D centre, Vector3D velocity, double normalSpin) {
         Checks.finite("centre", centre);
         Checks.finite("velocity", velocity);
         Checks.finite("normalSpin", normalSpin);
-        ContactGeometry g;
-        try {
-            g = geometryAt(centre, 0.0);
-        } catch (SurfaceDomainException e) {
-            throw new IllegalArgumentException("centre " + centre + " has no contact normal: " + e.getMessage(), e);
+        Patch touched = patches.get(0);
+        ContactGeometry g = null;
+        RuntimeException failure = null;
+        for (Patch p : patches) {
+            try {
+                ContactGeometry gp = geometryAt(p, centre, 0.0);
+                if (g == null || Math.abs(gp.distance - ball.radius()) < Math.abs(g.distance - ball.radius())) {
+                    g = gp;
+                    touched = p;
+                }
+            } catch (SurfaceDomainException e) {
+                failure = e;
+            }
         }
+        if (g == null) {
+            throw new IllegalArgumentException("centre " + centre + " has no contact normal: " + failure.getMessage(),
+                failure);
+        }
+        SurfaceMotion motion = touched.motion();
         Vector3D n = new Vector3D(g.normal[0], g.normal[1], g.normal[2]);
-        Vector3D spin = Vector3D.crossProduct(n, velocity).scalarMultiply(1.0 / ball.radius())
-            .add(normalSpin, n);
+        Vector3D relative = velocity;
+        Vector3D surfaceSpin = Vector3D.ZERO;
+        if (!motion.stationary()) {
+            MotionState pose = new MotionState();
+            motion.at(0.0, pose);
+            double[] u = new double[3];
+            pose.velocityAt(centre.toArray(), u);
+            relative = velocity.subtract(new Vector3D(u));
+            surfaceSpin = new Vector3D(pose.spin);
+        }
+        Vector3D spin = Vector3D.crossProduct(n, relative).scalarMultiply(1.0 / ball.radius())
+            .add(normalSpin, n).add(surfaceSpin);
         return BallState.of(0.0, centre, velocity, org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY,
             spin, Phase.ROLLING);
     }
 
     /**
-     * Queries the surface at a point (convenience for setup code; allocates).
+     * Queries the surface (of the first patch in a scene), where it is at time {@code t}, at a point
+     * (convenience for setup code; allocates).
      *
      * @param x query point (m)
      * @param t time (s)
      * @return the contact geometry
      */
     public ContactGeometry geometryAt(Vector3D x, double t) {
+        return geometryAt(patches.get(0), x, t);
+    }
+
+    private static ContactGeometry geometryAt(Patch p, Vector3D x, double t) {
+        Surface surface = p.surface();
+        SurfaceMotion motion = p.motion();
         ContactGeometry g = new ContactGeometry();
         g.scratch = surface.newScratch();
-        surface.query(t, x.toArray(), g);
+        if (motion.stationary()) {
+            surface.query(t, x.toArray(), g);
+        } else {
+            MotionState pose = new MotionState();
+            motion.at(t, pose);
+            pose.query(surface, t, x.toArray(), g);
+        }
         return g;
     }
 
@@ -239,6 +343,8 @@ public final class Simulation {
     public static final class Builder {
         private Ball ball;
         private Surface surface;
+        private SurfaceMotion motion = SurfaceMotion.NONE;
+        private final List<Patch> patches = new java.util.ArrayList<>();
         private ContactLaw law;
         private Vector3D gravity = Vector3D.ZERO;
         private AppliedLoad load = AppliedLoad.NONE;
@@ -278,6 +384,30 @@ public final class Simulation {
          */
         public Builder surface(Surface s) {
             this.surface = s;
+            return this;
+        }
+
+        /**
+         * Adds a patch to the scene (instead of one {@link #surface}).
+         *
+         * @param p the patch
+         * @return this builder
+         */
+        public Builder patch(Patch p) {
+            if (p == null) {
+                throw new IllegalArgumentException("patch must be given, got null");
+            }
+            this.patches.add(p);
+            return this;
+        }
+
+        /**
+         * @param m the surface's rigid motion (the surface is given at its rest pose, where it is at
+         *     {@code m}'s identity); {@link SurfaceMotion#NONE} or null for a still surface
+         * @return this builder
+         */
+        public Builder motion(SurfaceMotion m) {
+            this.motion = m;
             return this;
         }
 

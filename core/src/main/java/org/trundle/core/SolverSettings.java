@@ -36,9 +36,13 @@ package org.trundle.core;
  *   <li>{@code smoothingSpinFraction} (default 1e-3): the smoothing spin
  *       {@link ContactContext#smoothingSpin()} {@code = fraction·V/r} of set-valued couples that
  *       may stick while the ball keeps moving (pivoting resistance).</li>
- *   <li>{@code projectionThreshold} (default 1e-10): distance residual {@code |d − r|}, as a
- *       fraction of the ball radius, above which the centre is projected back onto the offset
- *       surface at the end of a step.</li>
+ *   <li>{@code projectionThreshold} (default 0, meaning "follow the tolerance": the threshold is
+ *       then {@code tolerance}): distance residual {@code |d − r|}, as a fraction of the ball
+ *       radius, above which the centre is projected back onto the offset surface at the end of a
+ *       step (the quaternion norm is renormalised past ten times that). A fixed threshold below
+ *       the integrator's local error restarts the integration on almost every step at a loose
+ *       tolerance, so the default follows it and loosening the tolerance always makes a run
+ *       cheaper.</li>
  *   <li>{@code contactTolerance} (default 1e-6): largest gap or penetration of a contact start, as
  *       a fraction of the ball radius, and largest normal or slip speed of a rolling start, as a
  *       fraction of {@code V}.</li>
@@ -77,7 +81,7 @@ public final class SolverSettings {
         this.settleSpeed = Checks.nonNegative("settleSpeed", settleSpeed);
         this.restSpeedFraction = Checks.positive("restSpeedFraction", restSpeedFraction);
         this.smoothingSpinFraction = Checks.positive("smoothingSpinFraction", smoothingSpinFraction);
-        this.projectionThreshold = Checks.positive("projectionThreshold", projectionThreshold);
+        this.projectionThreshold = Checks.nonNegative("projectionThreshold", projectionThreshold);
         this.contactTolerance = Checks.positive("contactTolerance", contactTolerance);
         if (tolerance >= 1e-2) {
             throw new IllegalArgumentException("tolerance must be below 1e-2, got " + tolerance);
@@ -86,7 +90,7 @@ public final class SolverSettings {
 
     /** @return the default settings */
     public static SolverSettings defaults() {
-        return new SolverSettings(1e-10, 1e-3, 1e-12, 0.0, true, 20_000_000L, 100_000, 1e-8, 0.0, 1e-5, 1e-3, 1e-10, 1e-6);
+        return new SolverSettings(1e-10, 1e-3, 1e-12, 0.0, true, 20_000_000L, 100_000, 1e-8, 0.0, 1e-5, 1e-3, 0.0, 1e-6);
     }
 
     /** @return relative integration tolerance, in (0, 1e-2) */
@@ -144,9 +148,17 @@ public final class SolverSettings {
         return smoothingSpinFraction;
     }
 
-    /** @return projection threshold as a fraction of the ball radius */
+    /** @return projection threshold as a fraction of the ball radius, as set (0: follow the tolerance) */
     public double projectionThreshold() {
         return projectionThreshold;
+    }
+
+    /**
+     * @return the projection threshold in force, as a fraction of the ball radius: the set value,
+     *     or the tolerance when it is 0
+     */
+    public double effectiveProjectionThreshold() {
+        return projectionThreshold > 0 ? projectionThreshold : tolerance;
     }
 
     /** @return contact start tolerance as a fraction of the ball radius (lengths) or of the speed scale (speeds) */
@@ -243,7 +255,7 @@ public final class SolverSettings {
     }
 
     /**
-     * @param v new value: projection threshold as a fraction of the ball radius
+     * @param v new value: projection threshold as a fraction of the ball radius, or 0 to follow the tolerance
      * @return a copy with that value
      */
     public SolverSettings withProjectionThreshold(double v) {

@@ -2,7 +2,9 @@ package org.trundle.core;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -79,6 +81,21 @@ class ComplianceTest {
         assertThrows(IllegalArgumentException.class, () -> Compliance.of(-1, 0.5));
         assertThrows(IllegalArgumentException.class, () -> Compliance.of(1e9, 1.1));
         assertEquals(0.0, Compliance.of(1e9, 0.5).force(1e9, -1e-6, 1, 1));
+    }
+
+    /** A compliant contact belongs to one still patch: a moving patch or a scene of two is refused by name. */
+    @Test
+    void aCompliantPatchMustNotMoveAndStandAlone() {
+        Simulation.Builder moving = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain")
+            .compliance(Compliance.of(1e9, 0.5)).surface(new FloorForTests(1.0))
+            .motion(SurfaceMotion.translation(new Vector3D(0.1, 0, 0)));
+        IllegalArgumentException m = assertThrows(IllegalArgumentException.class, moving::build);
+        assertTrue(m.getMessage().contains("must not move"), m.getMessage());
+        Simulation.Builder two = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain")
+            .compliance(Compliance.of(1e9, 0.5)).patch(Patch.of("a", new FloorForTests(1.0)))
+            .patch(Patch.of("b", new FloorForTests(1.0)));
+        IllegalArgumentException s = assertThrows(IllegalArgumentException.class, two::build);
+        assertTrue(s.getMessage().contains("one patch, got 2 patches"), s.getMessage());
     }
 
     /** Stops when the approach returns to zero. */

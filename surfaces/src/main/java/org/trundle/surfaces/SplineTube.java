@@ -13,10 +13,11 @@ import org.trundle.core.SurfaceDomainException;
 import org.trundle.core.TriangleMesh;
 
 /**
- * A tube of constant or smoothly varying radius about a C² centreline: bent tubes, helical chutes.
- * The centreline {@code C(u)} is the natural cubic spline ({@link CubicSpline}, per coordinate)
+ * A tube of constant or smoothly varying radius about a C⁴ centreline: bent tubes, helical chutes.
+ * The centreline {@code C(u)} is the natural quintic spline ({@link QuinticSpline}, per coordinate)
  * through the given points, parameterised by cumulative chord length {@code u} (m); the radius
- * {@code R(u)} is the natural cubic spline through the radii given at the points. The ball is
+ * {@code R(u)} is the natural cubic spline ({@link CubicSpline}, C²; a varying radius keeps curvature
+ * steps at the knots, the quintic is not used for it yet: see the README's limits) through the radii given at the points. The ball is
  * {@link Side#INSIDE} the tube or {@link Side#OUTSIDE} it (a bent rod); the patch runs from the
  * first point to the last (edges {@code "from"}, {@code "to"}, open ends).
  *
@@ -28,7 +29,8 @@ import org.trundle.core.TriangleMesh;
  * with a constant radius the foot is radial from the nearest centreline point). It is solved by
  * Newton's method, {@code G' = −|C'|² + (x − C)·C'' + R'' ℓ − R' (e·C')}, seeded from the previous
  * foot of the run ({@link ContactGeometry#hint}{@code [0]}), so a query costs O(1); without a seed,
- * from the nearest knot or interval midpoint.
+ * from the knot or interval midpoint with the smallest signed {@code ℓ − R} (the cross-section the
+ * point lies in, not the wall of a neighbouring turn of a helix).
  *
  * <p>Geometry with {@code e = (x − C)/ℓ}, {@code σ = +1} outside and {@code −1} inside:
  * {@code p = C + R e}, {@code n = σ e}, {@code d = σ (ℓ − R)}, and, differentiating {@code e} with
@@ -69,9 +71,9 @@ public final class SplineTube implements Surface {
     private static final int FRAME_SAMPLES = 16;
     private static final int MAX_ITER = 50;
 
-    private final CubicSpline cx;
-    private final CubicSpline cy;
-    private final CubicSpline cz;
+    private final QuinticSpline cx;
+    private final QuinticSpline cy;
+    private final QuinticSpline cz;
     private final CubicSpline radius;
     private final boolean constantRadius;
     private final double constRadius;
@@ -197,9 +199,9 @@ public final class SplineTube implements Surface {
                 u[i] = u[i - 1] + chord;
             }
         }
-        this.cx = new CubicSpline(u, xs, "spline tube x");
-        this.cy = new CubicSpline(u, ys, "spline tube y");
-        this.cz = new CubicSpline(u, zs, "spline tube z");
+        this.cx = new QuinticSpline(u, xs, "spline tube x");
+        this.cy = new QuinticSpline(u, ys, "spline tube y");
+        this.cz = new QuinticSpline(u, zs, "spline tube z");
         this.radius = new CubicSpline(u, radii, "spline tube radius");
         this.constantRadius = constant;
         this.constRadius = radii[0];
@@ -208,6 +210,7 @@ public final class SplineTube implements Surface {
         // fit check data, sampled at 64 points per interval: the centreline curvature κ_c must
         // satisfy R κ_c < 1; concave curvatures are 1/R inside and κ_c/(1 − R κ_c) outside
         double[] w = new double[12];
+        double[] prev = new double[6];
         double kmax = 0;
         for (int i = 0; i < n - 1; i++) {
             for (int j = 0; j <= 64; j++) {
@@ -225,6 +228,30 @@ public final class SplineTube implements Surface {
                         r, t, 1 / kc));
                 }
                 kmax = Math.max(kmax, side == Side.INSIDE ? 1 / r : kc / (1 - r * kc));
+                // between samples: the turn of the tangent over the chord must also stay below 1/R,
+                // which catches a centreline that stops and turns back (collinear points that double
+                // back have κ_c = 0 at every sample, yet a half turn between two of them)
+                double sp = Math.sqrt(sp2);
+                if (j > 0) {
+                    double dot = (prev[3] * w[1] + prev[4] * w[4] + prev[5] * w[7]) / sp;
+                    double qx = (prev[4] * w[7] - prev[5] * w[4]) / sp;
+                    double qy = (prev[5] * w[1] - prev[3] * w[7]) / sp;
+                    double qz = (prev[3] * w[4] - prev[4] * w[1]) / sp;
+                    double ds = Math.sqrt((w[0] - prev[0]) * (w[0] - prev[0]) + (w[3] - prev[1]) * (w[3] - prev[1])
+                        + (w[6] - prev[2]) * (w[6] - prev[2]));
+                    double turn = Math.atan2(Math.sqrt(qx * qx + qy * qy + qz * qz), dot);
+                    if (r * turn > ds) {
+                        throw new IllegalArgumentException(String.format(Locale.ROOT,
+                            "spline tube centreline turns by %g degrees within %g m near u = %g m: it turns back or bends "
+                                + "more sharply than its radius %g m allows", Math.toDegrees(turn), ds, t, r));
+                    }
+                }
+                prev[0] = w[0];
+                prev[1] = w[3];
+                prev[2] = w[6];
+                prev[3] = w[1] / sp;
+                prev[4] = w[4] / sp;
+                prev[5] = w[7] / sp;
             }
         }
         this.maxConcave = constant ? kmax : Double.NaN;
@@ -518,7 +545,9 @@ public final class SplineTube implements Surface {
                 double dx = x[0] - w[0];
                 double dy = x[1] - w[3];
                 double dz = x[2] - w[6];
-                double dd = Math.abs(Math.sqrt(dx * dx + dy * dy + dz * dz) - w[9]);
+                // signed ℓ − R: the cross-section the point lies in (or nearest outside), not the
+                // nearest wall of a neighbouring turn
+                double dd = Math.sqrt(dx * dx + dy * dy + dz * dz) - w[9];
                 if (dd < best) {
                     best = dd;
                     u = ui;
@@ -586,10 +615,11 @@ public final class SplineTube implements Surface {
             f * (1 - ex * ex) + c * vx * vx, -f * ex * ey + c * vx * vy, -f * ex * ez + c * vx * vz,
             f * (1 - ey * ey) + c * vy * vy, -f * ey * ez + c * vy * vz,
             f * (1 - ez * ez) + c * vz * vz);
-        double h1 = f;
-        double h2 = f * (1 + (vx * vx + vy * vy + vz * vz) / gp);
-        double k1 = -h1 / (1 - d * h1);
-        double k2 = -h2 / (1 - d * h2);
+        // κ = −h/(1 − d h) with h = σ a/ℓ, written as −σ a/(ℓ − σ d a): no 1/ℓ, so the curvature
+        // stays accurate as the centre nears the centreline (where a ball of the bore's radius sits)
+        double a2 = 1 + (vx * vx + vy * vy + vz * vz) / gp;
+        double k1 = -sigma / (ell - sigma * d);
+        double k2 = -sigma * a2 / (ell - sigma * d * a2);
         out.curvature1 = Math.max(k1, k2);
         out.curvature2 = Math.min(k1, k2);
         double speed = Math.sqrt(w[1] * w[1] + w[4] * w[4] + w[7] * w[7]);

@@ -15,7 +15,8 @@ import org.trundle.core.TriangleMesh;
 /**
  * A surface of revolution about the axis through {@code origin} with unit direction {@code a}, its
  * profile given as points {@code (z_i, R_i)} (axial position along {@code a} from {@code origin}, m;
- * radius, m) interpolated by a natural cubic spline {@code R(z)} ({@link CubicSpline}, C²): funnels,
+ * radius, m) interpolated by a natural quintic spline {@code R(z)} ({@link QuinticSpline}, C⁴, so the
+ * curvature has no jumps at the knots): funnels,
  * flared tube mouths, cups. The ball is {@link Side#INSIDE} (toward the axis) or
  * {@link Side#OUTSIDE}; the patch is {@code z_0 ≤ z ≤ z_{n−1}} (edges {@code "from"}, {@code "to"}).
  *
@@ -52,7 +53,7 @@ public final class SurfaceOfRevolution implements Surface {
     private final double ax;
     private final double ay;
     private final double az;
-    private final CubicSpline profile;
+    private final QuinticSpline profile;
     private final Side side;
     private final double length;
     private final double maxConcave;
@@ -71,7 +72,7 @@ public final class SurfaceOfRevolution implements Surface {
         if (side == null) {
             throw new IllegalArgumentException("side must be given, got null");
         }
-        this.profile = new CubicSpline(axial, radius, "surface of revolution profile");
+        this.profile = new QuinticSpline(axial, radius, "surface of revolution profile");
         for (int i = 0; i < radius.length; i++) {
             Checks.positive("profile radius[" + i + "]", radius[i]);
         }
@@ -109,7 +110,7 @@ public final class SurfaceOfRevolution implements Surface {
     }
 
     /** @return the profile spline R(z) */
-    public CubicSpline profile() {
+    public QuinticSpline profile() {
         return profile;
     }
 

@@ -16,9 +16,9 @@ import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
 
 /**
- * Spline-based surfaces: the spline against Hipparchus' natural cubic {@link SplineInterpolator}
- * (a general-purpose reference library), the surfaces against the closed-form cylinder and against
- * finite differences of their own distance fields.
+ * Spline-based surfaces against the closed-form cylinder and against finite differences of their
+ * own distance fields; the cubic spline (a spline tube's radius) against Hipparchus' natural cubic
+ * {@link SplineInterpolator} (a general-purpose reference library); the quintic: {@link QuinticSplineTest}.
  */
 class SplineSurfaceGeometryTest {
     static final long SEED = 777L;
@@ -94,7 +94,7 @@ class SplineSurfaceGeometryTest {
         Vector3D a = new Vector3D(0, 0.2, 1).normalize();
         Vector3D e1 = a.orthogonal();
         Vector3D e2 = Vector3D.crossProduct(a, e1);
-        CubicSpline profile = new CubicSpline(z, r, "cup");
+        QuinticSpline profile = new QuinticSpline(z, r, "cup");
         double[] e = new double[3];
         for (int i = 0; i < 20; i++) {
             double zz = rnd.nextDouble(0.005, 0.095);
@@ -161,5 +161,14 @@ class SplineSurfaceGeometryTest {
         assertEquals(-0.02 * 0.5 * Math.PI, h.patchMargin, 1e-9);
         assertTrue(chute.edgeName(h.edge).startsWith("angle"), chute.edgeName(h.edge));
         assertTrue(chute.hasEdges());
+    }
+
+    @Test
+    void aCentrelineThatTurnsBackIsRejected() {
+        // collinear points that double back: the curvature is zero at every sample, yet the
+        // centreline stops and reverses (issue 18 item 6's input); the tube would overlap itself
+        Vector3D[] back = {Vector3D.ZERO, new Vector3D(0.1, 0, 0), Vector3D.ZERO, new Vector3D(0.1, 0, 0)};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new SplineTube(back, 0.012, Side.INSIDE));
+        assertTrue(e.getMessage().contains("turns back"), e.getMessage());
     }
 }

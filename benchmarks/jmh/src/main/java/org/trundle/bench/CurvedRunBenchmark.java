@@ -13,11 +13,11 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.trundle.contact.Coulomb;
-import org.trundle.contact.PureRolling;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
+import org.trundle.core.SolverSettings;
 import org.trundle.core.sweep.Axis;
 import org.trundle.core.sweep.Grid;
 import org.trundle.core.sweep.RunSpec;
@@ -25,8 +25,6 @@ import org.trundle.core.sweep.Sweep;
 import org.trundle.core.sweep.SweepRun;
 import org.trundle.surfaces.Cylinder;
 import org.trundle.surfaces.Side;
-import org.trundle.surfaces.SplineTube;
-import org.trundle.surfaces.Torus;
 
 /**
  * Full runs on curved guides (invented example data, default solver settings): a ball rolling round
@@ -55,27 +53,11 @@ public class CurvedRunBenchmark {
         public void setUp() {
             Ball ball = Ball.solid(0.004, 0.0021);
             Vector3D g = new Vector3D(0, 0, -9.81);
-            groove = Simulation.builder().ball(ball).surface(new Torus(Vector3D.ZERO, Vector3D.PLUS_K, 0.05, 0.006,
-                Side.INSIDE)).law(new PureRolling()).gravity(g).build();
-            // on the groove's floor (tube angle -90 deg), rolling along the ring
-            grooveStart = groove.rollingStart(new Vector3D(0.05, 0, -0.002), new Vector3D(0, 0.6, 0.0));
+            groove = CurvedCases.TORUS_GROOVE.simulation(SolverSettings.defaults());
+            grooveStart = CurvedCases.TORUS_GROOVE.start(groove);
             check(groove.run(grooveStart, 0.5), "torus groove");
-
-            int n = 37;
-            Vector3D[] pts = new Vector3D[n];
-            for (int i = 0; i < n; i++) {
-                double a = 2 * Math.PI * 3 * i / (n - 1);
-                pts[i] = new Vector3D(0.06 * Math.cos(a), 0.06 * Math.sin(a), -0.12 * i / (n - 1));
-            }
-            chute = Simulation.builder().ball(ball).surface(new SplineTube(pts, 0.012, Side.INSIDE))
-                .law(new PureRolling()).gravity(g).build();
-            // bottom of the tube wall near the top of the helix, moving along the helix
-            var geo = chute.geometryAt(pts[2].add(new Vector3D(0, 0, -0.011)), 0);
-            Vector3D n0 = new Vector3D(geo.normal[0], geo.normal[1], geo.normal[2]);
-            Vector3D foot = new Vector3D(geo.point[0], geo.point[1], geo.point[2]);
-            Vector3D along = pts[3].subtract(pts[1]).normalize();
-            Vector3D v = along.subtract(along.dotProduct(n0), n0).scalarMultiply(0.3);
-            chuteStart = chute.rollingStart(foot.add(0.004, n0), v);
+            chute = CurvedCases.SPLINE_CHUTE.simulation(SolverSettings.defaults());
+            chuteStart = CurvedCases.SPLINE_CHUTE.start(chute);
             check(chute.run(chuteStart, 0.5), "spline chute");
 
             tube = Simulation.builder().ball(ball)

@@ -87,6 +87,30 @@ public final class RunPlot {
         ImageIO.write(img, "png", file.toFile());
     }
 
+    /**
+     * Loads and initialises what {@link #write} needs (the chart library, Java2D's rasteriser and
+     * fonts, the PNG encoder) by drawing and encoding a throw-away chart, so that a caller can do it
+     * on a second thread while the run is computed; {@link #write} then finds all of it ready.
+     * Writes no file; the picture {@link #write} draws does not depend on whether this ran.
+     */
+    public static void prepare() {
+        XYChart chart = Palette.chart(W, H, "warm-up", "t", "y");
+        addLine(chart, "a", new double[] {0, 1}, new double[] {0, 1}, new Color(0x30, 0x30, 0x30), true);
+        BufferedImage panel = BitmapEncoder.getBufferedImage(chart);
+        Graphics2D g = panel.createGraphics();
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 17));
+        g.drawString("warm-up", 16, 28);
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 16));
+        g.drawString("warm-up", 16, 52);
+        g.dispose();
+        try {
+            ImageIO.write(panel, "png", new java.io.ByteArrayOutputStream());
+        } catch (IOException e) {
+            // an in-memory stream does not fail; if it did, write() would report it on the real file
+        }
+    }
+
     private static String clip(String s, int n) {
         return s.length() <= n ? s : s.substring(0, n - 3) + "...";
     }

@@ -26,7 +26,8 @@ import org.trundle.core.Sample;
  * <p>Columns: {@code t,x,y,z,vx,vy,vz,wx,wy,wz,phase,normal_force,friction_force} (s, m, m/s, rad/s,
  * phase label, N, N: the magnitude of the tangential contact force), then {@code qw,qx,qy,qz} (the
  * body-to-world orientation quaternion), {@code contact_x,contact_y,contact_z} (contact point, m,
- * empty in flight), {@code speed} (m/s), {@code height} (m, along {@code −g}) and {@code event} (the
+ * empty in flight), {@code speed} (m/s), {@code height} (m, along {@code −g}), {@code contacts} (the ids of
+ * the patches touched joined by {@code +}, empty in flight) and {@code event} (the
  * kinds of the events at that instant joined by {@code ;}, plus {@code start} and {@code end}).
  * Rows come at the sample interval and at every event instant; numbers are written exactly
  * (shortest decimal that reads back to the same double).
@@ -35,7 +36,7 @@ public final class RunRecorder implements RunObserver {
     /** The fixed leading columns of trajectory.csv. */
     public static final String HEADER = "t,x,y,z,vx,vy,vz,wx,wy,wz,phase,normal_force,friction_force";
     /** The columns after them. */
-    public static final String EXTRA = "qw,qx,qy,qz,contact_x,contact_y,contact_z,speed,height,event";
+    public static final String EXTRA = "qw,qx,qy,qz,contact_x,contact_y,contact_z,speed,height,contacts,event";
 
     /** An output step that may fail with an I/O error. */
     @FunctionalInterface
@@ -196,6 +197,7 @@ public final class RunRecorder implements RunObserver {
             b.append(",,,");
         }
         b.append(st.velocity().getNorm()).append(',').append(st.centre().dotProduct(up)).append(',');
+        b.append(String.join("+", s.contacts())).append(',');
         return b.toString();
     }
 

@@ -48,8 +48,32 @@ public final class Main implements Runnable {
      * @param args command line
      */
     public static void main(String[] args) {
+        if (args.length > 0 && !args[0].startsWith("-")) {
+            preload();
+        }
         int code = execute(System.out, System.err, args);
         System.exit(code);
+    }
+
+    /**
+     * Loads and initialises the scenario reader (Jackson) and the solver's first classes on a second
+     * core while the main thread reads the command line; the command then finds them ready. A class
+     * that fails here fails again, with its error, where the command uses it.
+     */
+    private static void preload() {
+        Thread t = new Thread(() -> {
+            ClassLoader loader = Main.class.getClassLoader();
+            for (String name : new String[] {"org.trundle.scenario.ScenarioFiles", "org.trundle.core.Simulation",
+                "org.trundle.core.engine.Engine", "org.hipparchus.ode.nonstiff.DormandPrince853Integrator"}) {
+                try {
+                    Class.forName(name, true, loader);
+                } catch (ClassNotFoundException | LinkageError e) {
+                    return;
+                }
+            }
+        }, "preload");
+        t.setDaemon(true);
+        t.start();
     }
 
     /**

@@ -68,6 +68,19 @@ final class RunOutputs {
      * @throws IOException when an output cannot be written
      */
     static Report execute(Scenario sc, Path dir, boolean demo, boolean plot) throws IOException {
+        // the picture's libraries load and initialise on a second core while the run is computed
+        Thread plotPreparation = null;
+        if (plot) {
+            plotPreparation = new Thread(() -> {
+                try {
+                    RunPlot.prepare();
+                } catch (RuntimeException e) {
+                    // the real drawing reports whatever fails here, on the file it writes
+                }
+            }, "plot-preparation");
+            plotPreparation.setDaemon(true);
+            plotPreparation.start();
+        }
         Simulation sim = sc.simulation();
         checkRows(sc);
         Vector3D up = up(sc);
@@ -122,9 +135,19 @@ final class RunOutputs {
         addNotes(summary, sc);
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         if (plot) {
+            awaitQuietly(plotPreparation);
             RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up);
         }
         return new Report(result, failure, rec, plot);
+    }
+
+    /** Waits for the plot preparation; an interruption only means the picture starts cold. */
+    private static void awaitQuietly(Thread t) {
+        try {
+            t.join();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     /**
@@ -276,19 +299,22 @@ final class RunOutputs {
 
     /**
      * The energy account in one line: initial and final energy, every loss kind the budget books
-     * (sliding friction, rolling resistance, pivoting resistance, other couples, impacts), the work
-     * of applied loads, and the residual.
+     * (sliding friction, rolling resistance, pivoting resistance, other couples, impacts, and a compliant
+     * contact's damping when there is any), the work of applied loads, the drive work of moving surfaces
+     * when there is any, and the residual.
      *
      * @param e the budget
      * @return the text
      */
     static String energyText(EnergyBudget e) {
         return String.format(Locale.ROOT, "initial %.6e J, final %.6e J; losses: friction %.3e J, rolling resistance"
-            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J;"
+            + " %.3e J, pivoting resistance %.3e J, other couples %.3e J, impacts %.3e J%s; applied work %.3e J%s;"
             + " budget residual %.1e of scale", e.initial(), e.fin(), e.slidingFrictionLoss(), e.rollingResistanceLoss(),
             e.pivotingResistanceLoss(), e.otherCoupleLoss(), e.impactLoss(), e.contactDampingLoss() != 0
                 ? String.format(Locale.ROOT, ", contact damping %.3e J", e.contactDampingLoss()) : "",
-            e.appliedWork(), e.relativeResidual());
+            e.appliedWork(), e.driveWork() != 0
+                ? String.format(Locale.ROOT, "; drive work of moving surfaces %.3e J", e.driveWork()) : "",
+            e.relativeResidual());
     }
 
     static String vec(Vector3D v) {

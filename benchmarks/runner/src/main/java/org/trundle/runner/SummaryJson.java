@@ -19,11 +19,13 @@ import org.trundle.scenario.ScenarioFiles;
  * {@code end_message} (why a failed or budget run stopped, else empty); {@code end_time} (s);
  * {@code end_state} ({@code position} m, {@code velocity} m/s, {@code spin} rad/s, {@code phase});
  * {@code events} (each {@code time}, {@code kind} — {@code exit}, {@code slip}, {@code stick},
- * {@code lift_off}, {@code impact}, {@code rest} —, {@code position}, {@code velocity},
- * {@code spin} at the instant, {@code phase_after}, {@code impulse} N·s, and for an exit the
- * {@code edge} crossed); {@code energy} (J: {@code initial}, {@code final}, {@code friction_loss},
+ * {@code lift_off}, {@code impact}, {@code rest}, {@code handover}, {@code pivot_stick}, {@code pivot_release} —,
+ * {@code position}, {@code velocity},
+ * {@code spin} at the instant, {@code phase_after}, {@code impulse} N·s, for an exit the
+ * {@code edge} crossed, {@code patch} (the id of the patch it happened on) and for a hand-over
+ * {@code from} and {@code to}); {@code energy} (J: {@code initial}, {@code final}, {@code friction_loss},
  * {@code rolling_resistance_loss}, {@code pivoting_resistance_loss}, {@code impact_loss},
- * {@code other_loss}, {@code applied_work}, {@code residual}, {@code relative_residual});
+ * {@code other_loss}, {@code applied_work}, {@code drive_work} (work done by moving surfaces), {@code residual}, {@code relative_residual});
  * {@code max_distance_error} (m), {@code max_normal_force} (N);
  * {@code phases} (each {@code phase}, {@code start}, {@code end}, {@code duration} s and
  * {@code centre_path} m, the path length of the centre in that phase); {@code evaluations},
@@ -68,6 +70,7 @@ final class SummaryJson {
         en.put("other_loss", e.otherCoupleLoss());
         en.put("contact_damping_loss", e.contactDampingLoss());
         en.put("applied_work", e.appliedWork());
+        en.put("drive_work", e.driveWork());
         en.put("residual", e.residual());
         en.put("relative_residual", e.relativeResidual());
         o.put("max_distance_error", r.maxDistanceError());
@@ -124,6 +127,13 @@ final class SummaryJson {
             n.set("impulse", vec(e.impulse()));
             if (e.edge() != null) {
                 n.put("edge", e.edge());
+            }
+            if (e.patch() != null) {
+                n.put("patch", e.patch());
+            }
+            if (e.from() != null) {
+                n.put("from", e.from());
+                n.put("to", e.to());
             }
         }
         return a;

@@ -59,7 +59,7 @@ class BadInputTest {
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
         "top level     | \"gravity\": [0, 0, -9.81],  | \"gravity\": [0, 0, -9.81], \"gravty\": 1, "
-            + "| unknown key gravty; valid keys at the top level: description, ball, surface, contact, gravity, start, run, sweep",
+            + "| unknown key gravty; valid keys at the top level: description, ball, surface, surfaces, contact, gravity, start, run, sweep",
         "ball          | \"inertia\": \"solid\"       | \"inertia\": \"solid\", \"colour\": \"red\" "
             + "| unknown key ball.colour; valid keys in ball: radius, mass, inertia",
         "cylinder      | \"side\": \"inside\",        | \"side\": \"inside\", \"radus\": 1, "

@@ -54,17 +54,18 @@ class FailedRunTest {
     }
 
     /**
-     * A spline centreline that doubles back on itself ({@code [[0,0,0],[0.1,0,0],[0,0,0],[0.1,0,0]]}):
-     * the ball thrown inside it reaches a point with no closest point; the run stops on the geometry
-     * and its summary is complete (energy, phases), where the surface's exception used to escape the
-     * run's closing bookkeeping and leave an empty trajectory.
+     * A spline tube narrowing to 2 mm, narrower than the 4 mm ball: the ball rolling into it reaches
+     * the centreline, a point with no closest point; the run stops on the geometry and its summary is
+     * complete (energy, phases), where the surface's exception used to escape the run's closing
+     * bookkeeping and leave an empty trajectory. (The input first used here, a centreline that doubles
+     * back on itself, is now refused when the surface is built.)
      */
     @Test
     void splineDoublingBack() throws IOException {
         Path f = Cli.write(dir, "back.json", scenario("{\"radius\": 0.004, \"mass\": 0.00105, \"inertia\": \"solid\"}",
-            "{\"type\": \"spline_tube\", \"centerline\": [[0,0,0],[0.1,0,0],[0,0,0],[0.1,0,0]], \"radius\": 0.01}",
-            "{\"position\": [0.0587341579, 0.0024823533, 0.003180335],"
-                + " \"velocity\": [0.3371469312, 0.7236565693, 0.416358501], \"spin\": [0, 0, 0]}"));
+            "{\"type\": \"spline_tube\", \"centerline\": [[0,0,0],[0.1,0,0],[0.2,0,0],[0.3,0,0]],"
+                + " \"radius\": [0.012, 0.012, 0.012, 0.002]}",
+            "{\"position\": [0.01, 0, -0.004], \"velocity\": [1.0, 0, 0], \"spin\": [0, 0, 0]}"));
         Path out = dir.resolve("back");
         Cli.Result r = Cli.run("run", f.toString(), "--out", out.toString());
         assertEquals(Main.FAILED, r.code(), r.out() + r.err());

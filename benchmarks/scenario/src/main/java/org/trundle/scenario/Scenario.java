@@ -15,14 +15,16 @@ import org.trundle.core.Material;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.StartPlacement;
-import org.trundle.core.Surface;
+import org.trundle.core.Patch;
 import org.trundle.core.sweep.RunSpec;
 
 /**
  * A parsed and checked scenario: everything needed for one run, built and validated (the ball fits
  * the surface, the start is consistent), plus the document it came from (sweeps vary it).
  *
- * <p>Top-level keys: {@code description} (free text), {@code ball}, {@code surface},
+ * <p>Top-level keys: {@code description} (free text), {@code ball}, {@code surface} (one patch, with
+ * an optional {@code motion}) or {@code surfaces} (a scene: a list of patches, each with an
+ * {@code id}, optional {@code motion} and {@code contact}; see {@link SceneFactory}),
  * {@code contact}, {@code gravity} (m/s², default {@code [0, 0, -9.81]}), {@code start},
  * {@code run}, {@code sweep} (read by {@link SweepSpec}).
  *
@@ -38,7 +40,7 @@ import org.trundle.core.sweep.RunSpec;
 public record Scenario(JsonNode document, String description, Simulation simulation, BallState start, double duration,
     List<String> warnings, StartPlacement placement) {
     /** Keys allowed at the top level. */
-    static final List<String> TOP_KEYS = List.of("description", "ball", "surface", "contact", "gravity", "start", "run",
+    static final List<String> TOP_KEYS = List.of("description", "ball", "surface", "surfaces", "contact", "gravity", "start", "run",
         "sweep");
 
     /** Default gravity (m/s²): standard gravity, downward along z. */
@@ -68,10 +70,10 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         root.allow(TOP_KEYS.toArray(new String[0]));
         String description = root.text("description", "");
         Ball ball = ball(root.section("ball"));
-        Surface surface = SurfaceFactory.create(root.section("surface").without("material"));
-        wallLoadMaterials(root);
+        Optional<Material[]> materials = wallLoadMaterials(root);
+        List<Patch> patches = SceneFactory.patches(root, materials);
         Section contactSection = root.section("contact");
-        ContactLaw law = ContactFactory.create(contactSection.without("compliant"));
+        ContactLaw law = ContactFactory.create(contactSection.without("compliant"), materials);
         Compliance compliance = compliance(root, contactSection, law);
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
@@ -104,8 +106,14 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         }
         Simulation sim;
         try {
-            sim = Simulation.builder().ball(ball).surface(surface).law(law).gravity(gravity).settings(set)
-                .compliance(compliance).build();
+            Simulation.Builder b = Simulation.builder().ball(ball).law(law).gravity(gravity).settings(set)
+                .compliance(compliance);
+            if (root.has("surfaces")) {
+                patches.forEach(b::patch);
+            } else {
+                b.surface(patches.get(0).surface()).motion(patches.get(0).motion());
+            }
+            sim = b.build();
         } catch (IllegalArgumentException e) {
             String m = e.getMessage();
             throw new ScenarioException((m.contains("does not fit") ? "ball does not fit: " : "") + m);
@@ -148,13 +156,17 @@ public record Scenario(JsonNode document, String description, Simulation simulat
      * @return the two materials (ball, wall), or empty when neither is given
      */
     private static Optional<Material[]> wallLoadMaterials(Section root) {
+        if (!root.has("surface")) {
+            return Optional.empty();
+        }
         Section ball = root.section("ball");
         Section surface = root.section("surface");
         if (!ball.has("material") && !surface.has("material")) {
             return Optional.empty();
         }
         if (!ball.has("material") || !surface.has("material")) {
-            throw new ScenarioException("wall loads need both ball.material and surface.material; "
+            throw new ScenarioException("ball.material and surface.material go together (wall loads and"
+                + " contact.spin_creep need both); "
                 + (ball.has("material") ? "surface.material" : "ball.material") + " is missing");
         }
         return Optional.of(new Material[] {material(ball.section("material")), material(surface.section("material"))});

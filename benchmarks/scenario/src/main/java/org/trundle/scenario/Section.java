@@ -104,6 +104,26 @@ final class Section {
         return new Section(path, copy);
     }
 
+    /**
+     * @param key key of a list of objects
+     * @return one section per entry ({@code key[i]} in messages)
+     */
+    List<Section> sectionList(String key) {
+        JsonNode n = required(key, "a list of objects [{ ... }, ...]");
+        if (!n.isArray() || n.size() == 0) {
+            throw new ScenarioException(where(key) + " must be a non-empty list of objects [{ ... }, ...], got " + kind(n));
+        }
+        List<Section> out = new java.util.ArrayList<>();
+        for (int i = 0; i < n.size(); i++) {
+            JsonNode e = n.get(i);
+            if (!e.isObject()) {
+                throw new ScenarioException(where(key) + "[" + i + "] must be an object { ... }, got " + kind(e));
+            }
+            out.add(new Section(where(key) + "[" + i + "]", (ObjectNode) e));
+        }
+        return out;
+    }
+
     Optional<Section> optionalSection(String key) {
         return has(key) ? Optional.of(section(key)) : Optional.empty();
     }

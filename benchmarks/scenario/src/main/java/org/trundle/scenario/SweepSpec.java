@@ -153,19 +153,21 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
      */
     static List<String> outcomes(Section root) {
         List<String> out = new ArrayList<>();
-        org.trundle.core.Surface surface = SurfaceFactory.create(root.section("surface"));
-        if (surface.hasEdges()) {
-            for (int i = 0; i < 16; i++) {
-                String o;
-                try {
-                    o = "exit_" + surface.edgeName(i);
-                } catch (RuntimeException pastTheLastEdge) {
-                    break; // a surface may refuse an index past its last edge
+        for (org.trundle.core.Patch p : SceneFactory.patches(root, java.util.Optional.empty())) {
+            org.trundle.core.Surface surface = p.surface();
+            if (surface.hasEdges()) {
+                for (int i = 0; i < 16; i++) {
+                    String o;
+                    try {
+                        o = "exit_" + surface.edgeName(i);
+                    } catch (RuntimeException pastTheLastEdge) {
+                        break; // a surface may refuse an index past its last edge
+                    }
+                    if (out.contains(o)) {
+                        break; // or repeat the last edge's name
+                    }
+                    out.add(o);
                 }
-                if (out.contains(o)) {
-                    break; // or repeat the last edge's name
-                }
-                out.add(o);
             }
         }
         out.addAll(List.of("duration", "rest", "budget", "failed"));

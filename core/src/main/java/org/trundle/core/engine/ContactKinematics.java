@@ -1,16 +1,142 @@
 package org.trundle.core.engine;
 
+import org.trundle.core.MotionState;
+
 /**
  * The kinematics of a contact in one place (design notes §3, §4): the no-slip velocity of the
  * centre {@code v = r ω × n}, the tangential slip of the contact point {@code s = P(v − r ω × n)}
  * ({@code P = 1 − n nᵀ}), and the removal of the normal part of a velocity. Written on scalars and
  * caller-owned arrays, allocation-free, so the hot path and the switches share the same arithmetic.
  *
- * <p>Moving surfaces (issue 11, item 2) add the surface velocity at the contact point and the
- * surface spin here: {@code s = P(v − r ω × n − u(p))}, relative spin {@code ω − Ω}.
+ * <p>On a moving patch (design notes §9) everything is relative to the patch: with its velocity field
+ * {@code u} and spin {@code Ω}, the slip is {@code s = P(v − r ω × n − u(p)) = P((v − u(c)) − r (ω − Ω) × n)},
+ * the rolling velocity {@code v = u(c) + r (ω − Ω) × n}, the normal speed {@code n·(v − u(c))}. The
+ * helpers that take a slot allocate a little; they serve the switches, never the right-hand side.
  */
 final class ContactKinematics {
     private ContactKinematics() {
+    }
+
+    /**
+     * The velocity and spin of a state relative to a moving patch at time {@code t}:
+     * {@code v − u(c)} and {@code ω − Ω} (a still patch gives the state's own).
+     *
+     * @param slot the patch
+     * @param t time (s)
+     * @param y full-layout state (velocity slot filled)
+     * @param vRel output relative centre velocity (m/s)
+     * @param wRel output relative spin (rad/s)
+     */
+    static void relative(ContactSlot slot, double t, double[] y, double[] vRel, double[] wRel) {
+        for (int i = 0; i < 3; i++) {
+            vRel[i] = y[StateMapper.V + i];
+            wRel[i] = y[StateMapper.W + i];
+        }
+        if (!slot.moving) {
+            return;
+        }
+        MotionState pose = slot.poseAt(t);
+        double[] u = new double[3];
+        double[] c = {y[StateMapper.C], y[StateMapper.C + 1], y[StateMapper.C + 2]};
+        pose.velocityAt(c, u);
+        for (int i = 0; i < 3; i++) {
+            vRel[i] -= u[i];
+            wRel[i] -= pose.spin[i];
+        }
+    }
+
+    /**
+     * The patch velocity at the contact point {@code p = c − r n}: {@code u(p) = u(c) − r Ω × n}
+     * (zero for a still patch).
+     *
+     * @param slot the patch
+     * @param t time (s)
+     * @param c centre (m)
+     * @param r radius (m)
+     * @param n unit normal
+     * @return u(p) (m/s), a new array
+     */
+    static double[] patchVelocityAtContact(ContactSlot slot, double t, double[] c, double r, double[] n) {
+        double[] u = new double[3];
+        if (!slot.moving) {
+            return u;
+        }
+        MotionState pose = slot.poseAt(t);
+        pose.velocityAt(c, u);
+        double[] om = pose.spin;
+        u[0] -= r * (om[1] * n[2] - om[2] * n[1]);
+        u[1] -= r * (om[2] * n[0] - om[0] * n[2]);
+        u[2] -= r * (om[0] * n[1] - om[1] * n[0]);
+        return u;
+    }
+
+    /**
+     * Writes the no-slip centre velocity on a possibly moving patch into {@code y[V..V+2]}:
+     * {@code v = u(c) + r (ω − Ω) × n}, which is {@code r ω × n} on a still patch.
+     *
+     * @param slot the patch
+     * @param t time (s)
+     * @param r radius (m)
+     * @param n unit normal
+     * @param y full-layout state (centre and spin read, velocity written)
+     */
+    static void rollingVelocity(ContactSlot slot, double t, double r, double[] n, double[] y) {
+        int w = StateMapper.W;
+        if (!slot.moving) {
+            noSlipVelocity(r, y[w], y[w + 1], y[w + 2], n, y, StateMapper.V);
+            return;
+        }
+        MotionState pose = slot.poseAt(t);
+        double[] om = pose.spin;
+        double[] u = new double[3];
+        double[] c = {y[StateMapper.C], y[StateMapper.C + 1], y[StateMapper.C + 2]};
+        pose.velocityAt(c, u);
+        noSlipVelocity(r, y[w] - om[0], y[w + 1] - om[1], y[w + 2] - om[2], n, y, StateMapper.V);
+        for (int i = 0; i < 3; i++) {
+            y[StateMapper.V + i] += u[i];
+        }
+    }
+
+    /**
+     * Removes the normal component of the velocity relative to the patch, {@code n·(v − u(c))}.
+     *
+     * @param slot the patch
+     * @param t time (s)
+     * @param n unit normal
+     * @param y full-layout state
+     * @return the removed relative normal speed (m/s)
+     */
+    static double removeRelativeNormalPart(ContactSlot slot, double t, double[] n, double[] y) {
+        if (!slot.moving) {
+            double vn = normalPart(y, StateMapper.V, n);
+            removeNormalPart(y, StateMapper.V, n);
+            return vn;
+        }
+        double vn = relativeNormalSpeed(slot, t, n, y);
+        for (int i = 0; i < 3; i++) {
+            y[StateMapper.V + i] -= vn * n[i];
+        }
+        return vn;
+    }
+
+    /**
+     * The normal speed relative to the patch, {@code n·(v − u(c))}.
+     *
+     * @param slot the patch
+     * @param t time (s)
+     * @param n unit normal
+     * @param y full-layout state
+     * @return n·(v − u(c)) (m/s)
+     */
+    static double relativeNormalSpeed(ContactSlot slot, double t, double[] n, double[] y) {
+        double vn = normalPart(y, StateMapper.V, n);
+        if (!slot.moving) {
+            return vn;
+        }
+        double[] u = new double[3];
+        double[] c = {y[StateMapper.C], y[StateMapper.C + 1], y[StateMapper.C + 2]};
+        slot.poseAt(t).velocityAt(c, u);
+        return vn - (u[0] * n[0] + u[1] * n[1] + u[2] * n[2]);
     }
 
     /**

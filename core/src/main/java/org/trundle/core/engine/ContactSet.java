@@ -7,22 +7,43 @@ import org.trundle.core.Phase;
  * of the slots: flight when no slot touches, sliding when a touching slot slides, rolling
  * otherwise; rest is the end state of a touching ball.
  *
- * <p>Today a run has one patch and so one slot; several simultaneous contacts (issue 12) add
- * slots here and their modes to the summary.
+ * <p>A scene has one slot per patch; the ball touches one at a time (the active slot), and a
+ * hand-over or an impact activates another. Several simultaneous contacts (issue 12) let more than
+ * one slot touch at once: their modes already enter the summary.
  */
 final class ContactSet {
     private final ContactSlot[] slots;
+    /** The slot in touch, or the last one touched (the right-hand side evaluates it). */
+    private ContactSlot active;
     private boolean rest;
     /** The summary, recomputed whenever a mode changes (read on the hot path). */
     private Phase summary = Phase.FLIGHT;
 
     ContactSet(ContactSlot... slots) {
         this.slots = slots.clone();
+        this.active = slots[0];
     }
 
-    /** @return the slot of the (single) patch */
-    ContactSlot primary() {
-        return slots[0];
+    /** @return the active slot: the one in touch, or the last one touched */
+    ContactSlot active() {
+        return active;
+    }
+
+    /**
+     * Makes another slot the active one, carrying the mode over (a hand-over, or the patch an
+     * impact or a start touches).
+     *
+     * @param s the slot
+     */
+    void activate(ContactSlot s) {
+        if (s != active) {
+            s.mode = active.mode;
+            active.mode = Mode.APART;
+            // a pivoting hold belongs to the patch it was taken on
+            active.pivotHeld = false;
+            active = s;
+            summary = summarise();
+        }
     }
 
     /** @return the number of slots */
@@ -60,13 +81,17 @@ final class ContactSet {
     }
 
     /**
-     * Sets the primary slot's mode from a global phase (the single-contact engine).
+     * Sets the active slot's mode from a global phase (the single-contact engine).
      *
      * @param p the phase
      */
     void setPhase(Phase p) {
         rest = p == Phase.REST;
-        primary().mode = p == Phase.SLIDING ? Mode.SLIDING : p == Phase.FLIGHT ? Mode.APART : Mode.ROLLING;
+        active.mode = p == Phase.SLIDING ? Mode.SLIDING : p == Phase.FLIGHT ? Mode.APART : Mode.ROLLING;
+        if (p != Phase.ROLLING) {
+            // the pivoting stick is a sub-mode of rolling
+            active.pivotHeld = false;
+        }
         summary = summarise();
     }
 }

@@ -4,6 +4,7 @@ import static org.trundle.core.engine.StateMapper.APPLIED;
 import static org.trundle.core.engine.StateMapper.C;
 import static org.trundle.core.engine.StateMapper.DAMPING;
 import static org.trundle.core.engine.StateMapper.DIM;
+import static org.trundle.core.engine.StateMapper.DRIVE;
 import static org.trundle.core.engine.StateMapper.LOSS;
 import static org.trundle.core.engine.StateMapper.PATH;
 import static org.trundle.core.engine.StateMapper.Q;
@@ -23,8 +24,8 @@ import org.trundle.core.ContactContext;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.LossKind;
+import org.trundle.core.MotionState;
 import org.trundle.core.Phase;
-import org.trundle.core.Surface;
 
 /**
  * The right-hand side of one phase, on primitive arrays, allocation-free.
@@ -65,8 +66,11 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final double coupleFactor;
     private final double rollingMass;
     private final double[] g;
-    private final Surface surface;
-    private final ContactLaw law;
+    /** The contact slot evaluated (the active one; see {@link #setSlot}). */
+    private ContactSlot slot;
+    /** Whether the patch moves (then the motion terms of design notes §9 enter). */
+    private boolean moving;
+    private ContactLaw law;
     private final AppliedLoad load;
     /** The patch's compliant contact, or null for the rigid contact. */
     private final Compliance compliance;
@@ -79,8 +83,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     /** Damping power (W) of the last compliant evaluation. */
     private double lossDamp;
 
-    final ContactGeometry geo;
-    final ContactContext ctx;
+    ContactGeometry geo;
+    ContactContext ctx;
     private final Ball ball;
     private final ContextAccess access;
 
@@ -103,6 +107,14 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private double lossPivot;
     private double lossSlide;
     private double lossOther;
+    /** Power (W) the moving patch puts into the ball, {@code F·u(p) + τ_c·Ω}, of the last evaluation. */
+    private double drivePower;
+    /** Total derivative of the patch velocity at the centre along the centre's path, {@code d u(c)/dt} (moving patches). */
+    final double[] surfaceAcceleration = new double[3];
+    /** Speed measure relative to a moving patch, {@code |v − u(c)| + r|ω − Ω|} (m/s), of the last contact evaluation. */
+    double relativeSpeed;
+    private final double[] relSpin = new double[3];
+    private final double[] relVel = new double[3];
 
     long evaluations;
     long budget = Long.MAX_VALUE;
@@ -121,7 +133,21 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     /** Whether there is an applied load (without one, the load arrays stay zero and are never asked). */
     private final boolean loaded;
     /** Whether the law may add couples (without, the couple calls and loss reads are skipped while rolling). */
-    private final boolean couples;
+    private boolean couples;
+    /**
+     * Whether the active slot's law has a set-valued couple about the normal and its patch stands still
+     * (the pivoting stick is watched; on a moving patch it is not, see {@link PivotRule}).
+     */
+    boolean pivotStick;
+    /** Spin about the normal ω·n (rad/s) of the last rolling evaluation; only with {@link #pivotStick}. */
+    double normalSpin;
+    /**
+     * The contact couple about the normal (N·m) that keeps {@code ω·n} constant, of the last rolling
+     * evaluation: {@code −I ω·(H v) − τ_app·n}; only with {@link #pivotStick}.
+     */
+    double pivotNeeded;
+    /** The law's set-valued pivoting couple (N·m) of the last rolling evaluation; only with {@link #pivotStick}. */
+    double pivotLimit;
     /** Receives the state and results of an integrator stage evaluated at the same time as the one before. */
     interface StageObserver {
         void stage(double t, double[] compact, double[] full, double[] fullDot);
@@ -154,7 +180,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * @param stickSpeed the stick threshold ε of the sliding phase (m/s)
      */
     public Dynamics(Model model, Phase phase, double stickSpeed) {
-        this(model, new ContactSlot(model.surface(), model.law()));
+        this(model, new ContactSlot(0, model.patches().get(0)));
         this.phase = phase;
         this.stickEps = stickSpeed;
     }
@@ -176,16 +202,30 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         this.coupleFactor = 1.0 / (k * m * r);
         this.rollingMass = k * m / (1 + k);
         this.g = gravity.clone();
-        this.surface = slot.surface;
-        this.law = slot.law;
-        this.geo = slot.geo;
-        this.ctx = slot.ctx;
         this.access = access;
         this.load = load;
         this.loaded = load != AppliedLoad.NONE;
-        this.couples = slot.couples;
-        // the ball and the geometry workspace never change: the hot path sets only the contact values
-        access.set(ctx, ball, geo, 0.0, Phase.ROLLING, slip, w, false);
+        setSlot(slot);
+    }
+
+    /**
+     * Evaluates another contact slot from now on (a hand-over, an impact on another patch).
+     *
+     * @param s the slot
+     */
+    void setSlot(ContactSlot s) {
+        this.slot = s;
+        this.moving = s.moving;
+        this.law = s.law;
+        this.geo = s.geo;
+        this.ctx = s.ctx;
+        this.couples = s.couples;
+        this.pivotStick = s.pivotStick;
+        if (!s.contextReady) {
+            // the ball and the geometry workspace never change: the hot path sets only the contact values
+            access.set(ctx, ball, geo, 0.0, Phase.ROLLING, slip, w, false);
+            s.contextReady = true;
+        }
     }
 
     @Override
@@ -302,6 +342,13 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         return normalForce;
     }
 
+    /** Counts one unit of work that is not an evaluation (an event check in flight) against the budget. */
+    void countCheck() {
+        if (++evaluations > budget) {
+            throw new BudgetExhausted();
+        }
+    }
+
     /** Evaluates the phase's forces without keeping derivatives (event functions, samples). */
     void evaluate(double t, double[] y) {
         evaluate(t, y, scratchDot);
@@ -362,17 +409,26 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         lossPivot = 0;
         lossSlide = 0;
         lossOther = 0;
+        drivePower = 0;
         lossDamp = 0;
         pressing = false;
         // one method per phase keeps each small enough for the JIT to inline its callees
         if (phase == Phase.ROLLING || phase == Phase.REST) {
-            rollingForces(t, y, yDot);
+            if (moving) {
+                rollingOnMovingPatch(t, y, yDot);
+            } else {
+                rollingForces(t, y, yDot);
+            }
             if (yDot != null) {
                 checkFinite(t, yDot);
             }
             return;
         } else if (phase == Phase.SLIDING) {
-            slidingForces(t, y);
+            if (moving) {
+                slidingOnMovingPatch(t, y);
+            } else {
+                slidingForces(t, y);
+            }
         } else {
             flightForces(t, y);
         }
@@ -419,6 +475,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[APPLIED] = applied;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
         yDot[DAMPING] = lossDamp;
+        yDot[DRIVE] = drivePower;
         checkFinite(t, yDot);
     }
 
@@ -453,7 +510,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             s1 += yDot[i + 1];
             s2 += yDot[i + 2];
         }
-        double sum = s0 + s1 + s2 + yDot[18] + yDot[19];
+        double sum = s0 + s1 + s2 + yDot[18] + yDot[19] + yDot[20];
         if (!Double.isFinite(sum)) {
             for (int i = 0; i < DIM; i++) {
                 if (!Double.isFinite(yDot[i])) {
@@ -467,7 +524,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     /** The likely source of a non-finite derivative, from what the last evaluation used (failure path only). */
     private String diagnose() {
         if (phase != Phase.FLIGHT && !(Vec.allFinite(geo.normal) && Vec.allFinite(geo.hessian))) {
-            return "surface " + surface.name() + " returned normal " + java.util.Arrays.toString(geo.normal)
+            return "surface " + slot.surface.name() + " returned normal " + java.util.Arrays.toString(geo.normal)
                 + " and distance Hessian " + java.util.Arrays.toString(geo.hessian) + " at centre "
                 + java.util.Arrays.toString(c) + " m";
         }
@@ -515,7 +572,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * arrays that might alias them, and this is the hot path of most runs.
      */
     private void rollingForces(double t, double[] y, double[] yDot) {
-        surface.query(t, c, geo);
+        slot.query(t, c);
         double[] n = geo.normal;
         double nx = n[0];
         double ny = n[1];
@@ -553,6 +610,27 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             ty += ct[1];
             tz += ct[2];
         }
+        double pivotLossFix = 0;
+        if (pivotStick) {
+            // d(ω·n)/dt = τ·n/I + ω·(H v) (the contact force has no moment about n): the couple
+            // about the normal that keeps ω·n constant; it does not enter the tangential force
+            double sn = wx * nx + wy * ny + wz * nz;
+            double tAppN = loaded ? tApp[0] * nx + tApp[1] * ny + tApp[2] * nz : 0.0;
+            double needed = -inertia * (wx * hvx + wy * hvy + wz * hvz) - tAppN;
+            normalSpin = sn;
+            pivotNeeded = needed;
+            pivotLimit = law.pivotStickLimit(ctx);
+            if (slot.pivotHeld) {
+                // held: the law's couple about the normal (single-valued parts vanish at zero spin)
+                // is replaced by the needed one, and its power with it
+                double lawN = tx * nx + ty * ny + tz * nz - tAppN;
+                double d = needed - lawN;
+                tx += d * nx;
+                ty += d * ny;
+                tz += d * nz;
+                pivotLossFix = (lawN - needed) * sn;
+            }
+        }
         tau[0] = tx;
         tau[1] = ty;
         tau[2] = tz;
@@ -581,7 +659,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         if (couples) {
             double[] lr = access.lossRate(ctx);
             lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
-            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()] + pivotLossFix;
             lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
         }
         force[0] = fn * nx + fx;
@@ -608,11 +686,212 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
         yDot[APPLIED] = loaded ? fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz : 0;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        yDot[DAMPING] = 0;
+        yDot[DRIVE] = 0;
+    }
+
+    /**
+     * Rolling on a moving patch (design notes §9): with the patch's spin {@code Ω}, its velocity field
+     * {@code u}, the relative spin {@code w = ω − Ω} and {@code ṅ = Ω × n + H v_rel}, the no-slip
+     * velocity is {@code v = u(c) + r w × n} and, with {@code A = du(c)/dt = Ω̇ × (c − D) − Ω × Ḋ + D̈ + Ω × v},
+     * <pre>
+     *   F_n = m(n·A + r n·(w × ṅ) − n·g) − n·F_app
+     *   F_t = k m/(1+k) · [ (τ × n)/(k m r) + r P(w × ṅ) + P A − r P(Ω̇ × n) − P g − P F_app/m ]
+     * </pre>
+     * (the closed form of §3 with the surface terms; it reduces to it for a still patch). Couples
+     * act on the relative spin; the drive power is {@code F·u(p) + τ_c·Ω}.
+     */
+    private void rollingOnMovingPatch(double t, double[] y, double[] yDot) {
+        slot.query(t, c);
+        MotionState ps = slot.poseAt(t);
+        double[] n = geo.normal;
+        double nx = n[0];
+        double ny = n[1];
+        double nz = n[2];
+        double ox = ps.spin[0];
+        double oy = ps.spin[1];
+        double oz = ps.spin[2];
+        double rx = w[0] - ox;
+        double ry = w[1] - oy;
+        double rz = w[2] - oz;
+        double qx = c[0] - ps.offset[0];
+        double qy = c[1] - ps.offset[1];
+        double qz = c[2] - ps.offset[2];
+        double dvx = ps.velocity[0];
+        double dvy = ps.velocity[1];
+        double dvz = ps.velocity[2];
+        double ucx = oy * qz - oz * qy + dvx;
+        double ucy = oz * qx - ox * qz + dvy;
+        double ucz = ox * qy - oy * qx + dvz;
+        double vrx = r * (ry * nz - rz * ny);
+        double vry = r * (rz * nx - rx * nz);
+        double vrz = r * (rx * ny - ry * nx);
+        double vx = ucx + vrx;
+        double vy = ucy + vry;
+        double vz = ucz + vrz;
+        vel[0] = vx;
+        vel[1] = vy;
+        vel[2] = vz;
+        relativeSpeed = Math.sqrt(vrx * vrx + vry * vry + vrz * vrz) + r * Math.sqrt(rx * rx + ry * ry + rz * rz);
+        if (loaded) {
+            load.apply(t, c, vel, q, w, fApp, tApp);
+        }
+        double fax = fApp[0];
+        double fay = fApp[1];
+        double faz = fApp[2];
+        double[] h = geo.hessian;
+        double ndx = oy * nz - oz * ny + h[0] * vrx + h[1] * vry + h[2] * vrz;
+        double ndy = oz * nx - ox * nz + h[3] * vrx + h[4] * vry + h[5] * vrz;
+        double ndz = ox * ny - oy * nx + h[6] * vrx + h[7] * vry + h[8] * vrz;
+        double[] sr = ps.spinRate;
+        double acx = sr[1] * qz - sr[2] * qy - (oy * dvz - oz * dvy) + ps.acceleration[0] + (oy * vz - oz * vy);
+        double acy = sr[2] * qx - sr[0] * qz - (oz * dvx - ox * dvz) + ps.acceleration[1] + (oz * vx - ox * vz);
+        double acz = sr[0] * qy - sr[1] * qx - (ox * dvy - oy * dvx) + ps.acceleration[2] + (ox * vy - oy * vx);
+        surfaceAcceleration[0] = acx;
+        surfaceAcceleration[1] = acy;
+        surfaceAcceleration[2] = acz;
+        double wnx = ry * ndz - rz * ndy;
+        double wny = rz * ndx - rx * ndz;
+        double wnz = rx * ndy - ry * ndx;
+        double gx = g[0];
+        double gy = g[1];
+        double gz = g[2];
+        double na = nx * acx + ny * acy + nz * acz + r * (nx * wnx + ny * wny + nz * wnz);
+        double fn = m * (na - (nx * gx + ny * gy + nz * gz)) - (nx * fax + ny * fay + nz * faz);
+        access.setRolling(ctx, fn, rx, ry, rz, couples);
+        double tx = tApp[0];
+        double ty = tApp[1];
+        double tz = tApp[2];
+        double cx = 0;
+        double cy = 0;
+        double cz = 0;
+        if (couples) {
+            law.addCouples(ctx);
+            double[] ct = access.torque(ctx);
+            cx = ct[0];
+            cy = ct[1];
+            cz = ct[2];
+            tx += cx;
+            ty += cy;
+            tz += cz;
+        }
+        tau[0] = tx;
+        tau[1] = ty;
+        tau[2] = tz;
+        double s1 = coupleFactor;
+        double im = invMass;
+        double bx = (ty * nz - tz * ny) * s1 + r * wnx + acx - r * (sr[1] * nz - sr[2] * ny) - gx - fax * im;
+        double by = (tz * nx - tx * nz) * s1 + r * wny + acy - r * (sr[2] * nx - sr[0] * nz) - gy - fay * im;
+        double bz = (tx * ny - ty * nx) * s1 + r * wnz + acz - r * (sr[0] * ny - sr[1] * nx) - gz - faz * im;
+        double bn = bx * nx + by * ny + bz * nz;
+        double kf = rollingMass;
+        double fx = kf * (bx - bn * nx);
+        double fy = kf * (by - bn * ny);
+        double fz = kf * (bz - bn * nz);
+        friction[0] = fx;
+        friction[1] = fy;
+        friction[2] = fz;
+        normalForce = fn;
+        neededTangential = Math.sqrt(fx * fx + fy * fy + fz * fz);
+        grip = law.gripLimit(ctx);
+        slipSpeed = 0;
+        if (couples) {
+            double[] lr = access.lossRate(ctx);
+            lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+        }
+        double fcx = fn * nx + fx;
+        double fcy = fn * ny + fy;
+        double fcz = fn * nz + fz;
+        force[0] = fcx;
+        force[1] = fcy;
+        force[2] = fcz;
+        // u(p) = u(c) - r Omega x n
+        double upx = ucx - r * (oy * nz - oz * ny);
+        double upy = ucy - r * (oz * nx - ox * nz);
+        double upz = ucz - r * (ox * ny - oy * nx);
+        drivePower = fcx * upx + fcy * upy + fcz * upz + cx * ox + cy * oy + cz * oz;
+        if (yDot == null) {
+            return;
+        }
+        double ix = tx - r * (ny * fz - nz * fy);
+        double iy = ty - r * (nz * fx - nx * fz);
+        double iz = tz - r * (nx * fy - ny * fx);
+        yDot[C] = vx;
+        yDot[C + 1] = vy;
+        yDot[C + 2] = vz;
+        yDot[V] = gx + (fcx + fax) * im;
+        yDot[V + 1] = gy + (fcy + fay) * im;
+        yDot[V + 2] = gz + (fcz + faz) * im;
+        rotationRates(y, w[0], w[1], w[2], ix * invInertia, iy * invInertia, iz * invInertia, yDot);
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = 0;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
+        yDot[APPLIED] = loaded ? fax * vx + fay * vy + faz * vz + tApp[0] * w[0] + tApp[1] * w[1] + tApp[2] * w[2] : 0;
+        yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        yDot[DAMPING] = 0;
+        yDot[DRIVE] = drivePower;
+        checkFinite(t, yDot);
+    }
+
+    /**
+     * Sliding on a moving patch (design notes §9): slip {@code s = P(v − u(c) − r (ω − Ω) × n)}, normal
+     * force from {@code n·(v − u(c)) = 0} differentiated, {@code n·a = n·A − ṅ·(v − u(c))}; friction
+     * against the slip, couples on the relative spin, drive power {@code F·u(p) + τ_c·Ω}.
+     */
+    private void slidingOnMovingPatch(double t, double[] y) {
+        slot.query(t, c);
+        MotionState ps = slot.poseAt(t);
+        double[] n = geo.normal;
+        System.arraycopy(y, V, vel, 0, 3);
+        double[] om = ps.spin;
+        for (int i = 0; i < 3; i++) {
+            relSpin[i] = w[i] - om[i];
+        }
+        ps.velocityAt(c, tmp);
+        for (int i = 0; i < 3; i++) {
+            relVel[i] = vel[i] - tmp[i];
+        }
+        ContactKinematics.slip(r, relVel, 0, relSpin, 0, n, slip);
+        relativeSpeed = norm(relVel) + r * norm(relSpin);
+        if (loaded) {
+            load.apply(t, c, vel, q, w, fApp, tApp);
+        }
+        // ndot = Omega x n + H v_rel
+        mulSym(geo.hessian, relVel, hv);
+        double ndx = om[1] * n[2] - om[2] * n[1] + hv[0];
+        double ndy = om[2] * n[0] - om[0] * n[2] + hv[1];
+        double ndz = om[0] * n[1] - om[1] * n[0] + hv[2];
+        double qx = c[0] - ps.offset[0];
+        double qy = c[1] - ps.offset[1];
+        double qz = c[2] - ps.offset[2];
+        double[] sr = ps.spinRate;
+        double[] dv = ps.velocity;
+        double acx = sr[1] * qz - sr[2] * qy - (om[1] * dv[2] - om[2] * dv[1]) + ps.acceleration[0]
+            + (om[1] * vel[2] - om[2] * vel[1]);
+        double acy = sr[2] * qx - sr[0] * qz - (om[2] * dv[0] - om[0] * dv[2]) + ps.acceleration[1]
+            + (om[2] * vel[0] - om[0] * vel[2]);
+        double acz = sr[0] * qy - sr[1] * qx - (om[0] * dv[1] - om[1] * dv[0]) + ps.acceleration[2]
+            + (om[0] * vel[1] - om[1] * vel[0]);
+        surfaceAcceleration[0] = acx;
+        surfaceAcceleration[1] = acy;
+        surfaceAcceleration[2] = acz;
+        double na = n[0] * acx + n[1] * acy + n[2] * acz
+            - (ndx * relVel[0] + ndy * relVel[1] + ndz * relVel[2]);
+        double fn = m * (na - dot(n, g)) - dot(n, fApp);
+        double[] ct = slidingContact(fn, relSpin);
+        // u(p) = u(c) - r Omega x n, with u(c) = vel - relVel
+        double upx = vel[0] - relVel[0] - r * (om[1] * n[2] - om[2] * n[1]);
+        double upy = vel[1] - relVel[1] - r * (om[2] * n[0] - om[0] * n[2]);
+        double upz = vel[2] - relVel[2] - r * (om[0] * n[1] - om[1] * n[0]);
+        drivePower = force[0] * upx + force[1] * upy + force[2] * upz + ct[0] * om[0] + ct[1] * om[1] + ct[2] * om[2];
     }
 
     /** Sliding: normal constraint force, friction against the slip, couples (results in the fields). */
     private void slidingForces(double t, double[] y) {
-        surface.query(t, c, geo);
+        slot.query(t, c);
         double[] n = geo.normal;
         System.arraycopy(y, V, vel, 0, 3);
         ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
@@ -622,6 +901,18 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         mulSym(geo.hessian, vel, hv);
         double vHv = dot(vel, hv);
         double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
+        slidingContact(fn, w);
+    }
+
+    /**
+     * The sliding contact once the normal force and the slip are known: friction {@code −f ŝ} from the
+     * law (direction held at {@code d₀} inside the stick band), the law's couples on the given
+     * (relative) spin, contact force and loss rates into the fields.
+     *
+     * @return the law's couple (N·m), the context's array
+     */
+    private double[] slidingContact(double fn, double[] spin) {
+        double[] n = geo.normal;
         double sp = norm(slip);
         double[] dir = tmp;
         if (sp >= stickEps) {
@@ -634,7 +925,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             // smooth through the band and the stick root is located on a smooth stretch
             System.arraycopy(slideDir0, 0, dir, 0, 3);
         }
-        access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, w, false);
+        access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, spin, false);
         double f = law.slidingFriction(ctx);
         if (!(f >= 0 && f < Double.POSITIVE_INFINITY)) {
             throw badBound("sliding friction", f, "N");
@@ -655,6 +946,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
         lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
         lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+        return ct;
     }
 
     /** Flight: applied loads only (results in the fields). */
@@ -688,7 +980,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * the contact and counted in the energy ({@link Model#energy}).
      */
     private void compliantForces(double t) {
-        surface.query(t, c, geo);
+        slot.query(t, c);
         double delta = r - geo.distance;
         if (!(delta > 0) || geo.patchMargin < 0) {
             return;
@@ -735,7 +1027,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * {@code α = 0}, the contact must supply {@code F = −(m g + F_app)} and the couple
      * {@code τ_c = r n × F_t − τ_app}; rest holds when {@code F_n > 0}, {@code |F_t|} is within the
      * grip and the tangential and normal parts of {@code τ_c} are within the law's holding limits
-     * (each with a tolerance of {@code slack} times {@code m|g|} or {@code m|g|r}).
+     * (each with a tolerance of {@code slack} times {@code m|g|} or {@code m|g|r}). On a moving patch
+     * rest is rest relative to the patch: the ball moves with it, so the contact must also supply
+     * {@code m a_s(c)} (the patch's acceleration at the centre,
+     * {@code Ω̇ × (c − D) + Ω × (Ω × (c − D)) + D̈}) and the couple {@code I Ω̇}.
      */
     boolean canRest(double t, double[] y, double slack) {
         System.arraycopy(y, C, c, 0, 3);
@@ -744,12 +1039,26 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         System.arraycopy(y, V, vel, 0, 3);
         zero(fApp);
         zero(tApp);
-        surface.query(t, c, geo);
+        slot.query(t, c);
         double[] n = geo.normal;
         load.apply(t, c, vel, q, w, fApp, tApp);
         double[] f = tmp;
         for (int i = 0; i < 3; i++) {
             f[i] = -(m * g[i] + fApp[i]);
+        }
+        if (moving) {
+            MotionState ps = slot.poseAt(t);
+            double[] om = ps.spin;
+            double[] sr = ps.spinRate;
+            double qx = c[0] - ps.offset[0];
+            double qy = c[1] - ps.offset[1];
+            double qz = c[2] - ps.offset[2];
+            double ux = om[1] * qz - om[2] * qy;
+            double uy = om[2] * qx - om[0] * qz;
+            double uz = om[0] * qy - om[1] * qx;
+            f[0] += m * (sr[1] * qz - sr[2] * qy + om[1] * uz - om[2] * uy + ps.acceleration[0]);
+            f[1] += m * (sr[2] * qx - sr[0] * qz + om[2] * ux - om[0] * uz + ps.acceleration[1]);
+            f[2] += m * (sr[0] * qy - sr[1] * qx + om[0] * uy - om[1] * ux + ps.acceleration[2]);
         }
         double fn = dot(f, n);
         if (!(fn > 0)) {
@@ -772,6 +1081,12 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         cross(n, f, tau);
         for (int i = 0; i < 3; i++) {
             tau[i] = r * tau[i] - tApp[i];
+        }
+        if (moving) {
+            double[] sr = slot.poseAt(t).spinRate;
+            for (int i = 0; i < 3; i++) {
+                tau[i] += inertia * sr[i];
+            }
         }
         double tn = dot(tau, n);
         double tt = Math.sqrt(Math.max(0.0, dot(tau, tau) - tn * tn));

@@ -2,6 +2,7 @@ package org.trundle.core.engine;
 
 import static org.trundle.core.engine.StateMapper.APPLIED;
 import static org.trundle.core.engine.StateMapper.DIM;
+import static org.trundle.core.engine.StateMapper.DRIVE;
 import static org.trundle.core.engine.StateMapper.LOSS;
 import static org.trundle.core.engine.StateMapper.PATH;
 import static org.trundle.core.engine.StateMapper.Q;
@@ -170,6 +171,10 @@ public final class Engine {
                     reason = EndReason.REST;
                     break;
                 }
+                EventKind pivot = transitions.pivotCheck();
+                if (pivot != null) {
+                    run.log(pivot, run.toState(run.t, run.y, run.phase()), null, Vector3D.ZERO);
+                }
                 ODEStateAndDerivative end;
                 try {
                     end = segment.integrate();
@@ -246,8 +251,10 @@ public final class Engine {
         run.dyn.stickEps = run.stickEps;
         run.dyn.compliantSlipSpeed = run.settleSpeed;
         run.dyn.touchSpeed = run.settleSpeed;
-        run.model.access().setSpins(run.slot.ctx, run.set.smoothingSpinFraction() * run.speedScale / r,
-            run.stickEps / r);
+        for (ContactSlot slot : run.slots) {
+            run.model.access().setSpins(slot.ctx, run.set.smoothingSpinFraction() * run.speedScale / r,
+                run.stickEps / r);
+        }
         double tol = run.set.tolerance();
         double eScale = run.m * run.speedScale * run.speedScale + run.m * gn * r;
         run.absTol = new double[DIM];
@@ -304,7 +311,7 @@ public final class Engine {
             y[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()],
             y[LOSS + LossKind.OTHER.ordinal()],
-            run.impactLoss, y[APPLIED], scale, y[StateMapper.DAMPING]);
+            run.impactLoss, y[APPLIED], y[DRIVE] + run.impulseDrive, scale, y[StateMapper.DAMPING]);
         RunResult result = new RunResult(reason, message, endState, run.events, run.spans, budget,
             run.maxDistanceError, run.maxNormalForce, run.dyn.evaluations, run.steps);
         String bad = Results.nonFinite(result);

@@ -8,7 +8,9 @@ import org.trundle.core.EventKind;
 import org.trundle.core.Phase;
 
 /**
- * Patch exit: the patch margin of the contact point (m) falls to zero. The run ends there
+ * Patch exit: the patch margin of the contact point (m) falls to zero. When a neighbouring patch of
+ * the scene continues the surface there ({@link Transitions#neighbour}) the contact is handed over
+ * to it (event {@code handover}); otherwise the ball leaves every patch: the run ends there
  * ({@code stopAtExit}) or goes on in flight. Watched in contact on patches with edges.
  */
 final class ExitRule extends SwitchRule {
@@ -51,10 +53,22 @@ final class ExitRule extends SwitchRule {
 
     @Override
     EndReason react(Transitions x, BallState before) {
-        run.surface.query(run.t, run.centreOf(run.y), run.dyn.geo);
+        run.slot.query(run.t, run.centreOf(run.y));
         String edge = run.surface.edgeName(run.dyn.geo.edge);
         if (run.phase() == Phase.ROLLING) {
             x.setDerivedVelocity();
+        }
+        ContactSlot next = run.slots.length > 1 ? x.neighbour() : null;
+        if (next != null) {
+            // a neighbour continues the surface: the contact moves on, no impulse, same mode
+            String from = run.slot.id;
+            run.activate(next);
+            x.projectOntoSurface(true);
+            if (run.phase() == Phase.ROLLING) {
+                x.setDerivedVelocity();
+            }
+            run.log(EventKind.HANDOVER, before, null, Vector3D.ZERO, edge, from);
+            return null;
         }
         if (run.set.stopAtExit()) {
             run.log(EventKind.EXIT, before, before, Vector3D.ZERO, edge);

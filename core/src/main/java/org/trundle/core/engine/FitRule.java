@@ -33,7 +33,7 @@ final class FitRule extends SwitchRule {
 
     @Override
     EndReason react(Transitions x, BallState before) {
-        run.surface.query(run.t, run.centreOf(run.y), run.dyn.geo);
+        run.slot.query(run.t, run.centreOf(run.y));
         run.stopMessage = String.format(Locale.ROOT,
             "ball of radius %s m no longer fits surface %s at the contact point: r*kappa = %s >= 1",
             run.r, run.surface.name(), run.r * run.dyn.geo.curvature1);

@@ -40,10 +40,12 @@ final class Run {
     final double inertia;
     final double[] g;
     final ContactSet contacts;
-    /** The slot of the single patch (its surface and law). */
-    final ContactSlot slot;
-    final Surface surface;
-    final ContactLaw law;
+    /** Every patch's slot, in scene order. */
+    final ContactSlot[] slots;
+    /** The active slot (the patch touched, or last touched) and its surface and law. */
+    ContactSlot slot;
+    Surface surface;
+    ContactLaw law;
     final Dynamics dyn;
     final Snapshots snapshots;
     /** The patch's compliant contact, or null for the rigid contact. */
@@ -58,7 +60,7 @@ final class Run {
     double settleSpeed;
     double impactSlack;
     double restSpeed;
-    final double restitution;
+    double restitution;
     double[] absTol;
     double[] relTol;
 
@@ -84,6 +86,8 @@ final class Run {
     double extent;
     double[] c0;
     double impactLoss;
+    /** Drive work received in impulses (impacts, sticking, settling) from a moving patch (J). */
+    double impulseDrive;
     long steps;
     /** Step size (s) the next segment starts with, after a projection restart; 0: Hipparchus' own estimate. */
     double restartStep;
@@ -109,8 +113,12 @@ final class Run {
         this.k = ball.inertiaFactor();
         this.inertia = ball.momentOfInertia();
         this.g = model.gravity().toArray();
-        this.slot = new ContactSlot(model.surface(), model.law());
-        this.contacts = new ContactSet(slot);
+        this.slots = new ContactSlot[model.patches().size()];
+        for (int i = 0; i < slots.length; i++) {
+            slots[i] = new ContactSlot(i, model.patches().get(i));
+        }
+        this.contacts = new ContactSet(slots);
+        this.slot = slots[0];
         this.surface = slot.surface;
         this.law = slot.law;
         this.dyn = new Dynamics(model, slot);
@@ -118,6 +126,24 @@ final class Run {
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
         this.dyn.stageObserver = snapshots::stageAtStepEnd;
+    }
+
+    /**
+     * Makes {@code s} the active slot (the patch touched next): the contact set, the right-hand
+     * side and the run's surface, law and restitution follow.
+     *
+     * @param s the slot
+     */
+    void activate(ContactSlot s) {
+        if (s == slot) {
+            return;
+        }
+        contacts.activate(s);
+        dyn.setSlot(s);
+        slot = s;
+        surface = s.surface;
+        law = s.law;
+        restitution = law.restitution().orElse(0.0);
     }
 
     /** @return the global phase (summary of the contact set) */
@@ -264,7 +290,8 @@ final class Run {
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
             onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         }
-        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent));
+        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent,
+            touching ? slot.contactIds : java.util.List.of()));
     }
 
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse) {
@@ -272,9 +299,14 @@ final class Run {
     }
 
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse, String edge) {
+        log(kind, before, after, impulse, edge, null);
+    }
+
+    /** Logs an event on the active patch; {@code from} is the patch left by a hand-over, else null. */
+    void log(EventKind kind, BallState before, BallState after, Vector3D impulse, String edge, String from) {
         Phase phase = phase();
         BallState a = after != null ? after : toState(t, y, phase);
-        RunEvent e = new RunEvent(kind, before, a, edge, impulse);
+        RunEvent e = new RunEvent(kind, before, a, edge, impulse, slot.id, from, from != null ? slot.id : null);
         events.add(e);
         trackForce(t, y, phase);
         emitSample(t, y, phase, true);

@@ -21,17 +21,24 @@ final class Segment {
     private final Transitions transitions;
     /** Every rule, in the order their detectors are added (which orders simultaneous events). */
     private final SwitchRule[] rules;
-    /** Integrated layout per phase, built on first use. */
-    private final int[][] layouts = new int[Phase.values().length][];
+    /** Integrated layout per patch and phase, built on first use. */
+    private final int[][][] layouts;
     /** The rule whose switch stopped the segment, or null. */
     SwitchRule fired;
 
     Segment(Run run, Transitions transitions) {
         this.run = run;
         this.transitions = transitions;
-        this.rules = new SwitchRule[] {
+        java.util.List<SwitchRule> list = new java.util.ArrayList<>(java.util.List.of(
             new LiftOffRule(run), new RestRule(run), new FitRule(run), new ExitRule(run),
-            new SlipRule(run), new StickRule(run), new ImpactRule(run), new ReleaseRule(run)};
+            new SlipRule(run), new StickRule(run)));
+        for (ContactSlot s : run.slots) {
+            list.add(new ImpactRule(run, s));
+        }
+        list.add(new ReleaseRule(run));
+        list.add(new PivotRule(run));
+        this.rules = list.toArray(new SwitchRule[0]);
+        this.layouts = new int[run.slots.length][Phase.values().length][];
     }
 
     /**
@@ -46,12 +53,14 @@ final class Segment {
         Phase phase = run.phase();
         Dynamics dyn = run.dyn;
         dyn.phase = phase;
-        int[] layout = layouts[phase.ordinal()];
+        int[][] perPhase = layouts[run.slot.index];
+        int[] layout = perPhase[phase.ordinal()];
         if (layout == null) {
             // a compliant contact integrates flight with every loss (its friction, couples and damping)
             layout = run.compliance != null ? StateMapper.identity()
-                : StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE);
-            layouts[phase.ordinal()] = layout;
+                : StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE,
+                    run.slot.moving);
+            perPhase[phase.ordinal()] = layout;
         }
         double[] abs = new double[layout.length];
         double[] rel = new double[layout.length];
@@ -69,13 +78,15 @@ final class Segment {
         if (phase.inContact()) {
             // a switch may hand over a drifted state: start each contact segment well within the
             // projection thresholds (the step observer checks them only at step ends)
-            run.surface.query(run.t, run.centreOf(run.y), dyn.geo);
+            run.slot.query(run.t, run.centreOf(run.y));
             if (run.snapshots.drift(run.y, dyn.geo.distance) >= 0.5) {
                 run.y = transitions.projected(run.t, run.y);
             }
         } else {
             // a flight may end far from where it began: let Newton-based surfaces start afresh
-            dyn.geo.resetHint();
+            for (ContactSlot s : run.slots) {
+                s.geo.resetHint();
+            }
         }
         for (SwitchRule rule : rules) {
             if (rule.watches(phase)) {
@@ -120,7 +131,7 @@ final class Segment {
             Dynamics dyn = run.dyn;
             double tc = cur.getTime();
             boolean observed = run.observer != RunObserver.NONE;
-            double[] yc = observed || phase == Phase.SLIDING ? run.snapshots.fullState(cur) : null;
+            double[] yc = observed ? run.snapshots.fullState(cur) : null;
             double interval = run.set.sampleInterval();
             if (interval > 0) {
                 while (true) {
@@ -136,18 +147,17 @@ final class Segment {
             } else if (tc < run.endTime && observed) {
                 run.emitSample(tc, yc, phase, false);
             }
+            // kinetic energy, centre and slip from the snapshot (every layout starts with the
+            // centre), which the integrator's FSAL stage at the step end filled without an evaluation
+            Snapshot s = run.snapshots.at(cur);
             if (phase == Phase.SLIDING) {
-                dyn.phase = Phase.SLIDING;
-                dyn.evaluate(tc, yc);
-                double sp = dyn.slipSpeed;
+                double sp = s.slipSpeed;
                 if (sp > run.stickEps) {
                     for (int i = 0; i < 3; i++) {
-                        dyn.slideDir0[i] = dyn.slip[i] / sp;
+                        dyn.slideDir0[i] = s.slip[i] / sp;
                     }
                 }
             }
-            // kinetic energy and centre from the snapshot (every layout starts with the centre)
-            Snapshot s = run.snapshots.at(cur);
             double[] yk = run.snapshots.lastKey();
             run.maxKinetic = Math.max(run.maxKinetic, s.kinetic);
             double dx = yk[0] - run.c0[0];

@@ -12,6 +12,8 @@ final class Snapshot {
     double gripMargin;
     /** Slip speed |s| (m/s); sliding. */
     double slipSpeed;
+    /** Contact-point slip velocity {@code P(v − r ω × n)} (m/s); sliding. */
+    final double[] slip = new double[3];
     /** Speed measure |v| + r|ω| (m/s); contact phases. */
     double speed;
     /** Patch margin (m), positive inside the patch. */
@@ -31,6 +33,22 @@ final class Snapshot {
     double drift;
     /** Acceleration measure |a| + r|α| (m/s²); contact phases. */
     double acceleration;
+    /** Spin about the normal {@code ω·n} (rad/s); rolling with a set-valued pivoting couple only. */
+    double normalSpin;
+    /**
+     * The law's set-valued pivoting couple minus the magnitude of the contact couple about the normal
+     * that keeps {@code ω·n} constant (N·m); rolling with a set-valued pivoting couple only.
+     */
+    double pivotMargin;
     /** Kinetic energy (J). */
     double kinetic;
+    /**
+     * Flight: per patch (scene order), a lower bound of the centre's signed distance from the patch's
+     * surface (m), exact within two radii of it (see {@link ContactSlot#distanceBound}).
+     */
+    final double[] slotDistance;
+
+    Snapshot(int patches) {
+        slotDistance = new double[patches];
+    }
 }

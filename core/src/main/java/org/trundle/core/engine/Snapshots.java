@@ -21,16 +21,23 @@ final class Snapshots {
 
     /**
      * Drift of the quaternion norm {@code ||q| − 1|} above which the step-end handler restarts the
-     * integrator only to normalise it. The norm does not enter the equations of motion (the spin
-     * is integrated on its own and every output state is normalised), so a tight threshold
-     * (1e-12 formerly) restarted the integration on most steps at the default tolerance for no
-     * gain in accuracy; the quaternion is still normalised whenever a projection happens anyway.
+     * integrator only to normalise it, at a distance threshold of 1e-10 r; it scales with the
+     * distance threshold in force
+     * ({@link org.trundle.core.SolverSettings#effectiveProjectionThreshold()}).
+     * The norm does not enter the equations of motion (the spin is integrated on its own and every
+     * output state is normalised), so a tight threshold (1e-12 formerly) restarted the integration
+     * on most steps for no gain in accuracy; the quaternion is still normalised whenever a
+     * projection happens anyway.
      */
     static final double QUATERNION_DRIFT = 1e-9;
 
     private final Run run;
     private final Dynamics dyn;
     private final double r;
+    /** Distance threshold in force, as a fraction of the radius. */
+    private final double distanceThreshold;
+    /** Quaternion norm threshold in force. */
+    private final double quaternionThreshold;
     private final double[][] cacheY = new double[CACHE][DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
@@ -49,8 +56,10 @@ final class Snapshots {
         this.run = run;
         this.dyn = run.dyn;
         this.r = run.r;
+        this.distanceThreshold = run.set.effectiveProjectionThreshold();
+        this.quaternionThreshold = QUATERNION_DRIFT * (distanceThreshold / 1e-10);
         for (int i = 0; i < CACHE; i++) {
-            values[i] = new Snapshot();
+            values[i] = new Snapshot(run.slots.length);
         }
     }
 
@@ -128,7 +137,11 @@ final class Snapshots {
             if (!Double.isFinite(c[0] + c[1] + c[2])) {
                 throw Dynamics.nonFiniteCentre(ts, c);
             }
-            run.surface.query(ts, c, dyn.geo);
+            // an event check in flight is work too: it counts against the evaluation budget
+            dyn.countCheck();
+            for (ContactSlot s : run.slots) {
+                v.slotDistance[s.index] = s.distanceBound(ts, c, 2 * r, 1e-3 * r);
+            }
         }
         fill(ys, dyn.lastDerivative(), v, phase);
     }
@@ -140,9 +153,32 @@ final class Snapshots {
             v.normalForce = dyn.normalForce;
             v.gripMargin = dyn.grip - dyn.neededTangential;
             v.slipSpeed = dyn.slipSpeed;
-            v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
-            v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
-                + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
+            if (phase == Phase.SLIDING) {
+                v.slip[0] = dyn.slip[0];
+                v.slip[1] = dyn.slip[1];
+                v.slip[2] = dyn.slip[2];
+            }
+            if (run.slot.moving) {
+                // relative to the patch: |v − u(c)| + r|ω − Ω| and |a − du(c)/dt| + r|α − Ω̇|
+                v.speed = dyn.relativeSpeed;
+                double[] as = dyn.surfaceAcceleration;
+                double[] sr = run.slot.pose.spinRate;
+                double ax = yd[V] - as[0];
+                double ay = yd[V + 1] - as[1];
+                double az = yd[V + 2] - as[2];
+                double bx = yd[W] - sr[0];
+                double by = yd[W + 1] - sr[1];
+                double bz = yd[W + 2] - sr[2];
+                v.acceleration = Math.sqrt(ax * ax + ay * ay + az * az) + r * Math.sqrt(bx * bx + by * by + bz * bz);
+            } else {
+                v.speed = ContactKinematics.speedMeasure(r, dyn.vel, ys);
+                v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
+                    + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
+            }
+            if (dyn.pivotStick && phase == Phase.ROLLING) {
+                v.normalSpin = dyn.normalSpin;
+                v.pivotMargin = dyn.pivotLimit - Math.abs(dyn.pivotNeeded);
+            }
         }
         v.patchMargin = dyn.geo.patchMargin;
         v.distance = dyn.geo.distance;
@@ -206,8 +242,8 @@ final class Snapshots {
      * {@link Snapshot#drift}). Rolling has no slip drift: its velocity is derived, {@code v = r ω × n}.
      */
     double drift(double[] ys, double distance) {
-        double d = Math.abs(distance - r) / (run.set.projectionThreshold() * r);
-        return Math.max(d, Math.abs(StateMapper.quaternionNorm(ys) - 1) / QUATERNION_DRIFT);
+        double d = Math.abs(distance - r) / (distanceThreshold * r);
+        return Math.max(d, Math.abs(StateMapper.quaternionNorm(ys) - 1) / quaternionThreshold);
     }
 
     /**
@@ -218,7 +254,7 @@ final class Snapshots {
         double[] out = dyn.expand(s.getPrimaryState(), new double[DIM]);
         if (dyn.derivedVelocity()) {
             Snapshot sn = at(s);
-            ContactKinematics.noSlipVelocity(r, out[W], out[W + 1], out[W + 2], sn.normal, out, V);
+            ContactKinematics.rollingVelocity(run.slot, s.getTime(), r, sn.normal, out);
         }
         return out;
     }

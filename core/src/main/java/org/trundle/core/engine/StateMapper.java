@@ -10,10 +10,10 @@ import org.trundle.core.Phase;
  * The one mapping between the domain state {@link BallState} and the solver's arrays, and the
  * per-phase integrated layouts.
  *
- * <p>Full layout ({@link #DIM} = 20): centre c (m) [0,3), velocity v (m/s) [3,6), quaternion q
+ * <p>Full layout ({@link #DIM} = 21): centre c (m) [0,3), velocity v (m/s) [3,6), quaternion q
  * [6,10), spin ω (rad/s) [10,13), dissipated work by {@link LossKind} (J) [13,17), applied-load work
  * (J) [17], centre path length (m) [18], work of a compliant contact's damping (J) [19] (booked as
- * {@link LossKind#CONTACT_DAMPING}).
+ * {@link LossKind#CONTACT_DAMPING}), work done on the ball by moving patches (J) [20].
  *
  * <p>Quaternion convention: the array holds the Hamilton quaternion, scalar first, body to world
  * ({@code x_world = q x_body q*}, {@code q̇ = ½ (0, ω) ⊗ q}); Hipparchus' {@link Rotation} stores the
@@ -38,8 +38,10 @@ public final class StateMapper {
     public static final int PATH = 18;
     /** Index of the compliant contact's damping work ({@link LossKind#CONTACT_DAMPING}). */
     public static final int DAMPING = 19;
+    /** Index of the drive work of moving patches. */
+    public static final int DRIVE = 20;
     /** Length of the full layout. */
-    public static final int DIM = 20;
+    public static final int DIM = 21;
 
     private static final int[] IDENTITY = java.util.stream.IntStream.range(0, DIM).toArray();
 
@@ -92,15 +94,16 @@ public final class StateMapper {
     /**
      * The components integrated in a phase (full indices, in compact order): centre, velocity
      * (not while rolling), quaternion, spin, then the sliding loss (sliding), the couple losses
-     * (contact phases, when the law has couples), the applied work (when there is a load) and the
-     * path length.
+     * (contact phases, when the law has couples), the applied work (when there is a load), the
+     * path length and the drive work (contact phases on a moving patch).
      *
      * @param phase the phase
      * @param couples whether the law adds couples
      * @param loaded whether there is an applied load
+     * @param moving whether the patch moves
      * @return the layout (the shared identity array when it is the full layout)
      */
-    static int[] layout(Phase phase, boolean couples, boolean loaded) {
+    static int[] layout(Phase phase, boolean couples, boolean loaded, boolean moving) {
         int[] out = new int[DIM];
         int n = 0;
         for (int i = C; i < LOSS; i++) {
@@ -120,6 +123,9 @@ public final class StateMapper {
             out[n++] = APPLIED;
         }
         out[n++] = PATH;
+        if (moving && phase.inContact()) {
+            out[n++] = DRIVE;
+        }
         return n == DIM ? IDENTITY : java.util.Arrays.copyOf(out, n);
     }
 
@@ -140,7 +146,16 @@ public final class StateMapper {
         } else if (i < APPLIED) {
             return "loss " + LossKind.values()[i - LOSS].name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
         }
-        return i == APPLIED ? "applied work" : "path length";
+        switch (i) {
+            case APPLIED:
+                return "applied work";
+            case PATH:
+                return "path length";
+            case DAMPING:
+                return "contact damping work";
+            default:
+                return "drive work";
+        }
     }
 
     /** @return the full layout (identity map) */

@@ -49,29 +49,40 @@ final class Transitions {
     Phase startPhase(Phase requested) {
         double t = run.t;
         double[] y = run.y;
-        run.surface.query(t, run.centreOf(y), dyn.geo);
-        double gap = dyn.geo.distance - r;
         double tolLen = run.set.contactTolerance() * r;
-        String name = run.surface.name();
         if (run.compliance != null) {
-            // a compliant contact is a force in flight: any start integrates as flight; a start pressing the
-            // wall is a contact already under way (its damping set from the settle speed)
+            // a compliant contact (a one-patch scene that stands still) is a force in flight: any start
+            // integrates as flight; a start pressing the wall is a contact already under way (its damping
+            // set from the settle speed)
+            run.slot.query(t, run.centreOf(y));
+            double gap = dyn.geo.distance - r;
             if (gap < -tolLen) {
                 throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
-                    name, dyn.geo.distance, r));
+                    run.surface.name(), dyn.geo.distance, r));
             }
             run.touching = gap < 0 && dyn.geo.patchMargin >= 0;
             return Phase.FLIGHT;
         }
         if (requested == Phase.FLIGHT) {
-            if (gap < -tolLen) {
-                throw run.reject(String.format(Locale.ROOT,
-                    "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
-                    name, dyn.geo.distance, r));
+            // a flight start needs no closest point: only a bound that shows no patch is penetrated
+            for (ContactSlot s : run.slots) {
+                double d = s.distanceBound(t, run.centreOf(y), r - tolLen, 1e-3 * r);
+                if (d - r < -tolLen) {
+                    throw run.reject(String.format(Locale.ROOT,
+                        "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
+                        s.surface.name(), d, r));
+                }
             }
             return Phase.FLIGHT;
         }
+        ContactSlot touched = run.slots.length > 1 ? touching(t, y, tolLen) : null;
+        if (touched != null) {
+            run.activate(touched);
+        }
+        run.slot.query(t, run.centreOf(y));
+        double gap = dyn.geo.distance - r;
+        String name = run.surface.name();
         if (Math.abs(gap) > tolLen) {
             throw run.reject(String.format(Locale.ROOT,
                 "start centre is %s m from surface %s, but a %s start needs distance r = %s m (tolerance %s m);"
@@ -83,7 +94,7 @@ final class Transitions {
                 "start contact point lies outside the patch of surface %s by %s m (edge %s)",
                 name, -dyn.geo.patchMargin, run.surface.edgeName(dyn.geo.edge)));
         }
-        double vn = ContactKinematics.normalPart(y, V, dyn.geo.normal);
+        double vn = ContactKinematics.relativeNormalSpeed(run.slot, t, dyn.geo.normal, y);
         double tolSpeed = run.set.contactTolerance() * run.speedScale;
         if (Math.abs(vn) > tolSpeed) {
             throw run.reject(String.format(Locale.ROOT,
@@ -106,13 +117,70 @@ final class Transitions {
         if (p == Phase.FLIGHT) {
             BallState s0 = run.toState(t, run.y, requested == Phase.SLIDING ? Phase.SLIDING : Phase.ROLLING);
             run.events.add(new RunEvent(EventKind.LIFT_OFF, s0, run.toState(t, run.y, Phase.FLIGHT), null,
-                Vector3D.ZERO));
+                Vector3D.ZERO, run.slot.id, null, null));
         } else if (p == Phase.SLIDING && requested != Phase.SLIDING) {
             BallState s0 = run.toState(t, run.y, Phase.ROLLING);
             run.events.add(new RunEvent(EventKind.SLIP, s0, run.toState(t, run.y, Phase.SLIDING), null,
-                Vector3D.ZERO));
+                Vector3D.ZERO, run.slot.id, null, null));
         }
         return p;
+    }
+
+    /**
+     * The first patch the centre touches (distance r within {@code tol}, contact point on the
+     * patch), or null.
+     */
+    private ContactSlot touching(double t, double[] y, double tol) {
+        for (ContactSlot s : run.slots) {
+            try {
+                s.query(t, run.centreOf(y));
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                continue;
+            }
+            if (Math.abs(s.geo.distance - r) <= tol && s.geo.patchMargin >= 0) {
+                return s;
+            }
+        }
+        return null;
+    }
+
+    /**
+     * The neighbour that continues the surface where the contact point leaves the active patch: a
+     * patch other than the active one whose surface is at distance r from the centre (within the
+     * contact tolerance) and whose patch holds the contact point a little ahead along the centre's
+     * motion (one millionth of a radius, so that a join exactly on both edges hands over forward).
+     *
+     * @return the neighbour, or null when the ball leaves every patch there
+     */
+    ContactSlot neighbour() {
+        double t = run.t;
+        double[] y = run.y;
+        double tol = run.set.contactTolerance() * r;
+        double[] c = {y[C], y[C + 1], y[C + 2]};
+        double vx = y[V];
+        double vy = y[V + 1];
+        double vz = y[V + 2];
+        double sp = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        double step = sp > 0 ? 1e-6 * r / sp : 0.0;
+        double[] ahead = {c[0] + vx * step, c[1] + vy * step, c[2] + vz * step};
+        for (ContactSlot s : run.slots) {
+            if (s == run.slot) {
+                continue;
+            }
+            try {
+                s.query(t, c);
+                if (!(Math.abs(s.geo.distance - r) <= tol)) {
+                    continue;
+                }
+                s.query(t, ahead);
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                continue;
+            }
+            if (s.geo.patchMargin >= 0) {
+                return s;
+            }
+        }
+        return null;
     }
 
     // ---------------------------------------------------------------- modes
@@ -170,8 +238,80 @@ final class Transitions {
     boolean restsNow() {
         dyn.phase = run.phase();
         dyn.evaluate(run.t, run.y);
-        return ContactKinematics.speedMeasure(r, dyn.vel, run.y) <= run.restSpeed
+        return speedMeasure(run.t, dyn.vel, run.y) <= run.restSpeed
             && dyn.canRest(run.t, run.y, 1e-9);
+    }
+
+    /**
+     * The speed measure {@code |v − u(c)| + r|ω − Ω|} (m/s) relative to the patch, with centre
+     * velocity {@code v}; {@code |v| + r|ω|} on a still patch.
+     */
+    double speedMeasure(double t, double[] v, double[] y) {
+        if (!run.slot.moving) {
+            return ContactKinematics.speedMeasure(r, v, y);
+        }
+        double[] vr = new double[3];
+        double[] wr = new double[3];
+        double[] yv = y.clone();
+        System.arraycopy(v, 0, yv, V, 3);
+        ContactKinematics.relative(run.slot, t, yv, vr, wr);
+        return Vec.norm(vr) + r * Vec.norm(wr);
+    }
+
+    // ---------------------------------------------------------------- pivoting stick
+
+    /**
+     * The pivoting stick at the run's state (rolling, law with a set-valued pivoting couple): the
+     * spin about the normal is removed by an angular impulse about the normal (its energy booked as
+     * pivoting loss; the no-slip velocity does not change) and, when the couple needed to keep it
+     * at zero is within the law's pivoting couple, the hold begins.
+     *
+     * @return whether the spin is now held
+     */
+    boolean pivotStick() {
+        double[] y = run.y;
+        dyn.phase = Phase.ROLLING;
+        dyn.evaluate(run.t, y);
+        double[] n = dyn.geo.normal;
+        double sn = dyn.normalSpin;
+        double before = run.kinetic(y);
+        for (int i = 0; i < 3; i++) {
+            y[W + i] -= sn * n[i];
+        }
+        y[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] += before - run.kinetic(y);
+        // H n = 0, so the needed couple −I ω·(H v) is the same with the spin about n removed
+        boolean hold = Math.abs(dyn.pivotNeeded) <= dyn.pivotLimit && dyn.pivotLimit > 0;
+        run.slot.pivotHeld = hold;
+        return hold;
+    }
+
+    /**
+     * Before a rolling segment of a law with a set-valued pivoting couple: takes the hold when the
+     * spin about the normal is already within {@link PivotRule#band} and the needed couple within
+     * the limit (not at the instant of a release), drops it when the needed couple is past the limit.
+     *
+     * @return the event to log, or null
+     */
+    EventKind pivotCheck() {
+        ContactSlot slot = run.slot;
+        if (!slot.pivotStick || run.phase() != Phase.ROLLING) {
+            return null;
+        }
+        dyn.phase = Phase.ROLLING;
+        dyn.evaluate(run.t, run.y);
+        double margin = dyn.pivotLimit - Math.abs(dyn.pivotNeeded);
+        if (slot.pivotHeld) {
+            if (margin < 0) {
+                slot.pivotHeld = false;
+                slot.pivotReleasedAt = run.t;
+                return EventKind.PIVOT_RELEASE;
+            }
+            return null;
+        }
+        if (Math.abs(dyn.normalSpin) <= PivotRule.band(run) && margin > 0 && run.t != slot.pivotReleasedAt) {
+            return pivotStick() ? EventKind.PIVOT_STICK : null;
+        }
+        return null;
     }
 
     // ---------------------------------------------------------------- impulses
@@ -179,13 +319,15 @@ final class Transitions {
     /** Removes the contact-point slip by the impulse {@code J = −k m s/(1+k)}; books the loss. */
     Vector3D stickImpulse() {
         double[] y = run.y;
-        run.surface.query(run.t, run.centreOf(y), dyn.geo);
+        run.slot.query(run.t, run.centreOf(y));
         double[] s = slipOf(y);
         double f = -k * m / (1 + k);
         double[] j = {f * s[0], f * s[1], f * s[2]};
         double before = run.kinetic(y);
+        double drive = driveOf(j, y);
         applyImpulse(j);
-        y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] += before - run.kinetic(y);
+        y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] += before - run.kinetic(y) + drive;
+        run.impulseDrive += drive;
         return new Vector3D(j[0], j[1], j[2]);
     }
 
@@ -196,8 +338,8 @@ final class Transitions {
      */
     void rewindToContact() {
         double[] y = run.y;
-        run.surface.query(run.t, run.centreOf(y), dyn.geo);
-        double vn = ContactKinematics.normalPart(y, V, dyn.geo.normal);
+        run.slot.query(run.t, run.centreOf(y));
+        double vn = ContactKinematics.relativeNormalSpeed(run.slot, run.t, dyn.geo.normal, y);
         double pen = r - dyn.geo.distance;
         if (!(vn < 0) || !(pen > 0)) {
             return;
@@ -221,14 +363,18 @@ final class Transitions {
      */
     Vector3D impact() {
         double[] y = run.y;
-        run.surface.query(run.t, run.centreOf(y), dyn.geo);
+        run.slot.query(run.t, run.centreOf(y));
         double[] n = dyn.geo.normal.clone();
-        double vn = ContactKinematics.normalPart(y, V, n);
+        double vn = ContactKinematics.relativeNormalSpeed(run.slot, run.t, n, y);
         double[] s = slipOf(y);
         double jn = -(1 + run.restitution) * m * vn;
         double f = -k * m / (1 + k);
         double[] jt = {f * s[0], f * s[1], f * s[2]};
         double[] w = {y[W], y[W + 1], y[W + 2]};
+        if (run.slot.moving) {
+            double[] vr = new double[3];
+            ContactKinematics.relative(run.slot, run.t, y, vr, w);
+        }
         run.model.access().set(dyn.ctx, run.ball, dyn.geo, jn, Phase.SLIDING, s, w, true);
         double gripJ = run.law.gripLimit(dyn.ctx);
         if (!(gripJ >= 0)) {
@@ -247,30 +393,50 @@ final class Transitions {
         }
         double[] j = {jn * n[0] + jt[0], jn * n[1] + jt[1], jn * n[2] + jt[2]};
         double before = run.kinetic(y);
+        double drive = driveOf(j, y);
         applyImpulse(j);
         projectOntoSurface(false);
-        double vn1 = ContactKinematics.normalPart(y, V, n);
-        run.impactLoss += before - run.kinetic(y);
+        double vn1 = ContactKinematics.relativeNormalSpeed(run.slot, run.t, n, y);
+        run.impactLoss += before - run.kinetic(y) + drive;
+        run.impulseDrive += drive;
         if (vn1 <= run.settleSpeed) {
             double[] saved = y.clone();
             double ke = run.kinetic(y);
+            double[] settle = {-m * vn1 * n[0], -m * vn1 * n[1], -m * vn1 * n[2]};
+            double settleDrive = driveOf(settle, y);
             for (int i = 0; i < 3; i++) {
                 y[V + i] -= vn1 * n[i];
             }
-            double settleLoss = ke - run.kinetic(y);
+            double settleLoss = ke - run.kinetic(y) + settleDrive;
             double lossBefore = y[LOSS + LossKind.SLIDING_FRICTION.ordinal()];
+            double driveBefore = run.impulseDrive;
             double[] sl = slipOf(y);
             Phase next = chooseContactPhase(Vec.norm(sl) <= run.stickEps);
             if (next != Phase.FLIGHT) {
                 run.impactLoss += settleLoss;
+                run.impulseDrive += settleDrive;
                 run.changePhase(next);
                 return new Vector3D(j[0], j[1], j[2]).add(-m * vn1, new Vector3D(n[0], n[1], n[2]));
             }
             run.y = saved;
             saved[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossBefore;
+            run.impulseDrive = driveBefore;
         }
         run.setPhase(Phase.FLIGHT);
         return new Vector3D(j[0], j[1], j[2]);
+    }
+
+    /**
+     * The work {@code J·u(p)} an impulse at the contact point receives from a moving patch (the part
+     * of the kinetic energy change that is drive work, not loss); 0 on a still patch.
+     */
+    private double driveOf(double[] j, double[] y) {
+        if (!run.slot.moving) {
+            return 0.0;
+        }
+        double[] c = {y[C], y[C + 1], y[C + 2]};
+        double[] up = ContactKinematics.patchVelocityAtContact(run.slot, run.t, c, r, dyn.geo.normal);
+        return j[0] * up[0] + j[1] * up[1] + j[2] * up[2];
     }
 
     /** Applies an impulse J at the contact point: {@code Δv = J/m}, {@code Δω = −r n × J / I}. */
@@ -292,6 +458,13 @@ final class Transitions {
     /** Slip velocity of the contact point, tangential part, from the state's v and ω (uses dyn.geo; allocates). */
     double[] slipOf(double[] ys) {
         double[] s = new double[3];
+        if (run.slot.moving) {
+            double[] vr = new double[3];
+            double[] wr = new double[3];
+            ContactKinematics.relative(run.slot, run.t, ys, vr, wr);
+            ContactKinematics.slip(r, vr, 0, wr, 0, dyn.geo.normal, s);
+            return s;
+        }
         ContactKinematics.slip(r, ys, V, ys, W, dyn.geo.normal, s);
         return s;
     }
@@ -299,8 +472,8 @@ final class Transitions {
     /** Sets the velocity slot of the run's state to the no-slip velocity r ω × n. */
     void setDerivedVelocity() {
         double[] y = run.y;
-        run.surface.query(run.t, run.centreOf(y), dyn.geo);
-        ContactKinematics.noSlipVelocity(r, y[W], y[W + 1], y[W + 2], dyn.geo.normal, y, V);
+        run.slot.query(run.t, run.centreOf(y));
+        ContactKinematics.rollingVelocity(run.slot, run.t, r, dyn.geo.normal, y);
     }
 
     /**
@@ -309,15 +482,15 @@ final class Transitions {
      */
     void projectOntoSurface(boolean removeNormal) {
         double[] y = run.y;
-        run.surface.query(run.t, run.centreOf(y), dyn.geo);
+        run.slot.query(run.t, run.centreOf(y));
         double dr = r - dyn.geo.distance;
         double[] n = dyn.geo.normal;
         for (int i = 0; i < 3; i++) {
             y[C + i] += dr * n[i];
         }
-        run.surface.query(run.t, run.centreOf(y), dyn.geo);
+        run.slot.query(run.t, run.centreOf(y));
         if (removeNormal) {
-            ContactKinematics.removeNormalPart(y, V, dyn.geo.normal);
+            ContactKinematics.removeRelativeNormalPart(run.slot, run.t, dyn.geo.normal, y);
         }
     }
 
@@ -328,7 +501,7 @@ final class Transitions {
      * stripped of its normal part (sliding).
      */
     double[] projected(double ts, double[] ys) {
-        run.surface.query(ts, run.centreOf(ys), dyn.geo);
+        run.slot.query(ts, run.centreOf(ys));
         double[] p = ys.clone();
         double dr = r - dyn.geo.distance;
         for (int i = 0; i < 3; i++) {
@@ -338,12 +511,12 @@ final class Transitions {
         for (int i = 0; i < 4; i++) {
             p[Q + i] /= qn;
         }
-        run.surface.query(ts, run.centreOf(p), dyn.geo);
+        run.slot.query(ts, run.centreOf(p));
         double[] n = dyn.geo.normal;
         if (run.phase() == Phase.ROLLING) {
-            ContactKinematics.noSlipVelocity(r, p[W], p[W + 1], p[W + 2], n, p, V);
+            ContactKinematics.rollingVelocity(run.slot, ts, r, n, p);
         } else {
-            ContactKinematics.removeNormalPart(p, V, n);
+            ContactKinematics.removeRelativeNormalPart(run.slot, ts, n, p);
         }
         return p;
     }

@@ -53,15 +53,19 @@ class LayoutTest {
     @Test
     void layoutsHoldWhatMovesInEachPhase() {
         assertArrayEquals(new int[] {0, 1, 2, 6, 7, 8, 9, 10, 11, 12, 18},
-            StateMapper.layout(Phase.ROLLING, false, false), "rolling derives v, no losses, no load");
+            StateMapper.layout(Phase.ROLLING, false, false, false), "rolling derives v, no losses, no load");
         assertArrayEquals(new int[] {0, 1, 2, 6, 7, 8, 9, 10, 11, 12, 14, 15, 16, 17, 18},
-            StateMapper.layout(Phase.ROLLING, true, true), "rolling with couples and a load");
+            StateMapper.layout(Phase.ROLLING, true, true, false), "rolling with couples and a load");
         assertArrayEquals(new int[] {0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12, 13, 18},
-            StateMapper.layout(Phase.SLIDING, false, false), "sliding books its friction loss");
-        assertEquals(StateMapper.DIM - 1, StateMapper.layout(Phase.SLIDING, true, true).length,
-            "sliding with all: every component but the compliant contact's damping");
+            StateMapper.layout(Phase.SLIDING, false, false, false), "sliding books its friction loss");
+        assertEquals(StateMapper.DIM - 2, StateMapper.layout(Phase.SLIDING, true, true, false).length,
+            "sliding with all on a still patch: all but the compliant contact's damping and the drive work");
+        assertEquals(StateMapper.DIM - 1, StateMapper.layout(Phase.SLIDING, true, true, true).length,
+            "sliding with all on a moving patch: every component but the compliant contact's damping");
+        assertArrayEquals(new int[] {0, 1, 2, 6, 7, 8, 9, 10, 11, 12, 18, 20},
+            StateMapper.layout(Phase.ROLLING, false, false, true), "rolling on a moving patch books its drive work");
         assertArrayEquals(new int[] {0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12, 17, 18},
-            StateMapper.layout(Phase.FLIGHT, true, true), "flight has no contact losses");
+            StateMapper.layout(Phase.FLIGHT, true, true, false), "flight has no contact losses");
     }
 
     @ParameterizedTest
@@ -78,7 +82,7 @@ class LayoutTest {
         }
         full[2] = 0.01;
         full[5] = 0;
-        int[] layout = StateMapper.layout(phase, true, true);
+        int[] layout = StateMapper.layout(phase, true, true, false);
         double[] compact = dyn.beginSegment(layout, full);
         assertEquals(layout.length, dyn.getDimension());
         double[] back = dyn.expand(compact, new double[StateMapper.DIM]);

@@ -41,6 +41,8 @@ public final class CaseRecipe implements CaseSource {
     private final StartSampler starts;
     private final double duration;
     private final SolverSettings settings;
+    /** Motion of the drawn surfaces, or null for still ones. */
+    private final MotionSampler motions;
 
     private CaseRecipe(Builder b) {
         if (b.surfaces == null || b.laws == null || b.starts == null) {
@@ -55,6 +57,7 @@ public final class CaseRecipe implements CaseSource {
         this.starts = b.starts;
         this.duration = b.duration;
         this.settings = b.settings;
+        this.motions = b.motions;
     }
 
     /** @return a builder with default balls, gravity 9.81 m/s² in any direction, 0.1 s duration */
@@ -72,8 +75,13 @@ public final class CaseRecipe implements CaseSource {
                 Surface surface = surfaces.draw(rnd, ball);
                 ContactLaw law = laws.draw(rnd, ball);
                 Vector3D g = gravity.draw(rnd);
-                Simulation sim = Simulation.builder().ball(ball).surface(surface).law(law).gravity(g)
-                    .settings(settings).build();
+                Simulation.Builder sb = Simulation.builder().ball(ball).surface(surface).law(law).gravity(g)
+                    .settings(settings);
+                if (motions != null) {
+                    // drawn only when asked for, so that recipes without motion keep their cases
+                    sb.motion(motions.draw(rnd, ball, surface));
+                }
+                Simulation sim = sb.build();
                 BallState start = starts.draw(rnd, sim);
                 return PropertyCase.of(seed, index, label, sim, start, duration);
             } catch (IllegalArgumentException | IllegalStateException e) {
@@ -94,6 +102,7 @@ public final class CaseRecipe implements CaseSource {
         private StartSampler starts;
         private double duration = 0.1;
         private SolverSettings settings = SolverSettings.defaults();
+        private MotionSampler motions;
 
         private Builder() {
         }
@@ -167,6 +176,15 @@ public final class CaseRecipe implements CaseSource {
          */
         public Builder settings(SolverSettings s) {
             this.settings = s;
+            return this;
+        }
+
+        /**
+         * @param m motion sampler of the drawn surfaces (none by default: still surfaces)
+         * @return this builder
+         */
+        public Builder motions(MotionSampler m) {
+            this.motions = m;
             return this;
         }
 

@@ -259,8 +259,8 @@ public final class Invariants {
     }
 
     /**
-     * Frame invariance: moving the surface, the gravity and the start together by the rigid motion
-     * {@code x ↦ R x + b} moves the trajectory the same way (Newton–Euler and the contact
+     * Frame invariance: moving the surface (and its motion, if it moves), the gravity and the start
+     * together by the rigid motion {@code x ↦ R x + b} moves the trajectory the same way (Newton–Euler and the contact
      * conditions are Euclidean-invariant: common practice). Both runs are sampled at 16 equal
      * intervals; worst deviation over the samples and the end state: the largest of
      * {@code |R c + b − c'|/r}, {@code |R v − v'|/V}, {@code r|R ω − ω'|/V} and the orientation
@@ -282,9 +282,13 @@ public final class Invariants {
         String name = "frame invariant";
         return c -> {
             Simulation sim = sampled(c.simulation(), c.simulation().settings().withSampleInterval(c.duration() / 16));
-            Simulation moved = sim.toBuilder()
+            Simulation.Builder mb = sim.toBuilder()
                 .surface(new RigidlyMovedSurface(sim.surface(), rotation, translation))
-                .gravity(rotation.applyTo(sim.gravity())).build();
+                .gravity(rotation.applyTo(sim.gravity()));
+            if (!sim.motion().stationary()) {
+                mb.motion(new RigidlyMovedMotion(sim.motion(), rotation, translation));
+            }
+            Simulation moved = mb.build();
             BallState s0 = c.start();
             BallState m0 = BallState.of(s0.time(), rotation.applyTo(s0.centre()).add(translation),
                 rotation.applyTo(s0.velocity()), rotation.applyTo(s0.orientation()), rotation.applyTo(s0.spin()),

@@ -102,7 +102,7 @@ public final class Robustness {
         }
         EnergyBudget b = res.energy();
         double[] e = {b.initial(), b.fin(), b.slidingFrictionLoss(), b.rollingResistanceLoss(),
-            b.pivotingResistanceLoss(), b.otherCoupleLoss(), b.impactLoss(), b.appliedWork(), b.scale(),
+            b.pivotingResistanceLoss(), b.otherCoupleLoss(), b.impactLoss(), b.appliedWork(), b.driveWork(), b.scale(),
             b.relativeResidual()};
         for (double x : e) {
             if (!Double.isFinite(x)) {

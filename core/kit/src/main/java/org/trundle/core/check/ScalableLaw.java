@@ -83,6 +83,16 @@ public final class ScalableLaw implements ContactLaw {
     }
 
     @Override
+    public boolean hasPivotStick() {
+        return law.hasPivotStick();
+    }
+
+    @Override
+    public double pivotStickLimit(ContactContext c) {
+        return law.pivotStickLimit(c);
+    }
+
+    @Override
     public OptionalDouble restitution() {
         return law.restitution();
     }

@@ -1,0 +1,91 @@
+package org.trundle.scenario;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+import org.trundle.core.ContactLaw;
+import org.trundle.core.Material;
+import org.trundle.core.Patch;
+import org.trundle.core.Surface;
+import org.trundle.core.SurfaceMotion;
+
+/**
+ * Builds a scenario's scene: the {@code surfaces} list of patches, or the single {@code surface}
+ * (a one-patch scene with id {@code "surface"}). Each entry is a surface section
+ * ({@link SurfaceFactory}) with, besides its type's keys, {@code id} (required in a list: letters,
+ * digits, {@code _}, {@code -}, {@code .}), an optional {@code motion} and an optional {@code contact}
+ * (the patch's own law, {@link ContactFactory}; default the scenario's {@code contact}).
+ *
+ * <p>{@code motion}: {@code {"type": "rotation", "axis": [x, y, z], "origin": [x, y, z] (m), "rate": Ω
+ * (rad/s)}} (turning about the axis through the origin, right-handed) or {@code {"type":
+ * "translation", "velocity": [x, y, z] (m/s)}}; the surface's keys give it at time 0.
+ */
+final class SceneFactory {
+    private SceneFactory() {
+    }
+
+    /**
+     * @param root the scenario's root
+     * @param materials the ball's and the wall's material ({@code ball.material}, {@code surface.material}),
+     *     or empty (always empty for a {@code surfaces} list: a patch's {@code contact.spin_creep} is refused)
+     * @return the patches, with their own laws where they give one (null: the scenario's)
+     */
+    static List<Patch> patches(Section root, Optional<Material[]> materials) {
+        if (root.has("surfaces")) {
+            if (root.has("surface")) {
+                throw new ScenarioException("give either surface (one patch) or surfaces (a list of patches), not both");
+            }
+            List<Patch> out = new ArrayList<>();
+            Set<String> ids = new HashSet<>();
+            for (Section s : root.sectionList("surfaces")) {
+                String id = s.text("id", null);
+                if (id == null) {
+                    throw new ScenarioException(s.where("id") + " is missing: every entry of surfaces needs an id");
+                }
+                if (!id.matches("[A-Za-z0-9_.-]{1,64}")) {
+                    throw new ScenarioException(s.where("id") + " must be 1 to 64 letters, digits, '_', '-' or '.', got \""
+                        + Texts.clip(id) + "\"");
+                }
+                if (!ids.add(id)) {
+                    throw new ScenarioException(s.where("id") + " = \"" + id + "\" is used twice; ids must be unique");
+                }
+                out.add(patch(id, s, materials));
+            }
+            return out;
+        }
+        Section s = root.section("surface").without("material");
+        if (s.has("contact")) {
+            throw new ScenarioException(s.where("contact") + ": the one surface uses the scenario's contact section;"
+                + " a contact per patch is for the entries of surfaces");
+        }
+        return List.of(patch(Scenario.PATCH_ID, s, materials));
+    }
+
+    private static Patch patch(String id, Section s, Optional<Material[]> materials) {
+        SurfaceMotion motion = s.has("motion") ? motion(s.section("motion")) : SurfaceMotion.NONE;
+        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact"), materials) : null;
+        Surface surface = SurfaceFactory.create(s.without("id").without("motion").without("contact"));
+        return new Patch(id, surface, motion, law);
+    }
+
+    /**
+     * @param s a {@code motion} section
+     * @return the motion
+     */
+    static SurfaceMotion motion(Section s) {
+        String type = s.choice("type", List.of("rotation", "translation"));
+        try {
+            if (type.equals("rotation")) {
+                s.allow("type", "axis", "origin", "rate");
+                return SurfaceMotion.rotation(s.direction("axis"), s.vector("origin", "m"), s.number("rate", "rad/s"));
+            }
+            s.allow("type", "velocity");
+            return SurfaceMotion.translation(s.vector("velocity", "m/s"));
+        } catch (IllegalArgumentException e) {
+            throw new ScenarioException(s.path() + ": " + e.getMessage());
+        }
+    }
+}
