@@ -12,8 +12,8 @@ import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
-import org.trundle.core.sweep.SweepRun;
 import org.trundle.scenario.Outcome;
+import org.trundle.scenario.SweepRow;
 import org.trundle.scenario.Units;
 
 /**
@@ -39,18 +39,28 @@ public final class RegimeMap {
         }
     }
 
-    /** @param run a delivered run */
-    public void add(SweepRun run) {
-        String o = Outcome.of(run);
-        double endTime = run.result().map(r -> r.endState().time()).orElse(Double.NaN);
-        double a = run.point().value(0);
-        double b = names.size() > 1 ? run.point().value(1) : endTime;
+    /** @param row a delivered run's row */
+    public void add(SweepRow row) {
+        double endTime = row.endTime().orElse(Double.NaN);
+        double b = names.size() > 1 ? row.parameter(1) : endTime;
         if (Double.isNaN(b)) {
             return;
         }
-        byOutcome.computeIfAbsent(o, k -> new ArrayList<>()).add(new double[] {a, b});
-        for (int i = 0; i < Math.min(2, names.size()); i++) {
-            seen.get(i).add(run.point().value(i));
+        add(row.outcome(), row.parameter(0), b);
+    }
+
+    /**
+     * Adds one marker (a run, or an aggregate of runs of one outcome in one cell).
+     *
+     * @param outcome its outcome
+     * @param x the first parameter's value
+     * @param y the second parameter's value, or the end time (s) for a one-parameter sweep
+     */
+    public void add(String outcome, double x, double y) {
+        byOutcome.computeIfAbsent(outcome, k -> new ArrayList<>()).add(new double[] {x, y});
+        seen.get(0).add(x);
+        if (names.size() > 1) {
+            seen.get(1).add(y);
         }
     }
 

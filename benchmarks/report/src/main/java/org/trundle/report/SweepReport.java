@@ -11,9 +11,9 @@ import java.util.TreeMap;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.trundle.core.sweep.SweepRun;
 import org.trundle.scenario.Outcome;
 import org.trundle.scenario.Units;
+import org.trundle.scenario.SweepRow;
 
 /**
  * The HTML report of a sweep ({@code sweep-report.html}, one self-contained file like
@@ -45,22 +45,21 @@ public final class SweepReport {
     }
 
     /**
-     * @param run a delivered run
-     * @param csvRow its sweep.csv row
+     * @param row a delivered run's row (its {@link SweepRow#csv()} line is what a click shows)
      */
-    public void add(SweepRun run, String csvRow) {
+    public void add(SweepRow row) {
         total++;
-        String o = Outcome.of(run);
+        String o = row.outcome();
         counts.merge(o, 1, Integer::sum);
         if (points.size() >= MAX_POINTS) {
             return;
         }
-        double x = run.point().value(0);
-        double y = names.size() > 1 ? run.point().value(1) : run.result().map(r -> r.endState().time()).orElse(Double.NaN);
+        double x = row.parameter(0);
+        double y = names.size() > 1 ? row.parameter(1) : row.endTime().orElse(Double.NaN);
         if (!Double.isFinite(x) || !Double.isFinite(y)) {
             return;
         }
-        points.add(new Object[] {x, y, o, cells(csvRow)});
+        points.add(new Object[] {x, y, o, cells(row.csv())});
     }
 
     /**

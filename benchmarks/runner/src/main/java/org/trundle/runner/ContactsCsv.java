@@ -18,6 +18,7 @@ import org.trundle.core.RunObserver;
 import org.trundle.core.RunResult;
 import org.trundle.core.Sample;
 import org.trundle.scenario.ScenarioFiles;
+import org.trundle.scenario.Decimals;
 
 /**
  * Writes {@code contacts.csv}, one row per sample and touching patch, and keeps per patch the largest

@@ -1,5 +1,6 @@
 package org.trundle.runner;
 
+import org.trundle.scenario.Decimals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;

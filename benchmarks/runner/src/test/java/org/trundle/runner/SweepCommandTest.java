@@ -99,4 +99,18 @@ class SweepCommandTest {
         assertTrue(rows.get(1).startsWith("0,0.9,-15.0,0.4,duration,duration,,0.05,"), "--duration 0.05 s: " + rows.get(1));
         assertTrue(Files.notExists(out.resolve("regime-map.png")));
     }
+
+    @Test
+    void aMissingEngineSaysHowToRunItAndWritesNothing() {
+        Path f = Cli.write(dir, "spark.json", sweepOf("{\"start.speed\": [0.9, 1.0]}"));
+        Path out = dir.resolve("spark-out");
+        Cli.Result r = Cli.run("sweep", f.toString(), "--out", out.toString(), "--engine", "spark", "--master", "local[2]");
+        assertEquals(2, r.code(), r.err());
+        assertTrue(r.err().contains("no sweep engine named spark on the class path")
+            && r.err().contains("java @benchmarks/spark/target/trundle-spark.args org.trundle.runner.Main sweep"), r.err());
+        assertTrue(Files.notExists(out));
+        Cli.Result mixed = Cli.run("sweep", f.toString(), "--out", out.toString(), "--partitions", "3");
+        assertEquals(2, mixed.code(), mixed.err());
+        assertTrue(mixed.err().contains("--master and --partitions go with --engine spark"), mixed.err());
+    }
 }

@@ -1,4 +1,4 @@
-package org.trundle.runner;
+package org.trundle.scenario;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -7,9 +7,10 @@ import java.math.RoundingMode;
 /**
  * The shortest decimal that reads back to the same double. {@link Double#toString(double)} on
  * Java 17 sometimes gives one digit more than needed (fixed in Java 19); this starts from it and
- * drops digits while the value still reads back exactly.
+ * drops digits while the value still reads back exactly. Used for the parameter columns of
+ * {@link SweepRow#csv()}.
  */
-final class Decimals {
+public final class Decimals {
     private Decimals() {
     }
 
@@ -19,7 +20,7 @@ final class Decimals {
      *     digit could be dropped, else as a plain decimal for magnitudes from 1e-3 to 1e7 and in
      *     {@code 1.5E-9} notation otherwise
      */
-    static String shortest(double v) {
+    public static String shortest(double v) {
         String s = Double.toString(v);
         if (!Double.isFinite(v) || v == 0) {
             return s;

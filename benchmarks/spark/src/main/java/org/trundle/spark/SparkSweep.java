@@ -1,0 +1,291 @@
+package org.trundle.spark;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.NoSuchElementException;
+import java.util.UUID;
+
+import org.apache.hadoop.conf.Configuration;
+import org.apache.hadoop.fs.FileStatus;
+import org.apache.hadoop.fs.FileSystem;
+import org.apache.hadoop.fs.Path;
+import org.apache.spark.TaskContext;
+import org.apache.spark.api.java.function.MapPartitionsFunction;
+import org.apache.spark.sql.Column;
+import org.apache.spark.sql.Dataset;
+import org.apache.spark.sql.Encoders;
+import org.apache.spark.sql.Row;
+import org.apache.spark.sql.RowFactory;
+import org.apache.spark.sql.SparkSession;
+import org.apache.spark.sql.functions;
+import org.apache.spark.sql.types.DataType;
+import org.apache.spark.sql.types.DataTypes;
+import org.apache.spark.sql.types.StructField;
+import org.apache.spark.sql.types.StructType;
+import org.trundle.core.sweep.ParameterSpace;
+import org.trundle.report.RegimeMap;
+import org.trundle.scenario.ScenarioException;
+import org.trundle.scenario.SweepEngine;
+import org.trundle.scenario.SweepJob;
+import org.trundle.scenario.SweepRow;
+
+/**
+ * Runs a {@link SweepJob} on Apache Spark and writes its rows.
+ *
+ * <p><b>Work.</b> The point indices {@code 0 … n−1} are split into {@code partitions} contiguous
+ * ranges ({@code SparkSession.range}); each task re-parses the scenario from its JSON text, runs its
+ * points one after another and reduces each run to its {@link SweepRow} on the spot ({@link
+ * SweepJob#run}, the code the local threads run), streaming the rows into a Dataset. A failed run
+ * is a row with outcome {@code failed} and its reason, never a failed task. A task that Spark
+ * cancels gives up its run in flight at the next output sample.
+ *
+ * <p><b>Outputs</b>, under the output folder: {@code rows.parquet/} (the rows, one file per
+ * partition), {@code sweep-csv/} (the same rows as {@link SweepRow#csv()} lines, part files in index
+ * order, the header at the top of the first: concatenated, they are the local {@code sweep.csv} byte
+ * for byte) and {@code regime-map.png} (for one or two parameters), computed from the Parquet
+ * rows. The driver holds only aggregates: the outcome counts and, for the regime map, one
+ * marker per run up to {@value #EXACT_MAP} runs, else one per outcome and cell of a
+ * {@value #CELLS}×{@value #CELLS} lattice over the parameter ranges.
+ *
+ * <p><b>Completeness.</b> Everything is written into a sibling folder
+ * {@code <out>.partial-<id>} which is renamed to {@code <out>} in one step at the end (atomic on a
+ * local file system and HDFS; not on object stores, where the rename is a copy). A failed or
+ * cancelled job deletes the partial folder when it can; if the driver is killed it stays, named
+ * {@code .partial-}; so a folder named {@code <out>} is always complete.
+ */
+public final class SparkSweep {
+    /** Largest sweep whose regime map gets one marker per run. */
+    public static final int EXACT_MAP = 20_000;
+    /** Cells per axis of the regime-map lattice of larger sweeps. */
+    public static final int CELLS = 250;
+
+    private SparkSweep() {
+    }
+
+    /**
+     * The Spark schema of a sweep's rows: {@link SweepRow#columns} with their kinds (int, double,
+     * string), all nullable.
+     *
+     * @param names parameter names
+     * @return the schema
+     */
+    public static StructType schema(List<String> names) {
+        List<String> cols = SweepRow.columns(names);
+        List<SweepRow.Kind> kinds = SweepRow.kinds(names.size());
+        StructField[] f = new StructField[cols.size()];
+        for (int i = 0; i < f.length; i++) {
+            DataType t = switch (kinds.get(i)) {
+                case INT -> DataTypes.IntegerType;
+                case DOUBLE -> DataTypes.DoubleType;
+                case TEXT -> DataTypes.StringType;
+            };
+            f[i] = DataTypes.createStructField(cols.get(i), t, i != 0);
+        }
+        return DataTypes.createStructType(f);
+    }
+
+    /**
+     * The rows of a sweep as a Dataset, computed lazily by the executors.
+     *
+     * @param spark the session
+     * @param job the sweep
+     * @param partitions number of partitions, at least 1
+     * @return the rows, partition {@code k} holding a contiguous range of indices in order
+     */
+    public static Dataset<Row> rows(SparkSession spark, SweepJob job, int partitions) {
+        if (partitions < 1) {
+            throw new ScenarioException("--partitions must be at least 1, got " + partitions);
+        }
+        int n = job.size();
+        MapPartitionsFunction<Long, Row> work = indices -> {
+            TaskContext task = TaskContext.get();
+            ParameterSpace space = job.space();
+            return new Iterator<>() {
+                @Override
+                public boolean hasNext() {
+                    return indices.hasNext();
+                }
+
+                @Override
+                public Row next() {
+                    if (!indices.hasNext()) {
+                        throw new NoSuchElementException();
+                    }
+                    int i = Math.toIntExact(indices.next());
+                    SweepRow r = job.run(space.point(i), () -> task != null && task.isInterrupted());
+                    if (r == null) {
+                        throw new IllegalStateException("sweep task cancelled at point " + i);
+                    }
+                    return RowFactory.create(r.values());
+                }
+            };
+        };
+        return spark.range(0, n, 1, Math.min(partitions, Math.max(n, 1)))
+            .mapPartitions(work, Encoders.row(schema(job.names())));
+    }
+
+    /**
+     * Runs the sweep and writes its outputs (see the class comment).
+     *
+     * @param spark the session
+     * @param job the sweep
+     * @param out output folder (path or URI of any Hadoop file system); it must not exist or be empty
+     * @param partitions number of partitions, at least 1
+     * @return what was written
+     * @throws IOException when the outputs cannot be written
+     */
+    public static SweepEngine.Report run(SparkSession spark, SweepJob job, String out, int partitions)
+        throws IOException {
+        Path target = checkOutput(out, spark.sparkContext().hadoopConfiguration());
+        FileSystem fs = target.getFileSystem(spark.sparkContext().hadoopConfiguration());
+        Path partial = new Path(target.getParent(), target.getName() + ".partial-" + UUID.randomUUID());
+        boolean done = false;
+        try {
+            Map<String, Long> counts = write(spark, job, partial, partitions, fs);
+            if (fs.exists(target)) {
+                fs.delete(target, false); // the empty folder
+            }
+            if (!fs.rename(partial, target)) {
+                throw new IOException("cannot rename " + partial + " to " + target);
+            }
+            done = true;
+            List<String> files = new ArrayList<>();
+            for (FileStatus s : fs.listStatus(target)) {
+                files.add(s.getPath().toString());
+            }
+            files.sort(null);
+            return new SweepEngine.Report(job.size(), counts, files);
+        } finally {
+            if (!done) {
+                try {
+                    fs.delete(partial, true);
+                } catch (IOException | RuntimeException e) {
+                    // best effort: the folder's name says it is partial
+                }
+            }
+        }
+    }
+
+    /**
+     * Checks that the output location is new or an empty folder.
+     *
+     * @param out output folder (path or URI)
+     * @param conf Hadoop configuration
+     * @return the location, qualified
+     * @throws IOException when the file system cannot be read
+     * @throws ScenarioException when it exists and is not an empty folder
+     */
+    public static Path checkOutput(String out, Configuration conf) throws IOException {
+        Path target = new Path(out);
+        FileSystem fs = target.getFileSystem(conf);
+        target = fs.makeQualified(target);
+        if (fs.exists(target) && (!fs.getFileStatus(target).isDirectory() || fs.listStatus(target).length > 0)) {
+            throw new ScenarioException("--out " + out + " must not exist or be an empty folder for the spark engine,"
+                + " which writes a complete folder in one step");
+        }
+        return target;
+    }
+
+    private static Map<String, Long> write(SparkSession spark, SweepJob job, Path folder, int partitions,
+        FileSystem fs) throws IOException {
+        String parquet = new Path(folder, "rows.parquet").toString();
+        rows(spark, job, partitions).write().parquet(parquet);
+        Dataset<Row> rows = spark.read().schema(schema(job.names())).parquet(parquet);
+        int parts = Math.min(partitions, Math.max(job.size(), 1));
+        int np = job.names().size();
+        String header = SweepRow.header(job.names());
+        MapPartitionsFunction<Row, String> toCsv = it -> {
+            boolean first = TaskContext.getPartitionId() == 0;
+            return new Iterator<>() {
+                private boolean headerDue = first;
+
+                @Override
+                public boolean hasNext() {
+                    return headerDue || it.hasNext();
+                }
+
+                @Override
+                public String next() {
+                    if (headerDue) {
+                        headerDue = false;
+                        return header;
+                    }
+                    Row r = it.next();
+                    Object[] v = new Object[r.length()];
+                    for (int c = 0; c < v.length; c++) {
+                        v[c] = r.get(c);
+                    }
+                    return SweepRow.csv(v, np);
+                }
+            };
+        };
+        Path csv = new Path(folder, "sweep-csv");
+        rows.repartitionByRange(parts, rows.col("index")).sortWithinPartitions("index")
+            .mapPartitions(toCsv, Encoders.STRING()).write().text(csv.toString());
+        for (FileStatus f : fs.listStatus(csv)) {
+            String name = f.getPath().getName();
+            if (name.startsWith("part-") && name.endsWith(".txt")) {
+                fs.rename(f.getPath(), new Path(csv, name.substring(0, name.length() - 4) + ".csv"));
+            }
+        }
+        Map<String, Long> counts = new LinkedHashMap<>();
+        for (Row r : rows.groupBy("outcome").count().orderBy("outcome").collectAsList()) {
+            counts.put(r.getString(0), r.getLong(1));
+        }
+        List<String> names = job.names();
+        if (names.size() <= 2) {
+            RegimeMap map = new RegimeMap(names, job.labels());
+            Column x = rows.col(quote(names.get(0)));
+            Column y = names.size() > 1 ? rows.col(quote(names.get(1))) : rows.col("end_time");
+            Dataset<Row> pts = rows.where(y.isNotNull()).select(rows.col("outcome"), x.as("x"), y.as("y"),
+                rows.col("index"));
+            if (job.size() > EXACT_MAP) {
+                pts = lattice(pts);
+            }
+            Iterator<Row> it = pts.orderBy("index").toLocalIterator();
+            while (it.hasNext()) {
+                Row r = it.next();
+                map.add(r.getString(0), r.getDouble(1), r.getDouble(2));
+            }
+            java.nio.file.Path png = Files.createTempFile("trundle-regime-map", ".png");
+            try {
+                map.write(png, "Regime map: " + String.join(" x ", names) + " (" + job.size() + " runs)",
+                    job.spec().random());
+                fs.copyFromLocalFile(true, true, new Path(png.toUri()), new Path(folder, "regime-map.png"));
+            } finally {
+                Files.deleteIfExists(png);
+            }
+        }
+        return counts;
+    }
+
+    /** One point per outcome and lattice cell (at the cell's centre), ordered by its first run. */
+    private static Dataset<Row> lattice(Dataset<Row> pts) {
+        Row r = pts.agg(functions.min("x"), functions.max("x"), functions.min("y"), functions.max("y")).first();
+        if (r.isNullAt(0)) {
+            return pts;
+        }
+        Column cx = cell(pts.col("x"), r.getDouble(0), r.getDouble(1)).as("x");
+        Column cy = cell(pts.col("y"), r.getDouble(2), r.getDouble(3)).as("y");
+        return pts.groupBy(pts.col("outcome"), cx, cy).agg(functions.min("index").as("index"))
+            .select("outcome", "x", "y", "index");
+    }
+
+    private static Column cell(Column v, double lo, double hi) {
+        if (!(hi > lo)) {
+            return functions.lit(lo);
+        }
+        double w = (hi - lo) / CELLS;
+        Column k = functions.least(functions.floor(v.minus(lo).divide(w)), functions.lit(CELLS - 1));
+        return k.plus(0.5).multiply(w).plus(lo);
+    }
+
+    private static String quote(String name) {
+        return "`" + name.replace("`", "``") + "`";
+    }
+}
