@@ -165,6 +165,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final double[] q = new double[4];
     private final double[] fApp = new double[3];
     private final double[] tApp = new double[3];
+    /** What an applied load reads and writes: views of the workspaces above, refilled by time only. */
+    private final LoadView loadView = new LoadView(c, vel, q, w);
+    private final LoadWrench loadOut = new LoadWrench(fApp, tApp);
     private final double[] hv = new double[3];
     private final double[] tmp = new double[3];
     private final double[] force = new double[3];
@@ -649,7 +652,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double vy = vel[1];
         double vz = vel[2];
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         double fax = fApp[0];
         double fay = fApp[1];
@@ -798,7 +801,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         vel[2] = vz;
         relativeSpeed = Math.sqrt(vrx * vrx + vry * vry + vrz * vrz) + r * Math.sqrt(rx * rx + ry * ry + rz * rz);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         double fax = fApp[0];
         double fay = fApp[1];
@@ -921,7 +924,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         ContactKinematics.slip(r, relVel, 0, relSpin, 0, n, slip);
         relativeSpeed = norm(relVel) + r * norm(relSpin);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         // ndot = Omega x n + H v_rel
         mulSym(geo.hessian, relVel, hv);
@@ -960,7 +963,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         System.arraycopy(y, V, vel, 0, 3);
         ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         mulSym(geo.hessian, vel, hv);
         double vHv = dot(vel, hv);
@@ -1013,11 +1016,17 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         return ct;
     }
 
+    /** Calls the applied load on the workspaces ({@code c}, {@code vel}, {@code q}, {@code w} filled; forces zeroed). */
+    private void applyLoad(double t) {
+        loadView.at(t);
+        load.apply(loadView, loadOut);
+    }
+
     /** Flight: applied loads only (results in the fields). */
     private void flightForces(double t, double[] y) {
         System.arraycopy(y, V, vel, 0, 3);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         zero(force);
         zero(friction);
@@ -1181,7 +1190,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         vel[1] = y[V + 1];
         vel[2] = y[V + 2];
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         boolean anyCouples = false;
         for (int k = 0; k < count; k++) {
@@ -1345,7 +1354,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         System.arraycopy(y, V, vel, 0, 3);
         zero(fApp);
         zero(tApp);
-        load.apply(t, c, vel, q, w, fApp, tApp);
+        applyLoad(t);
     }
 
     /**
