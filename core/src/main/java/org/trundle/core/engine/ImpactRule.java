@@ -123,6 +123,8 @@ final class ImpactRule extends SwitchRule {
         }
         Vector3D j = x.impact();
         run.log(EventKind.IMPACT, before, null, j);
+        // a ball landing where two still walls meet touches the second one at once
+        x.reachPressed(before);
         return null;
     }
 }

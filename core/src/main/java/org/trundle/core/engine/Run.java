@@ -279,6 +279,11 @@ final class Run {
             dyn.evaluate(ts, ys);
             dyn.phase = keep;
             maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
+            if (dyn.multi()) {
+                for (int k = 1; k < contacts.count(); k++) {
+                    maxNormalForce = Math.max(maxNormalForce, dyn.contactNormal[k]);
+                }
+            }
         }
     }
 

@@ -660,6 +660,10 @@ final class Transitions {
         double[] y = run.y;
         ContactSet set = run.contacts;
         java.util.List<String> released = new java.util.ArrayList<>();
+        if (!set.multi() && set.count() == 1 && set.active().mode == Mode.SLIDING) {
+            // one sliding contact keeps its held direction in the right-hand side: the slot takes it over
+            System.arraycopy(dyn.slideDir0, 0, set.active().slideDir, 0, 3);
+        }
         for (int k = 0; k < set.count(); k++) {
             ContactSlot s = set.at(k);
             s.query(run.t, run.centreOf(y));
@@ -913,6 +917,40 @@ final class Transitions {
             settleContacts();
         }
         run.logOn(j.id, kind, before, null, impulse, null, null);
+    }
+
+    /**
+     * After an impact from flight that left the ball in contact: any other still patch that the ball already
+     * touches (distance r within the contact tolerance, contact point on the patch) and moves into is reached
+     * at once ({@link #reach}), so that a ball landing where two walls meet (the bottom of a groove) does not
+     * start its contact segment inside the second wall, where no root of the impact function would be left.
+     *
+     * @param before the state before the impact (for the events)
+     */
+    void reachPressed(BallState before) {
+        if (run.slots.length < 2 || !run.phase().inContact() || run.compliance != null) {
+            return;
+        }
+        double tol = run.set.contactTolerance() * r;
+        for (ContactSlot s : run.slots) {
+            if (s.mode != Mode.APART || run.contacts.count() >= ContactForceSolver.MAX_CONTACTS) {
+                continue;
+            }
+            double[] full = run.y.clone();
+            if (run.phase() == Phase.ROLLING && !run.contacts.multi()) {
+                run.slot.query(run.t, run.centreOf(full));
+                ContactKinematics.rollingVelocity(run.slot, run.t, r, run.dyn.geo.normal, full);
+            }
+            try {
+                s.query(run.t, run.centreOf(full));
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                continue;
+            }
+            if (s.geo.distance - r <= tol && s.geo.patchMargin >= 0
+                && ContactKinematics.normalPart(full, V, s.geo.normal) <= 0) {
+                reach(s, before);
+            }
+        }
     }
 
     /**
