@@ -82,9 +82,11 @@ final class Transitions {
         ContactSlot touched = null;
         if (run.slots.length > 1) {
             java.util.List<ContactSlot> all = touchingAll(t, y, tolLen);
-            if (all.size() > 1) {
+            if (all.size() > 1 && all.stream().noneMatch(s -> s.moving)) {
                 return startSeveral(requested, all);
             }
+            // several contacts are solved on still patches only: with a moving one the first patch touched is the
+            // one contact (as with one contact at a time)
             touched = all.isEmpty() ? null : all.get(0);
         }
         if (touched != null) {
@@ -164,12 +166,6 @@ final class Transitions {
         if (touched.size() > ContactForceSolver.MAX_CONTACTS) {
             throw run.reject(String.format(Locale.ROOT, "start touches %d patches at once; at most %d contacts are"
                 + " solved together", touched.size(), ContactForceSolver.MAX_CONTACTS));
-        }
-        for (ContactSlot s : touched) {
-            if (s.moving) {
-                throw run.reject("start touches " + touched.size() + " patches at once, and patch " + s.id
-                    + " moves: several contacts at once are solved only on patches that stand still");
-            }
         }
         double tolSpeed = run.set.contactTolerance() * run.speedScale;
         for (ContactSlot s : touched) {
@@ -829,8 +825,8 @@ final class Transitions {
      * velocity into the walls already touched removed by plastic impulses there (solved together,
      * {@link #projectVelocityOnContacts}); when the rebound from the new wall is at most the settle speed the
      * new contact begins, else the ball leaves it. Then the modes settle ({@link #settleContacts}).
-     * Only on patches that stand still: several contacts on a moving patch are refused with a
-     * {@link RunFailure} naming both patches.
+     * Only on patches that stand still ({@link ImpactRule#secondContactPossible}); should it be asked with a moving
+     * patch it fails with a {@link RunFailure} naming both patches.
      */
     void reach(ContactSlot j, BallState before) {
         double[] y = run.y;
@@ -933,7 +929,8 @@ final class Transitions {
         }
         double tol = run.set.contactTolerance() * r;
         for (ContactSlot s : run.slots) {
-            if (s.mode != Mode.APART || run.contacts.count() >= ContactForceSolver.MAX_CONTACTS) {
+            if (s.mode != Mode.APART || run.contacts.count() >= ContactForceSolver.MAX_CONTACTS
+                || !ImpactRule.secondContactPossible(run, s)) {
                 continue;
             }
             double[] full = run.y.clone();
