@@ -63,6 +63,28 @@ public final class SparkSweep {
     public static final int EXACT_MAP = 20_000;
     /** Cells per axis of the regime-map lattice of larger sweeps. */
     public static final int CELLS = 250;
+    /**
+     * Most points per partition when the partition count is not given: the sort that puts each
+     * partition's CSV lines in index order holds one partition's rows, so bounding the partition's
+     * size keeps a task's memory independent of the sweep's size.
+     */
+    public static final int POINTS_PER_PARTITION = 20_000;
+
+    /**
+     * The default partition count: {@code max(4 p, ⌈n / }{@value #POINTS_PER_PARTITION}{@code ⌉)} with
+     * {@code p} Spark's default parallelism (the cluster's cores), at most one per point. Four per core
+     * keep cores busy at the end when some points are slow; the size bound keeps each task's memory flat
+     * however large the sweep.
+     *
+     * @param spark the session
+     * @param n number of points
+     * @return the partition count, at least 1
+     */
+    public static int defaultPartitions(SparkSession spark, int n) {
+        int byCores = 4 * spark.sparkContext().defaultParallelism();
+        int bySize = (int) ((n + (long) POINTS_PER_PARTITION - 1) / POINTS_PER_PARTITION);
+        return Math.max(1, Math.min(Math.max(byCores, bySize), Math.max(n, 1)));
+    }
 
     private SparkSweep() {
     }

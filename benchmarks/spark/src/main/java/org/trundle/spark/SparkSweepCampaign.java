@@ -25,7 +25,8 @@ import org.trundle.scenario.SweepRow;
  * Dataset counted) and of the whole job with its outputs (local: {@code sweep.csv} written;
  * Spark: {@link SparkSweep#run}: Parquet, CSV and regime map).</li>
  * <li>{@code memory N DURATION}: {@link SparkSweep#run} over N points of DURATION s, with the
- * JVM's live heap (used heap right after a requested full collection) sampled every 2 s; in
+ * JVM's live heap (used heap right after a requested full collection) sampled every 2 s, its peak
+ * printed per quarter of the run (flat: the same in every quarter); in
  * {@code local[2]} the driver and the executors share this JVM, so the peak bounds the driver's.</li>
  * </ul>
  * Run with the JVM options of {@code target/trundle-spark.args}:
@@ -77,7 +78,7 @@ public final class SparkSweepCampaign {
     }
 
     private static void speed(SparkSession spark, SweepJob job, Path tmp) throws IOException {
-        int parts = 4 * spark.sparkContext().defaultParallelism();
+        int parts = SparkSweep.defaultPartitions(spark, job.size());
         SparkSweep.rows(spark, tube(200, 0.2), 2).count(); // warm both paths up
         new ThreadedExecutor(2, null, null).execute(tube(200, 0.2).space(), tube(200, 0.2), r -> { });
 
@@ -116,11 +117,12 @@ public final class SparkSweepCampaign {
 
     private static void memory(SparkSession spark, SweepJob job, Path tmp) throws IOException {
         var mem = ManagementFactory.getMemoryMXBean();
-        AtomicLong peak = new AtomicLong();
+        java.util.List<long[]> samples = java.util.Collections.synchronizedList(new java.util.ArrayList<>());
+        long t0 = System.nanoTime();
         Thread sampler = new Thread(() -> {
             while (!Thread.currentThread().isInterrupted()) {
                 System.gc();
-                peak.accumulateAndGet(mem.getHeapMemoryUsage().getUsed(), Math::max);
+                samples.add(new long[] {System.nanoTime() - t0, mem.getHeapMemoryUsage().getUsed()});
                 try {
                     Thread.sleep(2000);
                 } catch (InterruptedException e) {
@@ -129,12 +131,21 @@ public final class SparkSweepCampaign {
             }
         }, "heap-sampler");
         sampler.setDaemon(true);
-        long t0 = System.nanoTime();
         sampler.start();
-        SparkSweep.run(spark, job, tmp.resolve("spark").toString(), 4 * spark.sparkContext().defaultParallelism());
+        int parts = SparkSweep.defaultPartitions(spark, job.size());
+        SparkSweep.run(spark, job, tmp.resolve("spark").toString(), parts);
         sampler.interrupt();
         double t = (System.nanoTime() - t0) * 1e-9;
-        System.out.printf(Locale.ROOT, "| %d points | Spark local[2] | %.0f s | peak live heap %.0f MB (max heap %.0f MB)"
-            + " |%n", job.size(), t, peak.get() / 1048576.0, Runtime.getRuntime().maxMemory() / 1048576.0);
+        // live heap per quarter of the run: flat means the same figure in every quarter
+        double[] quarter = new double[4];
+        synchronized (samples) {
+            for (long[] sm : samples) {
+                int q = (int) Math.min(3, 4 * (sm[0] * 1e-9) / t);
+                quarter[q] = Math.max(quarter[q], sm[1] / 1048576.0);
+            }
+        }
+        System.out.printf(Locale.ROOT, "| %d points | Spark local[2], %d partitions | %.0f s | peak live heap per quarter"
+            + " of the run %.0f / %.0f / %.0f / %.0f MB (max heap %.0f MB) |%n", job.size(), parts, t, quarter[0],
+            quarter[1], quarter[2], quarter[3], Runtime.getRuntime().maxMemory() / 1048576.0);
     }
 }

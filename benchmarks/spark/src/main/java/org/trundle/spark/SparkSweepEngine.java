@@ -15,8 +15,10 @@ import org.trundle.scenario.SweepJob;
  * Spark session on the given master (or the one {@code spark-submit} configured), runs
  * {@link SparkSweep#run}, and stops the session if it opened it.
  *
- * <p>Default partitions: 4 × Spark's default parallelism (the cores of the cluster), at most one
- * per point, so that slow points do not leave cores idle at the end.
+ * <p>Default partitions: {@link SparkSweep#defaultPartitions}: 4 × Spark's default parallelism (the
+ * cores of the cluster), so that slow points do not leave cores idle at the end, and more when needed
+ * to keep each partition at most {@value SparkSweep#POINTS_PER_PARTITION} points (a task's memory
+ * stays flat however large the sweep); at most one per point.
  */
 public final class SparkSweepEngine implements SweepEngine {
     /** Created by the service loader. */
@@ -50,7 +52,7 @@ public final class SparkSweepEngine implements SweepEngine {
         SparkSession spark = b.getOrCreate();
         try {
             int partitions = options.partitions() > 0 ? options.partitions()
-                : 4 * spark.sparkContext().defaultParallelism();
+                : SparkSweep.defaultPartitions(spark, job.size());
             return SparkSweep.run(spark, job, out, partitions);
         } finally {
             if (!existing) {
