@@ -25,6 +25,8 @@ final class Segment {
     private final int[][][] layouts;
     /** The rule whose switch stopped the segment, or null. */
     SwitchRule fired;
+    /** The time the current segment started at (s). */
+    double startTime;
 
     Segment(Run run, Transitions transitions) {
         this.run = run;
@@ -68,13 +70,16 @@ final class Segment {
             abs[i] = run.absTol[layout[i]];
             rel[i] = run.relTol[layout[i]];
         }
-        DormandPrince853Integrator integ = new DormandPrince853Integrator(0.0, run.endTime - run.t + 1e-300, abs, rel);
+        // the smallest step advances the time (a step of zero length would end no step and no check)
+        DormandPrince853Integrator integ = new DormandPrince853Integrator(minStep(run.t),
+            run.endTime - run.t + 1e-300, abs, rel);
         if (run.restartStep > 0) {
             integ.setInitialStepSize(run.restartStep);
             run.restartStep = 0;
         }
         integ.addStepHandler(new StepObserver());
         fired = null;
+        startTime = run.t;
         if (phase.inContact()) {
             // a switch may hand over a drifted state: start each contact segment well within the
             // projection thresholds (the step observer checks them only at step ends)
@@ -95,6 +100,18 @@ final class Segment {
             }
         }
         return integ.integrate(dyn, new ODEState(run.t, dyn.beginSegment(layout, run.y)), run.endTime);
+    }
+
+    /**
+     * The smallest step the integrator may take from a time: two units in the last place, so that
+     * the step's end is a later time. A step the error control wants shorter fails the run
+     * ("minimal step size reached") instead of repeating steps that do not advance.
+     *
+     * @param t the segment's start time (s)
+     * @return the step floor (s)
+     */
+    static double minStep(double t) {
+        return 2 * Math.ulp(t);
     }
 
     /**
