@@ -125,4 +125,29 @@ class EngineTest {
         e = assertThrows(IllegalArgumentException.class, () -> Simulation.builder().build());
         assertTrue(e.getMessage().contains("ball"));
     }
+
+    /**
+     * A missing gravity is refused by name instead of being taken for zero; zero gravity is said
+     * explicitly, and a run without it is straight free flight (common practice).
+     */
+    @Test
+    void gravityMustBeGiven() {
+        Simulation.Builder b = Simulation.builder().ball(Ball.solid(0.01, 0.02))
+            .surface(new FloorForTests(Double.POSITIVE_INFINITY)).law(GRIP);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, b::build);
+        assertTrue(e.getMessage().startsWith("gravity must be given, got none"), e.getMessage());
+        assertTrue(e.getMessage().contains("noGravity()"), e.getMessage());
+        IllegalArgumentException n = assertThrows(IllegalArgumentException.class, () -> b.gravity(null).build());
+        assertTrue(n.getMessage().startsWith("gravity must be given"), n.getMessage());
+        IllegalArgumentException nan = assertThrows(IllegalArgumentException.class,
+            () -> b.gravity(new Vector3D(0, Double.NaN, 0)).build());
+        assertTrue(nan.getMessage().startsWith("gravity must have finite components"), nan.getMessage());
+        Simulation none = b.noGravity().build();
+        assertEquals(Vector3D.ZERO, none.gravity());
+        assertEquals(Vector3D.ZERO, b.gravity(Vector3D.ZERO).build().toBuilder().build().gravity());
+        BallState s0 = BallState.flying(new Vector3D(0, 0, 1.0), new Vector3D(0.5, 0.2, 1.0), Vector3D.ZERO);
+        BallState end = none.run(s0, 0.3).endState();
+        assertEquals(1.3, end.centre().getZ(), 1e-12);
+        assertEquals(0.15, end.centre().getX(), 1e-12);
+    }
 }

@@ -351,7 +351,7 @@ class RunFailureTest {
     @Test
     void interruptBeforeTheRunStopsAtTheStart() {
         Simulation sim = Simulation.builder().ball(Ball.solid(R, 0.02)).surface(new FloorForTests(Double.POSITIVE_INFINITY))
-            .law(() -> "grip").build();
+            .law(() -> "grip").noGravity().build();
         BallState start = BallState.flying(new Vector3D(0, 0, 2 * R), new Vector3D(0, 0, 1), Vector3D.ZERO);
         Thread.currentThread().interrupt();
         try {
