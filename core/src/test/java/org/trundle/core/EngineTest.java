@@ -87,6 +87,39 @@ class EngineTest {
         }
     }
 
+    /**
+     * Each sample lists its contacts: on a floor with the ball rolling and the floor's normal up, one
+     * contact on patch "surface" whose force and point repeat the single-contact fields, and none in flight
+     * (the normal force of rolling on a level floor is m g, common practice).
+     */
+    @Test
+    void samplesListTheirContacts() {
+        Simulation sim = floor(GRIP, 0.1).withSettings(SolverSettings.defaults().withSampleInterval(0.01)
+            .withStopAtExit(false));
+        java.util.List<Sample> samples = new java.util.ArrayList<>();
+        sim.run(sim.rollingStart(new Vector3D(0, 0, 0.01), new Vector3D(0.5, 0, 0)), 0.4, samples::add);
+        int rolling = 0;
+        int flying = 0;
+        for (Sample s : samples) {
+            if (s.state().phase() == Phase.FLIGHT) {
+                assertTrue(s.touches().isEmpty());
+                flying++;
+                continue;
+            }
+            rolling++;
+            assertEquals(1, s.touches().size());
+            SampleContact c = s.touches().get(0);
+            assertEquals(Simulation.SINGLE_PATCH, c.patch());
+            assertEquals(Phase.ROLLING, c.mode());
+            assertEquals(s.normalForce(), c.normalForce(), 0.0);
+            assertEquals(0.02 * G, c.normalForce(), 1e-12);
+            assertEquals(s.contactPoint(), c.contactPoint());
+            assertEquals(s.frictionForce(), c.frictionForce());
+            assertEquals(Vector3D.PLUS_K, c.normal());
+        }
+        assertTrue(rolling > 5 && flying > 5, rolling + " rolling and " + flying + " flying samples");
+    }
+
     /** Rolling off the edge of the patch is an exit naming the edge. */
     @Test
     void exitNamesTheEdge() {
