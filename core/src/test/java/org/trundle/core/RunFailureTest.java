@@ -241,8 +241,8 @@ class RunFailureTest {
         assertSame(boom, e.getCause());
         onReference(e);
 
-        Simulation byLoad = floor(plain, () -> "grip", (t, c, v, q, w, f, tau) -> {
-            if (c[0] > BREAK_X) {
+        Simulation byLoad = floor(plain, () -> "grip", (s, out) -> {
+            if (s.centre(0) > BREAK_X) {
                 throw boom;
             }
         });
