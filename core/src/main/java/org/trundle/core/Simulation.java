@@ -103,7 +103,8 @@ public final class Simulation {
         }
         for (Patch p : patches) {
             double kmax = p.surface().maxConcaveCurvature();
-            if (Double.isFinite(kmax) && ball.radius() * kmax >= 1.0) {
+            // NaN: unknown in advance, checked during the run; +∞: no ball fits (Surface#maxConcaveCurvature)
+            if (!Double.isNaN(kmax) && !(ball.radius() * kmax < 1.0)) {
                 throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
                     "ball of radius %s m does not fit surface %s: r*kappa_max = %s >= 1 "
                         + "(smallest concave radius of curvature %s m)",

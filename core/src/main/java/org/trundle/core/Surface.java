@@ -60,7 +60,9 @@ public interface Surface {
     /**
      * Largest principal curvature (1/m) anywhere on the patch, for the fit check
      * {@code r κ_max < 1} at the start of a run; {@link Double#NaN} when it cannot be known in
-     * advance (the solver then checks during the run, at each step).
+     * advance (the solver then checks during the run, at each step); {@link Double#POSITIVE_INFINITY}
+     * where the curvature has no bound on the patch (a cone's apex), so that no ball fits and every
+     * simulation on it is refused.
      *
      * @return the largest concave curvature, 0 for a patch that is nowhere concave
      */

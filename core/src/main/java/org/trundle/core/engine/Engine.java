@@ -72,7 +72,8 @@ public final class Engine {
      * The exception boundary of a run: every exception that leaves it is the engine's own
      * rejection of the start ({@link IllegalArgumentException}) or a {@link SimulationException}
      * with the last good state; a failure of the engine's own checks ({@link RunFailure}) gives its
-     * message, anything else (user code, the integrator) becomes the cause.
+     * message, an integrator failure is described in our words ({@link IntegratorFailure}), and
+     * anything else (user code, the integrator) becomes the cause.
      */
     private RuntimeException failure(RuntimeException e, BallState start) {
         if (e == run.rejection) {
@@ -85,7 +86,8 @@ public final class Engine {
         } else if (e instanceof RunFailure) {
             return new SimulationException(at + e.getMessage(), last, null);
         } else if (e instanceof MathRuntimeException) {
-            return new SimulationException(at + "the integrator failed: " + e.getMessage(), last, e);
+            return new SimulationException(at + IntegratorFailure.describe((MathRuntimeException) e, last.time(),
+                run.phase() != null ? run.phase() : last.phase()), last, e);
         } else if (e instanceof Dynamics.BudgetExhausted || e instanceof Segment.ProjectionRestart) {
             return new SimulationException(at + "internal signal escaped: " + e.getMessage(), last, null);
         }

@@ -60,6 +60,11 @@ final class SwitchDetector extends AbstractODEDetector<SwitchDetector> {
         return v == 0 && state.getTime() == segment.startTime ? START_ZERO : v;
     }
 
+    /** @return the watched rule's label ("exit", "lift-off", …) */
+    String label() {
+        return rule.label();
+    }
+
     /** Names the rule, so that an integrator error message about this detector says which switch it was. */
     @Override
     public String toString() {
