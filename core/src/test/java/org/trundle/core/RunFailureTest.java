@@ -385,7 +385,7 @@ class RunFailureTest {
     @Test
     void stepSizeUnderflowIsNamed() {
         double m = 0.02;
-        AppliedLoad runaway = (t, c, v, q, w, f, tau) -> f[2] = m * v[2] * v[2] / 1.0;
+        AppliedLoad runaway = (state, out) -> out.force(0, 0, m * state.velocity(2) * state.velocity(2) / 1.0);
         Simulation sim = Simulation.builder().ball(Ball.solid(R, m)).surface(new FloorForTests(Double.POSITIVE_INFINITY))
             .law(() -> "grip").load(runaway).gravity(Vector3D.ZERO).build();
         BallState s0 = BallState.of(1.0, new Vector3D(0, 0, 0.1), new Vector3D(0, 0, 1.0),
