@@ -71,6 +71,19 @@ public interface Surface {
     }
 
     /**
+     * Slabs that each hold the whole patch (every point a contact point can take on it), so that a
+     * ball in flight whose path stays out of them, grown by its radius, can never meet the patch
+     * again ({@link EndReason#LEFT_FOR_GOOD}). A slab may be open on one side, and a plane is a
+     * slab of zero thickness. Empty, the default, when nothing is known: a flight then never ends
+     * for leaving this patch.
+     *
+     * @return the slabs (m), at the surface's rest pose
+     */
+    default java.util.List<Slab> extent() {
+        return java.util.List.of();
+    }
+
+    /**
      * @return a fresh per-run scratch object for {@link ContactGeometry#scratch}, or null
      */
     default Object newScratch() {

@@ -21,6 +21,7 @@ import org.trundle.core.RunEvent;
 import org.trundle.core.RunObserver;
 import org.trundle.core.Sample;
 import org.trundle.core.SampleContact;
+import org.trundle.core.Slab;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.Surface;
 
@@ -74,6 +75,10 @@ final class Run {
     double t;
     double[] y;
     double endTime;
+    /** In free flight: the time from which no patch can be met again ({@link LeaveCheck}); +∞ otherwise. */
+    double flightClear = Double.POSITIVE_INFINITY;
+    /** Every patch's slabs ({@code Surface#extent}), asked on the first flight; null before. */
+    List<List<Slab>> extents;
 
     final List<RunEvent> events = new ArrayList<>();
     final List<PhaseSpan> spans = new ArrayList<>();

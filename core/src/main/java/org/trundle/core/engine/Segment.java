@@ -71,8 +71,10 @@ final class Segment {
             rel[i] = run.relTol[layout[i]];
         }
         // the smallest step advances the time (a step of zero length would end no step and no check)
+        // a free flight ends where it is clear of every patch for good (LeaveCheck), if that is sooner
+        double until = Math.min(run.endTime, run.flightClear);
         DormandPrince853Integrator integ = new DormandPrince853Integrator(minStep(run.t),
-            run.endTime - run.t + 1e-300, abs, rel);
+            until - run.t + 1e-300, abs, rel);
         if (run.restartStep > 0) {
             integ.setInitialStepSize(run.restartStep);
             run.restartStep = 0;
@@ -99,7 +101,7 @@ final class Segment {
                 integ.addEventDetector(new SwitchDetector(this, rule));
             }
         }
-        return integ.integrate(dyn, new ODEState(run.t, dyn.beginSegment(layout, run.y)), run.endTime);
+        return integ.integrate(dyn, new ODEState(run.t, dyn.beginSegment(layout, run.y)), until);
     }
 
     /**
@@ -161,7 +163,7 @@ final class Segment {
                     ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
                     run.emitSample(ts, run.snapshots.fullState(si), phase, false);
                 }
-            } else if (tc < run.endTime && observed) {
+            } else if (tc < Math.min(run.endTime, run.flightClear) && observed) {
                 run.emitSample(tc, yc, phase, false);
             }
             // kinetic energy, centre and slip from the snapshot (every layout starts with the
