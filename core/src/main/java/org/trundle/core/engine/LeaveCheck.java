@@ -46,8 +46,10 @@ final class LeaveCheck {
                 double q0 = c[0] * dx + c[1] * dy + c[2] * dz;
                 double w = v[0] * dx + v[1] * dy + v[2] * dz;
                 double a = g[0] * dx + g[1] * dy + g[2] * dz;
-                // rounding of q0 and of the bounds themselves, on top of the reach
-                double pad = reach + 1e-12 * (Math.abs(q0) + finitePart(s.low()) + finitePart(s.high()));
+                // the rounding of q0 and of the bounds, on top of the reach (a few units in the last
+                // place: a pad proportional to the coordinates would make the end time depend on
+                // where the origin is)
+                double pad = reach + 8 * (Math.ulp(q0) + ulpOf(s.low()) + ulpOf(s.high()));
                 double[] below = below(q0, w, a, s.high() + pad);
                 double[] above = below(-q0, -w, -a, -(s.low() - pad));
                 if (below == null || above == null) {
@@ -72,8 +74,8 @@ final class LeaveCheck {
         return latest == Double.NEGATIVE_INFINITY ? t : t + latest;
     }
 
-    private static double finitePart(double x) {
-        return Double.isFinite(x) ? Math.abs(x) : 0.0;
+    private static double ulpOf(double x) {
+        return Double.isFinite(x) ? Math.ulp(x) : 0.0;
     }
 
     /**
