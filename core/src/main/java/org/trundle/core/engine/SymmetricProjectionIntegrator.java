@@ -95,21 +95,20 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
         sanityChecks(initialState, finalTime);
         setStepStart(initIntegration(equations, initialState, finalTime));
         boolean forward = finalTime > initialState.getTime();
+        double tStart = initialState.getTime();
+        double signed = forward ? step : -step;
+        long k = 0;
         setIsLastStep(false);
         do {
             ODEStateAndDerivative start = getStepStart();
             double t0 = start.getTime();
-            double remaining = finalTime - t0;
-            double t1;
-            double h;
-            if (Math.abs(remaining) <= step * (1 + 1e-9)) {
+            // step ends at tStart + k h, so that a million steps do not accumulate the rounding of a million sums
+            double t1 = tStart + (++k) * signed;
+            if (Math.abs(finalTime - t0) <= step * (1 + 1e-6) || (forward ? t1 >= finalTime : t1 <= finalTime)) {
                 // the last step ends exactly at the final time (a shorter step ends a segment only)
                 t1 = finalTime;
-                h = remaining;
-            } else {
-                h = forward ? step : -step;
-                t1 = t0 + h;
             }
+            double h = t1 - t0;
             setStepSize(h);
             double[] y1 = advance(t0, start.getCompleteState(), h);
             double[] f1 = computeDerivatives(t1, y1);
