@@ -1,7 +1,5 @@
 package org.trundle.contact;
 
-import org.hipparchus.analysis.solvers.AllowedSolution;
-import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.special.elliptic.carlson.CarlsonEllipticIntegral;
 import org.trundle.core.Checks;
@@ -38,11 +36,12 @@ import org.trundle.core.Material;
  * {@code B/A = R_D(0, 1, β²) / R_D(0, β², 1)} and {@code a³ = P R_D(0, β², 1)/(2π E* A)}, which have
  * no cancellation near the circle ({@code e → 0}); the circular limit {@code β = 1} gives exactly
  * {@code a³ = 3PR/(4E*)}, {@code δ = a²/R} with {@code 1/R = 2A}. {@code β} is found by a bracketing
- * Brent root find (Hipparchus {@link BracketingNthOrderBrentSolver}) on {@code ln β}; the integrals
+ * root find on {@code ln β} (the Illinois false-position method, allocation-free); the integrals
  * are Hipparchus' {@link CarlsonEllipticIntegral} (no curve fits). Elongations beyond
  * {@code b/a = 1e-12} are rejected.
  *
- * <p>All methods are static, allocation-light and thread-safe.
+ * <p>All methods are static and thread-safe; {@link #meanRadius} allocates nothing (no solver object per
+ * call), {@link #solve} only small values (its result and the direction vectors).
  */
 public final class HertzContact {
     /** Smallest axis ratio b/a solved for; beyond it the contact is treated as a line contact and rejected. */
@@ -111,13 +110,18 @@ public final class HertzContact {
         double eStar = ball.contactModulus(wall);
         // the major axis lies along the smaller relative curvature
         boolean firstIsMajor = rho1 <= rho2;
-        double[] unit = unitLoadSolution(Math.min(rho1, rho2), Math.max(rho1, rho2), eStar);
+        // the patch under a unit load: a, b and p₀ scale with P^{1/3}, δ with P^{2/3}
+        double beta = axisRatio(Math.max(rho1, rho2) / Math.min(rho1, rho2));
+        double unitA = unitSemiMajor(Math.min(rho1, rho2), beta, eStar);
+        double unitB = beta * unitA;
+        double unitP0 = 3.0 / (2 * Math.PI * unitA * unitB);
+        double unitDelta = unitP0 / eStar * unitB * CarlsonEllipticIntegral.rF(0.0, beta * beta, 1.0);
         double s = Math.cbrt(load);
-        double a = unit[0] * s;
-        double b = unit[1] * s;
-        double p0 = unit[2] * s;
-        double delta = unit[3] * s * s;
-        double stiffness = 1.0 / (unit[3] * Math.sqrt(unit[3]));
+        double a = unitA * s;
+        double b = unitB * s;
+        double p0 = unitP0 * s;
+        double delta = unitDelta * s * s;
+        double stiffness = 1.0 / (unitDelta * Math.sqrt(unitDelta));
         return new HertzPatch(load, a, b, firstIsMajor ? d1 : d2, firstIsMajor ? d2 : d1, p0, delta, stiffness, eStar);
     }
 
@@ -170,8 +174,8 @@ public final class HertzContact {
         Checks.positive("contact modulus", contactModulus);
         double rho1 = relativeCurvature(ballRadius, curvature1, "curvature1");
         double rho2 = relativeCurvature(ballRadius, curvature2, "curvature2");
-        double[] unit = unitLoadSolution(Math.min(rho1, rho2), Math.max(rho1, rho2), contactModulus);
-        return Math.sqrt(unit[0] * unit[1]) * Math.cbrt(load);
+        double beta = axisRatio(Math.max(rho1, rho2) / Math.min(rho1, rho2));
+        return unitSemiMajor(Math.min(rho1, rho2), beta, contactModulus) * Math.sqrt(beta) * Math.cbrt(load);
     }
 
     /**
@@ -187,13 +191,56 @@ public final class HertzContact {
         }
         double logRatio = Math.log(ratio);
         double lo = Math.log(MIN_AXIS_RATIO);
-        if (logRatioOfAxes(lo) < logRatio) {
+        double fLo = logRatioOfAxes(lo) - logRatio;
+        if (fLo < 0) {
             throw new IllegalArgumentException("relative curvature ratio B/A = " + ratio
                 + " gives a contact ellipse longer than 1e12 times its width (a line contact), outside the Hertz point-contact solution");
         }
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-15, 1e-15, 0.0, 5);
-        double x = solver.solve(200, u -> logRatioOfAxes(u) - logRatio, lo, 0.0, AllowedSolution.ANY_SIDE);
-        return Math.exp(x);
+        return Math.exp(logAxisRatio(logRatio, lo, fLo));
+    }
+
+    /**
+     * The root {@code u = ln β} of {@code ln(B/A)(u) = logRatio} in {@code [lo, 0]}, where the function
+     * falls from {@code logRatio + fLo ≥ logRatio} to 0: the Illinois variant of the false-position
+     * method (M. Dowell &amp; P. Jarratt, BIT 11 (1971) 168), with a bisection whenever an estimate leaves the
+     * bracket; it keeps the root bracketed, converges superlinearly, and allocates nothing (unlike a
+     * Hipparchus solver object per call). Stops when the estimate moves by less than {@code 1e-15 (1 + |u|)}
+     * or the bracket is that narrow.
+     */
+    private static double logAxisRatio(double logRatio, double lo, double fLo) {
+        double a = lo;
+        double fa = fLo;
+        double b = 0.0;
+        double fb = -logRatio;
+        double c = Double.NaN;
+        int side = 0;
+        for (int i = 0; i < 200; i++) {
+            double prev = c;
+            c = (a * fb - b * fa) / (fb - fa);
+            if (!(c > a && c < b)) {
+                c = 0.5 * (a + b);
+            }
+            double fc = logRatioOfAxes(c) - logRatio;
+            if (fc == 0 || Math.abs(c - prev) <= 1e-15 * (1 + Math.abs(c)) || b - a <= 1e-15 * (1 + Math.abs(c))) {
+                return c;
+            }
+            if (fc > 0) {
+                a = c;
+                fa = fc;
+                if (side == 1) {
+                    fb *= 0.5;
+                }
+                side = 1;
+            } else {
+                b = c;
+                fb = fc;
+                if (side == -1) {
+                    fa *= 0.5;
+                }
+                side = -1;
+            }
+        }
+        return c;
     }
 
     /** {@code ln(B/A)} as a function of {@code u = ln β}. */
@@ -203,18 +250,11 @@ public final class HertzContact {
     }
 
     /**
-     * The patch under a unit load: {a, b, p₀, δ} for {@code P = 1 N}; a, b and p₀ scale with
-     * {@code P^{1/3}}, δ with {@code P^{2/3}}.
+     * Semi-major axis under a unit load, {@code a = (R_D(0, β², 1)/(2π E* A))^{1/3}} for {@code P = 1 N}
+     * ({@code A = ρ_min/2}); b = β a.
      */
-    private static double[] unitLoadSolution(double rhoMin, double rhoMax, double eStar) {
-        double bigA = 0.5 * rhoMin;
-        double beta = axisRatio(rhoMax / rhoMin);
-        double m1 = beta * beta;
-        double a = Math.cbrt(CarlsonEllipticIntegral.rD(0.0, m1, 1.0) / (2 * Math.PI * eStar * bigA));
-        double b = beta * a;
-        double p0 = 3.0 / (2 * Math.PI * a * b);
-        double delta = p0 / eStar * b * CarlsonEllipticIntegral.rF(0.0, m1, 1.0);
-        return new double[] {a, b, p0, delta};
+    private static double unitSemiMajor(double rhoMin, double beta, double eStar) {
+        return Math.cbrt(CarlsonEllipticIntegral.rD(0.0, beta * beta, 1.0) / (2 * Math.PI * eStar * 0.5 * rhoMin));
     }
 
     private static double relativeCurvature(double ballRadius, double curvature, String name) {

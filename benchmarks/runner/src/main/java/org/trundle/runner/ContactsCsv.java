@@ -21,7 +21,8 @@ import org.trundle.scenario.ScenarioFiles;
 import org.trundle.scenario.Decimals;
 
 /**
- * Writes {@code contacts.csv}, one row per sample and touching patch, and keeps per patch the largest
+ * Writes {@code contacts.csv}, one row per sample and touching patch with a material (two rows for a sample
+ * touching two such patches at once), and keeps per patch the largest
  * normal force and maximum pressure with their times (for {@code summary.json}); passes every call on to the
  * run's other observer. Columns: {@value #HEADER} (SI units; the last three give the ellipse's major axis,
  * world frame). The file is opened after the downstream observer has started (which creates the folder).
@@ -39,14 +40,16 @@ final class ContactsCsv implements RunObserver {
 
     /**
      * @param file where to write
-     * @param loads the wall-load calculator of the run's patch
+     * @param loads the wall-load calculator of the run's patches
      * @param next the observer to pass everything on to
      */
     ContactsCsv(Path file, WallLoads loads, RunObserver next) {
         this.file = file;
         this.loads = loads;
         this.next = next;
-        peaks.put(loads.patch(), new double[] {0, Double.NaN, 0, Double.NaN});
+        for (String id : loads.patches()) {
+            peaks.put(id, new double[] {0, Double.NaN, 0, Double.NaN});
+        }
     }
 
     @Override
@@ -67,7 +70,9 @@ final class ContactsCsv implements RunObserver {
         if (out == null) {
             return;
         }
-        loads.of(s).ifPresent(this::write);
+        for (WallLoad w : loads.loads(s)) {
+            write(w);
+        }
     }
 
     private void write(WallLoad w) {

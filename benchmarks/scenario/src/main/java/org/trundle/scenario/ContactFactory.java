@@ -93,8 +93,8 @@ final class ContactFactory {
             }
             if (materials.isEmpty()) {
                 throw new ScenarioException(s.where("spin_creep") + " = true needs ball.material and"
-                    + " surface.material (each {\"youngs_modulus\": Pa, \"poisson_ratio\": nu}); the scenario gives"
-                    + " neither");
+                    + " surface.material (each {\"youngs_modulus\": Pa, \"poisson_ratio\": nu}; in a scene: a patch's"
+                    + " own contact, with ball.material and that patch's material); the scenario gives no such pair");
             }
             Material[] m = materials.get();
             return new SpinCreepPivoting(m[0], m[1], length > 0 ? length : Double.POSITIVE_INFINITY);

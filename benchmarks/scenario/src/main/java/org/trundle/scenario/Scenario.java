@@ -1,6 +1,7 @@
 package org.trundle.scenario;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -188,6 +189,7 @@ public record Scenario(JsonNode document, String description, Simulation simulat
      */
     private static Optional<Material[]> wallLoadMaterials(Section root) {
         if (!root.has("surface")) {
+            sceneMaterials(root);
             return Optional.empty();
         }
         Section ball = root.section("ball");
@@ -224,8 +226,31 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         return HertzStiffness.compliance(m[0], m[1], e);
     }
 
+    /**
+     * Reads {@code ball.material} and the {@code material} of the entries of a {@code surfaces} list: the
+     * ball's goes with at least one wall's, and a wall's needs the ball's.
+     *
+     * @return the ball's material and the walls' by patch id, or empty when none is given
+     */
+    private static Optional<Map.Entry<Material, Map<String, Material>>> sceneMaterials(Section root) {
+        Section ball = root.section("ball");
+        Map<String, Material> walls = SceneFactory.wallMaterials(root);
+        if (!ball.has("material") && walls.isEmpty()) {
+            return Optional.empty();
+        }
+        if (!ball.has("material")) {
+            throw new ScenarioException("surfaces[].material (given for " + walls.keySet() + ") needs ball.material"
+                + " (wall loads and contact.spin_creep need both)");
+        }
+        if (walls.isEmpty()) {
+            throw new ScenarioException("ball.material goes with the material of at least one patch"
+                + " (surfaces[].material); none is given");
+        }
+        return Optional.of(Map.entry(material(ball.section("material")), walls));
+    }
+
     /** A material from {@code {"youngs_modulus": Pa, "poisson_ratio": ...}}. */
-    private static Material material(Section s) {
+    static Material material(Section s) {
         s.allow("youngs_modulus", "poisson_ratio");
         double e = s.positive("youngs_modulus", "Pa");
         double nu = s.number("poisson_ratio", "");
@@ -236,13 +261,18 @@ public record Scenario(JsonNode document, String description, Simulation simulat
     }
 
     /**
-     * The loads the wall sees, when the scenario gives {@code ball.material} and {@code surface.material}
-     * (each {@code {"youngs_modulus": Pa, "poisson_ratio": ν}}); the patch id is {@link #PATCH_ID}.
+     * The loads the walls see, when the scenario gives {@code ball.material} and {@code surface.material}
+     * (each {@code {"youngs_modulus": Pa, "poisson_ratio": ν}}; the patch id is {@link #PATCH_ID}), or
+     * {@code ball.material} and the {@code material} of entries of {@code surfaces} (one patch each, by id).
      *
      * @return a fresh calculator for one run, or empty without materials
      */
     public Optional<WallLoads> wallLoads() {
-        return wallLoadMaterials(Section.root(document)).map(m -> new WallLoads(PATCH_ID, simulation.surface(),
+        Section root = Section.root(document);
+        if (root.has("surfaces")) {
+            return sceneMaterials(root).map(m -> WallLoads.forScene(simulation, m.getKey(), m.getValue()));
+        }
+        return wallLoadMaterials(root).map(m -> new WallLoads(PATCH_ID, simulation.surface(),
             simulation.ball().radius(), m[0], m[1]));
     }
 

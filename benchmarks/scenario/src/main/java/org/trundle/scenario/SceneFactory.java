@@ -2,7 +2,9 @@ package org.trundle.scenario;
 
 import java.util.ArrayList;
 import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
@@ -18,6 +20,10 @@ import org.trundle.core.SurfaceMotion;
  * ({@link SurfaceFactory}) with, besides its type's keys, {@code id} (required in a list: letters,
  * digits, {@code _}, {@code -}, {@code .}), an optional {@code motion} and an optional {@code contact}
  * (the patch's own law, {@link ContactFactory}; default the scenario's {@code contact}).
+ *
+ * <p>An entry of {@code surfaces} may give its wall's {@code material} ({@code {"youngs_modulus": Pa,
+ * "poisson_ratio": ν}}): with {@code ball.material} the run reports that patch's wall loads, and the patch's
+ * own {@code contact.spin_creep} uses the pair.
  *
  * <p>{@code motion}: {@code {"type": "rotation", "axis": [x, y, z], "origin": [x, y, z] (m), "rate": Ω
  * (rad/s)}} (turning about the axis through the origin, right-handed) or {@code {"type":
@@ -52,7 +58,11 @@ final class SceneFactory {
                 if (!ids.add(id)) {
                     throw new ScenarioException(s.where("id") + " = \"" + id + "\" is used twice; ids must be unique");
                 }
-                out.add(patch(id, s, materials));
+                Optional<Material[]> own = s.has("material") && root.section("ball").has("material")
+                    ? Optional.of(new Material[] {Scenario.material(root.section("ball").section("material")),
+                        Scenario.material(s.section("material"))})
+                    : Optional.empty();
+                out.add(patch(id, s.without("material"), own));
             }
             return out;
         }
@@ -62,6 +72,25 @@ final class SceneFactory {
                 + " a contact per patch is for the entries of surfaces");
         }
         return List.of(patch(Scenario.PATCH_ID, s, materials));
+    }
+
+    /**
+     * The wall materials of a {@code surfaces} list, by patch id in list order (entries without a
+     * {@code material} left out); empty for a single {@code surface}.
+     *
+     * @param root the scenario's root
+     * @return the materials
+     */
+    static Map<String, Material> wallMaterials(Section root) {
+        Map<String, Material> out = new LinkedHashMap<>();
+        if (root.has("surfaces")) {
+            for (Section s : root.sectionList("surfaces")) {
+                if (s.has("material")) {
+                    out.put(s.text("id", ""), Scenario.material(s.section("material")));
+                }
+            }
+        }
+        return out;
     }
 
     private static Patch patch(String id, Section s, Optional<Material[]> materials) {
