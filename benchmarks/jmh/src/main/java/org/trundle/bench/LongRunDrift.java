@@ -34,7 +34,8 @@ import org.trundle.surfaces.Sphere;
  * ({@link ThreadMXBean}; the machine is shared, so wall time is not reported).
  *
  * <p>Usage: {@code java -cp benchmarks/jmh/target/trundle-benchmarks.jar org.trundle.bench.LongRunDrift
- * [steps [h]]} (defaults 1,000,000 steps of 1 ms: 1000 s simulated per case). Each run is preceded by a
+ * [steps [h [cases]]]} (defaults 1,000,000 steps of 1 ms: 1000 s simulated per case; cases a comma-separated
+ * list of "vertical tube", "bowl", "ring groove", default all three). Each run is preceded by a
  * warm-up run of a tenth of its time. Prints a Markdown table.
  */
 public final class LongRunDrift {
@@ -44,7 +45,8 @@ public final class LongRunDrift {
     }
 
     /**
-     * @param args optional number of symmetric steps (default 1,000,000) and step h (s, default 1e-3)
+     * @param args optional number of symmetric steps (default 1,000,000), step h (s, default 1e-3) and cases
+     *     (comma-separated, default all)
      */
     public static void main(String[] args) {
         long steps = args.length > 0 ? Long.parseLong(args[0]) : 1_000_000L;
@@ -60,7 +62,8 @@ public final class LongRunDrift {
         System.out.println("| case | integrator | growth exponent | envelope, first window | envelope, last window"
             + " | RHS evals / sim. s | CPU ms / sim. s | steps | end |");
         System.out.println("|---|---|---|---|---|---|---|---|---|");
-        for (String name : new String[] {"vertical tube", "bowl", "ring groove"}) {
+        String[] cases = args.length > 2 ? args[2].split(",") : new String[] {"vertical tube", "bowl", "ring groove"};
+        for (String name : cases) {
             for (int order : new int[] {0, 4, 6}) {
                 SolverSettings set = SolverSettings.defaults().withMaxEvaluations(Long.MAX_VALUE / 4)
                     .withSampleInterval(10 * h);
@@ -80,10 +83,13 @@ public final class LongRunDrift {
                 } else if (name.equals("ring groove")) {
                     sim = CurvedCases.TORUS_GROOVE.simulation(set);
                     start = CurvedCases.TORUS_GROOVE.start(sim);
-                } else {
+                } else if (name.equals("vertical tube")) {
                     VerticalTubeCase tube = new VerticalTubeCase(set);
                     sim = tube.simulation();
                     start = tube.start();
+                } else {
+                    throw new IllegalArgumentException("case must be \"vertical tube\", \"bowl\" or \"ring groove\", got \""
+                        + name + "\"");
                 }
                 row(name, order > 0 ? "symmetric, order " + order + ", h = " + h + " s"
                     : "Dormand–Prince 8(5,3), tol 1e-10", sim, start, duration);

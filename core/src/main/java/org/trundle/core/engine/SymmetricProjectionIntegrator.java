@@ -31,7 +31,11 @@ import org.hipparchus.ode.ODEStateAndDerivative;
  *
  * <p>The implicit stages {@code z = y + (γh/2) f(t + γh/2, z)} are solved by fixed-point iteration
  * (the usual choice for non-stiff problems, same book §VIII.6; from memory) until the change of every
- * component falls to the rounding level {@code 1e-15·scale_i + 2 ulp(z_i)}; the projection's Newton
+ * component falls to its rounding, {@code 2 ulp(z_i)} (or {@code 1e-17·scale_i} for a component near zero),
+ * or stops falling. Stopping any earlier leaves an error of one sign in every step (the iteration
+ * approaches its fixed point from one side), and that drifts: stopping at {@code 1e-15·scale_i} made the
+ * energy error of a 10⁶-step order-6 run in a bowl grow linearly, to 8e-12, where solving to rounding
+ * leaves a random walk of rounding errors, 3e-13 after 2·10⁵ steps. The projection's Newton
  * iteration until every residual is within the manifold's {@link ConstraintManifold#tolerance}. Both
  * solve to rounding, so the symmetry holds to rounding too. A stage that does not converge in
  * {@value #MAX_STAGE_ITERATIONS} iterations means the step is far too large for the motion: the run
@@ -63,6 +67,12 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
     private double[][] grad1;
     private double[] residual;
     private double[] mu;
+    /** The converged midpoints of each stage over the last three steps, newest first (the predictor). */
+    private double[][][] history;
+    private int historyCount;
+    private double historyStep;
+    /** Whether the stages of the current step start from the extrapolated midpoints. */
+    private boolean predict;
     /** Number of projection iterations of the last step (for tests and benchmarks). */
     int lastProjectionIterations;
 
@@ -98,6 +108,7 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
         double tStart = initialState.getTime();
         double signed = forward ? step : -step;
         long k = 0;
+        historyCount = 0;
         setIsLastStep(false);
         do {
             ODEStateAndDerivative start = getStepStart();
@@ -133,6 +144,7 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
      */
     void prepare(org.hipparchus.ode.OrdinaryDifferentialEquation ode, double t0, double[] y0, double tEnd) {
         initIntegration(new ExpandableODE(ode), new ODEState(t0, y0), tEnd);
+        historyCount = 0;
     }
 
     /**
@@ -158,6 +170,7 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
         DecompositionSolver newton = new LUDecomposition(new Array2DRowRealMatrix(a, false)).getSolver();
         java.util.Arrays.fill(mu, 0.0);
         java.util.Arrays.fill(guessReady, false);
+        predict = historyCount >= 3 && Math.abs(h - historyStep) <= 1e-9 * Math.abs(h);
         double[] y1 = new double[n];
         double previous = Double.POSITIVE_INFINITY;
         for (int it = 1; ; it++) {
@@ -196,6 +209,7 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
                 continue;
             }
             lastProjectionIterations = it;
+            remember(h);
             if (!(worst <= 1e3)) {
                 throw new RunFailure("the symmetric projection did not reach the constraint manifold at t = " + t1
                     + " s (residual " + worst + " times its tolerance after " + it + " iterations): the fixed step "
@@ -203,6 +217,23 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
             }
             return y1;
         }
+    }
+
+    /** Keeps the step's converged stage midpoints as the newest history entry. */
+    private void remember(double h) {
+        if (historyCount > 0 && !(Math.abs(h - historyStep) <= 1e-9 * Math.abs(h))) {
+            historyCount = 0;
+        }
+        for (int s = 0; s < composition.stages(); s++) {
+            double[][] hs = history[s];
+            double[] oldest = hs[2];
+            hs[2] = hs[1];
+            hs[1] = hs[0];
+            hs[0] = oldest;
+            System.arraycopy(stageGuess[s], 0, oldest, 0, n);
+        }
+        historyCount = Math.min(3, historyCount + 1);
+        historyStep = h;
     }
 
     /** The base method {@code Φ_h}: the composition's midpoint stages from {@code y} into {@code out}. */
@@ -218,13 +249,21 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
 
     /**
      * One implicit midpoint stage in place: {@code z = y + (h/2) f(t + h/2, z)}, {@code y ← 2z − y}.
-     * The first projection iteration starts from {@code y}; later ones from the stage's last solution
-     * (the projection moves it by the tiny {@code Gᵀ Δμ}).
+     * The first projection iteration starts from the quadratic extrapolation of the stage's midpoints
+     * over the last three steps of the same size, {@code 3z₁ − 3z₂ + z₃} (its error is {@code O((ωh)³)},
+     * against {@code O(ωh)} for the stage's start {@code y}, used when there is no such history), later
+     * ones from the stage's last solution (the projection moves it by the tiny {@code Gᵀ Δμ}). The guess
+     * changes only the number of iterations, not the solution.
      */
     private void midpoint(int stage, double t, double[] y, double h) {
         double[] guess = stageGuess[stage];
         if (guessReady[stage]) {
             System.arraycopy(guess, 0, z, 0, n);
+        } else if (predict) {
+            double[][] hs = history[stage];
+            for (int i = 0; i < n; i++) {
+                z[i] = 3 * (hs[0][i] - hs[1][i]) + hs[2][i];
+            }
         } else {
             System.arraycopy(y, 0, z, 0, n);
         }
@@ -238,7 +277,7 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
             for (int i = 0; i < n; i++) {
                 double next = y[i] + half * f[i];
                 double d = Math.abs(next - z[i]);
-                if (!(d <= 1e-15 * scale[i] + 2 * Math.ulp(next))) {
+                if (!(d <= 1e-17 * scale[i] + 2 * Math.ulp(next))) {
                     converged = false;
                 }
                 change = Math.max(change, d / scale[i]);
@@ -280,6 +319,8 @@ final class SymmetricProjectionIntegrator extends AbstractIntegrator {
         grad1 = new double[m][dim];
         residual = new double[m];
         mu = new double[m];
+        history = new double[composition.stages()][3][dim];
+        historyCount = 0;
     }
 
     private static double dot(double[] a, double[] b) {
