@@ -29,6 +29,12 @@ final class Segment {
     SwitchRule fired;
     /** The right-hand side's observer of Dormand–Prince's step-end stage (off on symmetric segments). */
     private final Dynamics.StageObserver stageObserver;
+    /**
+     * Whether the current segment runs on the symmetric integrator, whose step ends are on the manifold
+     * to rounding already: no projection restart (with a projection threshold set near rounding, a
+     * restart after every step would only cost).
+     */
+    private boolean symmetricSegment;
 
     Segment(Run run, Transitions transitions) {
         this.run = run;
@@ -74,7 +80,8 @@ final class Segment {
             rel[i] = run.relTol[layout[i]];
         }
         AbstractIntegrator integ;
-        if (symmetricApplies(phase)) {
+        symmetricSegment = symmetricApplies(phase);
+        if (symmetricSegment) {
             integ = symmetric(phase, layout);
             // the implicit stages evaluate many times at one time: that is not Dormand–Prince's step end
             dyn.stageObserver = null;
@@ -221,7 +228,8 @@ final class Segment {
                 // a whole step (no event cut it short) whose end drifted past the thresholds: leave
                 // the integrator and start afresh from the projected state, with the step size
                 // reached (cheaper than a step-end handler, which interpolates every step)
-                if (!interpolator.isCurrentStateInterpolated() && s.drift >= 1 && tc < run.endTime) {
+                if (!symmetricSegment && !interpolator.isCurrentStateInterpolated() && s.drift >= 1
+                    && tc < run.endTime) {
                     run.restartStep = tc - interpolator.getPreviousState().getTime();
                     throw ProjectionRestart.INSTANCE;
                 }
