@@ -4,26 +4,29 @@ package org.trundle.core;
  * A user-supplied force and torque on the ball as a function of time and state (air drag, a
  * magnet, an air jet, Magnus lift). Zero by default ({@link #NONE}).
  *
- * <p>The arrays are the solver's workspaces: read {@code centre}, {@code velocity},
- * {@code orientation} (unit quaternion, scalar first, Hamilton convention, body to world: the conjugate of the components Hipparchus' {@code Rotation} stores) and {@code spin}; write the
- * force (N, world frame, applied at the centre) into {@code force} and the torque about the centre
- * (N·m) into {@code torque}, both zero on entry. Implementations must be deterministic, allocate
- * nothing if speed matters, and be thread-safe (a sweep shares them across threads).
+ * <p>The solver calls {@link #apply} with a read-only {@link StateView} of the ball (time, centre,
+ * velocity, angular velocity, orientation as Hipparchus' {@code Rotation}) and a {@link Wrench} to
+ * set the force (N, world frame, applied at the centre) and the torque about the centre (N·m), both
+ * zero on entry. Both objects are reused for every call of a run: use them only during the call.
+ * A linear drag, for example:
+ *
+ * <pre>{@code
+ * AppliedLoad drag = (s, out) -> out.force(-b * s.velocity(0), -b * s.velocity(1), -b * s.velocity(2));
+ * }</pre>
+ *
+ * <p>Implementations must be deterministic, allocate nothing if speed matters (the component
+ * accessors of {@code StateView} and the three-number setters of {@code Wrench} allocate nothing),
+ * and be thread-safe (a sweep shares them across threads). A force or torque that is not finite
+ * stops the run with a {@link SimulationException} naming the load.
  */
 @FunctionalInterface
 public interface AppliedLoad {
     /** No applied load. */
-    AppliedLoad NONE = (t, c, v, q, w, f, tau) -> { };
+    AppliedLoad NONE = (state, out) -> { };
 
     /**
-     * @param t time (s)
-     * @param centre centre (m)
-     * @param velocity centre velocity (m/s)
-     * @param orientation quaternion (q0, q1, q2, q3)
-     * @param spin angular velocity (rad/s)
-     * @param force output force (N), zero on entry
-     * @param torque output torque (N·m), zero on entry
+     * @param state the ball's state at this evaluation (valid only during the call)
+     * @param out where to set the force and torque (zero on entry)
      */
-    void apply(double t, double[] centre, double[] velocity, double[] orientation, double[] spin,
-               double[] force, double[] torque);
+    void apply(StateView state, Wrench out);
 }

@@ -8,10 +8,10 @@ import org.trundle.core.engine.StateMapper;
  * for users who couple Trundle's dynamics to their own integrator. The kernel allocates nothing
  * per call.
  *
- * <p>State array layout ({@link #dimension()} = 21): centre (m) [0,3), velocity (m/s) [3,6),
- * orientation quaternion, scalar first, Hamilton convention body to world (the conjugate of the components Hipparchus' {@code Rotation} stores) [6,10), spin (rad/s) [10,13), dissipated work by
- * {@link LossKind} (J) [13,17), applied-load work (J) [17], centre path length (m) [18], damping work
- * of a compliant contact (J) [19], work done by a moving surface (J) [20]. In the rolling phase the centre's derivative is the no-slip velocity {@code r ω × n(c)}.
+ * <p>The state array's layout ({@link #dimension()} components: the ball's kinematic state and
+ * the energy ledger) is internal to the solver and may change between versions: make arrays with
+ * {@link #toArray(BallState)} and read them back with {@link #toBallState}, never by index. In the
+ * rolling phase the centre's derivative is the no-slip velocity {@code r ω × n(c)}.
  *
  * <p>Not thread-safe: one instance per thread (it owns the workspaces).
  */
@@ -48,6 +48,18 @@ public final class RightHandSide {
     /** @return the normal force (N) of the last evaluation */
     public double normalForce() {
         return dyn.normalForce();
+    }
+
+    /**
+     * Reads a ball state out of an array of this layout (the work components are not part of it).
+     *
+     * @param t time (s)
+     * @param y state array, as made by {@link #toArray(BallState)} and integrated
+     * @param phase the phase to give the state
+     * @return the state
+     */
+    public static BallState toBallState(double t, double[] y, Phase phase) {
+        return StateMapper.toBallState(t, y, phase);
     }
 
     /**

@@ -69,6 +69,11 @@ public final class Simulation {
         if (b.law == null) {
             throw new IllegalArgumentException("contact law must be given, got null");
         }
+        if (b.gravity == null) {
+            throw new IllegalArgumentException("gravity must be given, got none: call gravity(g) with the "
+                + "acceleration in m/s² (for Earth with z up, new Vector3D(0, 0, -9.81)), or noGravity() for a run "
+                + "without gravity");
+        }
         this.ball = b.ball;
         this.scene = !b.patches.isEmpty();
         this.patches = scene ? List.copyOf(b.patches)
@@ -123,7 +128,11 @@ public final class Simulation {
         return model;
     }
 
-    /** @return a new builder; gravity defaults to zero, the applied load to none */
+    /**
+     * @return a new builder; gravity has no default (give it with {@link Builder#gravity} or say
+     *     {@link Builder#noGravity}), the applied load defaults to none, the settings to
+     *     {@link SolverSettings#defaults()}
+     */
     public static Builder builder() {
         return new Builder();
     }
@@ -346,7 +355,7 @@ public final class Simulation {
         private SurfaceMotion motion = SurfaceMotion.NONE;
         private final List<Patch> patches = new java.util.ArrayList<>();
         private ContactLaw law;
-        private Vector3D gravity = Vector3D.ZERO;
+        private Vector3D gravity;
         private AppliedLoad load = AppliedLoad.NONE;
         private SolverSettings settings = SolverSettings.defaults();
         private Compliance compliance;
@@ -421,11 +430,27 @@ public final class Simulation {
         }
 
         /**
-         * @param g gravitational acceleration (m/s²), any direction
+         * Sets the gravitational acceleration. It has no default: a simulation built without
+         * {@code gravity} or {@link #noGravity()} is refused, so that a forgotten gravity is not taken
+         * for zero (the scenario runner's default is {@code (0, 0, −9.81)} m/s², z up).
+         *
+         * @param g gravitational acceleration (m/s²), any direction, finite (checked by {@link #build()});
+         *     {@link Vector3D#ZERO} for none
          * @return this builder
          */
         public Builder gravity(Vector3D g) {
             this.gravity = g;
+            return this;
+        }
+
+        /**
+         * Says that the run has no gravity (the same as {@code gravity(Vector3D.ZERO)}): free flight
+         * is straight, and contact needs a load or an inward curvature to hold the ball.
+         *
+         * @return this builder
+         */
+        public Builder noGravity() {
+            this.gravity = Vector3D.ZERO;
             return this;
         }
 

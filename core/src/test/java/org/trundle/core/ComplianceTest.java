@@ -86,12 +86,12 @@ class ComplianceTest {
     /** A compliant contact belongs to one still patch: a moving patch or a scene of two is refused by name. */
     @Test
     void aCompliantPatchMustNotMoveAndStandAlone() {
-        Simulation.Builder moving = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain")
+        Simulation.Builder moving = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain").noGravity()
             .compliance(Compliance.of(1e9, 0.5)).surface(new FloorForTests(1.0))
             .motion(SurfaceMotion.translation(new Vector3D(0.1, 0, 0)));
         IllegalArgumentException m = assertThrows(IllegalArgumentException.class, moving::build);
         assertTrue(m.getMessage().contains("must not move"), m.getMessage());
-        Simulation.Builder two = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain")
+        Simulation.Builder two = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain").noGravity()
             .compliance(Compliance.of(1e9, 0.5)).patch(Patch.of("a", new FloorForTests(1.0)))
             .patch(Patch.of("b", new FloorForTests(1.0)));
         IllegalArgumentException s = assertThrows(IllegalArgumentException.class, two::build);

@@ -87,6 +87,39 @@ class EngineTest {
         }
     }
 
+    /**
+     * Each sample lists its contacts: on a floor with the ball rolling and the floor's normal up, one
+     * contact on patch "surface" whose force and point repeat the single-contact fields, and none in flight
+     * (the normal force of rolling on a level floor is m g, common practice).
+     */
+    @Test
+    void samplesListTheirContacts() {
+        Simulation sim = floor(GRIP, 0.1).withSettings(SolverSettings.defaults().withSampleInterval(0.01)
+            .withStopAtExit(false));
+        java.util.List<Sample> samples = new java.util.ArrayList<>();
+        sim.run(sim.rollingStart(new Vector3D(0, 0, 0.01), new Vector3D(0.5, 0, 0)), 0.4, samples::add);
+        int rolling = 0;
+        int flying = 0;
+        for (Sample s : samples) {
+            if (s.state().phase() == Phase.FLIGHT) {
+                assertTrue(s.touches().isEmpty());
+                flying++;
+                continue;
+            }
+            rolling++;
+            assertEquals(1, s.touches().size());
+            SampleContact c = s.touches().get(0);
+            assertEquals(Simulation.SINGLE_PATCH, c.patch());
+            assertEquals(Phase.ROLLING, c.mode());
+            assertEquals(s.normalForce(), c.normalForce(), 0.0);
+            assertEquals(0.02 * G, c.normalForce(), 1e-12);
+            assertEquals(s.contactPoint(), c.contactPoint());
+            assertEquals(s.frictionForce(), c.frictionForce());
+            assertEquals(Vector3D.PLUS_K, c.normal());
+        }
+        assertTrue(rolling > 5 && flying > 5, rolling + " rolling and " + flying + " flying samples");
+    }
+
     /** Rolling off the edge of the patch is an exit naming the edge. */
     @Test
     void exitNamesTheEdge() {
@@ -124,5 +157,30 @@ class EngineTest {
         assertTrue(e.getMessage().contains("maxEvaluations") && e.getMessage().contains("-1"));
         e = assertThrows(IllegalArgumentException.class, () -> Simulation.builder().build());
         assertTrue(e.getMessage().contains("ball"));
+    }
+
+    /**
+     * A missing gravity is refused by name instead of being taken for zero; zero gravity is said
+     * explicitly, and a run without it is straight free flight (common practice).
+     */
+    @Test
+    void gravityMustBeGiven() {
+        Simulation.Builder b = Simulation.builder().ball(Ball.solid(0.01, 0.02))
+            .surface(new FloorForTests(Double.POSITIVE_INFINITY)).law(GRIP);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, b::build);
+        assertTrue(e.getMessage().startsWith("gravity must be given, got none"), e.getMessage());
+        assertTrue(e.getMessage().contains("noGravity()"), e.getMessage());
+        IllegalArgumentException n = assertThrows(IllegalArgumentException.class, () -> b.gravity(null).build());
+        assertTrue(n.getMessage().startsWith("gravity must be given"), n.getMessage());
+        IllegalArgumentException nan = assertThrows(IllegalArgumentException.class,
+            () -> b.gravity(new Vector3D(0, Double.NaN, 0)).build());
+        assertTrue(nan.getMessage().startsWith("gravity must have finite components"), nan.getMessage());
+        Simulation none = b.noGravity().build();
+        assertEquals(Vector3D.ZERO, none.gravity());
+        assertEquals(Vector3D.ZERO, b.gravity(Vector3D.ZERO).build().toBuilder().build().gravity());
+        BallState s0 = BallState.flying(new Vector3D(0, 0, 1.0), new Vector3D(0.5, 0.2, 1.0), Vector3D.ZERO);
+        BallState end = none.run(s0, 0.3).endState();
+        assertEquals(1.3, end.centre().getZ(), 1e-12);
+        assertEquals(0.15, end.centre().getX(), 1e-12);
     }
 }

@@ -241,8 +241,8 @@ class RunFailureTest {
         assertSame(boom, e.getCause());
         onReference(e);
 
-        Simulation byLoad = floor(plain, () -> "grip", (t, c, v, q, w, f, tau) -> {
-            if (c[0] > BREAK_X) {
+        Simulation byLoad = floor(plain, () -> "grip", (s, out) -> {
+            if (s.centre(0) > BREAK_X) {
                 throw boom;
             }
         });
@@ -351,7 +351,7 @@ class RunFailureTest {
     @Test
     void interruptBeforeTheRunStopsAtTheStart() {
         Simulation sim = Simulation.builder().ball(Ball.solid(R, 0.02)).surface(new FloorForTests(Double.POSITIVE_INFINITY))
-            .law(() -> "grip").build();
+            .law(() -> "grip").noGravity().build();
         BallState start = BallState.flying(new Vector3D(0, 0, 2 * R), new Vector3D(0, 0, 1), Vector3D.ZERO);
         Thread.currentThread().interrupt();
         try {

@@ -205,19 +205,20 @@ final class HostileUserCode {
         if (!f.is("LOAD")) {
             return AppliedLoad.NONE;
         }
-        return (t, c, v, q, w, force, torque) -> {
+        return (s, out) -> {
+            double t = s.time();
             if (t < at) {
                 return;
             }
             switch (f) {
                 case LOAD_NAN_FORCE:
-                    force[2] = Double.NaN;
+                    out.force(0, 0, Double.NaN);
                     break;
                 case LOAD_INFINITE_TORQUE:
-                    torque[0] = Double.NEGATIVE_INFINITY;
+                    out.torque(Double.NEGATIVE_INFINITY, 0, 0);
                     break;
                 case LOAD_HUGE_FORCE:
-                    force[0] = 1e300;
+                    out.force(1e300, 0, 0);
                     break;
                 default:
                     throw new IllegalStateException("hostile load refuses at t = " + t);

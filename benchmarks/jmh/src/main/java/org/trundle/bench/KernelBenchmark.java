@@ -122,9 +122,7 @@ public class KernelBenchmark {
             VerticalTubeCase tc = new VerticalTubeCase();
             BallState s = tc.simulation().rollingStart(new Vector3D(VerticalTubeCase.orbitRadius(), 0, -0.001),
                 new Vector3D(0, VerticalTubeCase.SPEED, -0.2));
-            double[] full = RightHandSide.toArray(s);
-            y = new double[VerticalTubeRolling.DIM];
-            System.arraycopy(full, 0, y, 0, y.length);
+            y = VerticalTubeCase.baselineState(s);
             yDot = new double[VerticalTubeRolling.DIM];
             base = tc.baseline();
         }

@@ -1,11 +1,11 @@
 package org.trundle.bench;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.bench.baseline.VerticalTubeRolling;
 import org.trundle.contact.PureRolling;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
-import org.trundle.core.RightHandSide;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
 import org.trundle.surfaces.Cylinder;
@@ -74,10 +74,24 @@ public final class VerticalTubeCase {
 
     /** @return the start state in the baseline's 13-component layout (c, v, q, ω) */
     public double[] baselineStart() {
-        double[] y = RightHandSide.toArray(start);
-        double[] b = new double[VerticalTubeRolling.DIM];
-        System.arraycopy(y, 0, b, 0, VerticalTubeRolling.DIM);
-        return b;
+        return baselineState(start);
+    }
+
+    /**
+     * A ball state in the baseline's 13-component layout: centre, velocity, the Hamilton quaternion
+     * body to world scalar first (Hipparchus' {@code Rotation} stores its conjugate, so the vector
+     * part changes sign), spin.
+     *
+     * @param s the state
+     * @return a new array
+     */
+    public static double[] baselineState(BallState s) {
+        Rotation q = s.orientation();
+        Vector3D c = s.centre();
+        Vector3D v = s.velocity();
+        Vector3D w = s.spin();
+        return new double[] {c.getX(), c.getY(), c.getZ(), v.getX(), v.getY(), v.getZ(),
+            q.getQ0(), -q.getQ1(), -q.getQ2(), -q.getQ3(), w.getX(), w.getY(), w.getZ()};
     }
 
     /** @return a fresh hand-derived baseline for this scenario */

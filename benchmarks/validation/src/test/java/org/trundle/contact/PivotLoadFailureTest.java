@@ -76,7 +76,7 @@ class PivotLoadFailureTest {
     @Test
     void appliedForce() {
         double f = 0.02;
-        AppliedLoad push = (t, c, v, q, w, force, torque) -> force[0] = f;
+        AppliedLoad push = (s, out) -> out.force(f, 0, 0);
         Simulation sim = plane().law(new PureRolling()).load(push).build();
         RunResult res = sim.run(sim.rollingStart(new Vector3D(0, 0, r), new Vector3D(0.1, 0, 0)), 0.5);
         double a = f / (1.4 * 0.03);
@@ -87,7 +87,7 @@ class PivotLoadFailureTest {
 
     @Test
     void nonFiniteLoadStopsWithTheLastGoodState() {
-        AppliedLoad bad = (t, c, v, q, w, force, torque) -> force[0] = t > 0.05 ? Double.NaN : 0.0;
+        AppliedLoad bad = (s, out) -> out.force(s.time() > 0.05 ? Double.NaN : 0.0, 0, 0);
         Simulation sim = plane().law(new PureRolling()).build().toBuilder().load(bad).build();
         SimulationException e = assertThrows(SimulationException.class,
             () -> sim.run(sim.rollingStart(new Vector3D(0, 0, r), new Vector3D(0.1, 0, 0)), 0.5));

@@ -56,10 +56,10 @@ class BadInputTest {
     @Test
     void ballThatCannotFit() {
         rejects(() -> Simulation.builder().ball(Ball.solid(0.016, 0.002))
-            .surface(new Cylinder(Vector3D.ZERO, Vector3D.PLUS_K, 0.015, Side.INSIDE)).law(new PureRolling()).build(),
+            .surface(new Cylinder(Vector3D.ZERO, Vector3D.PLUS_K, 0.015, Side.INSIDE)).law(new PureRolling()).noGravity().build(),
             "does not fit", "cylinder", "0.016");
         rejects(() -> Simulation.builder().ball(Ball.solid(0.015, 0.002))
-            .surface(new Cylinder(Vector3D.ZERO, Vector3D.PLUS_K, 0.015, Side.INSIDE)).law(new PureRolling()).build(),
+            .surface(new Cylinder(Vector3D.ZERO, Vector3D.PLUS_K, 0.015, Side.INSIDE)).law(new PureRolling()).noGravity().build(),
             "does not fit");
     }
 

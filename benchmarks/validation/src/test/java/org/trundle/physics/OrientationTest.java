@@ -23,7 +23,7 @@ class OrientationTest {
     @Test
     void freeSpinTurnsRightHanded() {
         Simulation sim = Simulation.builder().ball(Ball.solid(0.01, 0.01))
-            .surface(new Plane(new Vector3D(0, 0, -1), Vector3D.PLUS_K)).law(new PureRolling()).build();
+            .surface(new Plane(new Vector3D(0, 0, -1), Vector3D.PLUS_K)).law(new PureRolling()).noGravity().build();
         Vector3D axis = new Vector3D(1, 2, 2).normalize();
         double w = 3.0;
         double t = 0.4;

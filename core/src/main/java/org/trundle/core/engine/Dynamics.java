@@ -125,6 +125,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final double[] q = new double[4];
     private final double[] fApp = new double[3];
     private final double[] tApp = new double[3];
+    /** What an applied load reads and writes: views of the workspaces above, refilled by time only. */
+    private final LoadView loadView = new LoadView(c, vel, q, w);
+    private final LoadWrench loadOut = new LoadWrench(fApp, tApp);
     private final double[] hv = new double[3];
     private final double[] tmp = new double[3];
     private final double[] force = new double[3];
@@ -585,7 +588,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double vy = vel[1];
         double vz = vel[2];
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         double fax = fApp[0];
         double fay = fApp[1];
@@ -734,7 +737,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         vel[2] = vz;
         relativeSpeed = Math.sqrt(vrx * vrx + vry * vry + vrz * vrz) + r * Math.sqrt(rx * rx + ry * ry + rz * rz);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         double fax = fApp[0];
         double fay = fApp[1];
@@ -857,7 +860,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         ContactKinematics.slip(r, relVel, 0, relSpin, 0, n, slip);
         relativeSpeed = norm(relVel) + r * norm(relSpin);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         // ndot = Omega x n + H v_rel
         mulSym(geo.hessian, relVel, hv);
@@ -896,7 +899,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         System.arraycopy(y, V, vel, 0, 3);
         ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         mulSym(geo.hessian, vel, hv);
         double vHv = dot(vel, hv);
@@ -949,11 +952,17 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         return ct;
     }
 
+    /** Calls the applied load on the workspaces ({@code c}, {@code vel}, {@code q}, {@code w} filled; forces zeroed). */
+    private void applyLoad(double t) {
+        loadView.at(t);
+        load.apply(loadView, loadOut);
+    }
+
     /** Flight: applied loads only (results in the fields). */
     private void flightForces(double t, double[] y) {
         System.arraycopy(y, V, vel, 0, 3);
         if (loaded) {
-            load.apply(t, c, vel, q, w, fApp, tApp);
+            applyLoad(t);
         }
         zero(force);
         zero(friction);
@@ -1041,7 +1050,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         zero(tApp);
         slot.query(t, c);
         double[] n = geo.normal;
-        load.apply(t, c, vel, q, w, fApp, tApp);
+        applyLoad(t);
         double[] f = tmp;
         for (int i = 0; i < 3; i++) {
             f[i] = -(m * g[i] + fApp[i]);

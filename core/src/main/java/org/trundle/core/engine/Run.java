@@ -21,6 +21,7 @@ import org.trundle.core.PhaseSpan;
 import org.trundle.core.RunEvent;
 import org.trundle.core.RunObserver;
 import org.trundle.core.Sample;
+import org.trundle.core.SampleContact;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.Surface;
 
@@ -300,8 +301,14 @@ final class Run {
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
             onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         }
+        java.util.List<SampleContact> touches = java.util.List.of();
+        if (touching) {
+            double[] n = dyn.geo.normal;
+            touches = java.util.List.of(new SampleContact(slot.id, p, dyn.normalForce, fr, cp,
+                new Vector3D(n[0], n[1], n[2])));
+        }
         observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent,
-            touching ? slot.contactIds : java.util.List.of()));
+            touching ? slot.contactIds : java.util.List.of(), touches));
     }
 
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse) {

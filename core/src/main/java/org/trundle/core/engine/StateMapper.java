@@ -80,9 +80,33 @@ public final class StateMapper {
      * @return the state
      */
     static BallState toState(double t, double[] y, Phase phase, double vx, double vy, double vz) {
-        Rotation q = new Rotation(y[Q], -y[Q + 1], -y[Q + 2], -y[Q + 3], true);
+        Rotation q = rotation(y, Q, true);
         return BallState.of(t, new Vector3D(y[C], y[C + 1], y[C + 2]), new Vector3D(vx, vy, vz), q,
             new Vector3D(y[W], y[W + 1], y[W + 2]), phase);
+    }
+
+    /**
+     * The body-to-world rotation of a quaternion held in this class's convention.
+     *
+     * @param a the array
+     * @param at index of the quaternion's scalar part
+     * @param normalise whether to divide by the norm (else the components are taken as they are)
+     * @return Hipparchus' rotation (the conjugate components)
+     */
+    static Rotation rotation(double[] a, int at, boolean normalise) {
+        return new Rotation(a[at], -a[at + 1], -a[at + 2], -a[at + 3], normalise);
+    }
+
+    /**
+     * The domain state of a full-layout array, its velocity read from the array.
+     *
+     * @param t time (s)
+     * @param y full-layout state
+     * @param phase phase
+     * @return the state
+     */
+    public static BallState toBallState(double t, double[] y, Phase phase) {
+        return toState(t, y, phase, y[V], y[V + 1], y[V + 2]);
     }
 
     private static void put(double[] a, int at, Vector3D v) {

@@ -74,7 +74,7 @@ class LayoutTest {
         SplittableRandom rnd = new SplittableRandom(7);
         Ball ball = Ball.solid(0.01, 0.02);
         Simulation sim = Simulation.builder().ball(ball).surface(new FloorForTests(1.0)).law(COUPLED)
-            .gravity(new Vector3D(0, 0, -9.81)).load((t, c, v, q, w, f, tau) -> f[0] = 1e-3 * v[0]).build();
+            .gravity(new Vector3D(0, 0, -9.81)).load((s, out) -> out.force(1e-3 * s.velocity(0), 0, 0)).build();
         Dynamics dyn = new Dynamics(ModelsForTests.model(sim), phase, 1e-9);
         double[] full = new double[StateMapper.DIM];
         for (int i = 0; i < full.length; i++) {
