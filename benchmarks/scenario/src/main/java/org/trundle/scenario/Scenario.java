@@ -113,7 +113,7 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         try {
             Simulation.Builder b = Simulation.builder().ball(ball).law(law).gravity(gravity).settings(set)
                 .compliance(compliance);
-            if (root.has("surfaces")) {
+            if (root.has("surfaces") || patches.size() > 1) {
                 patches.forEach(b::patch);
             } else {
                 b.surface(patches.get(0).surface()).motion(patches.get(0).motion());
@@ -271,6 +271,14 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         Section root = Section.root(document);
         if (root.has("surfaces")) {
             return sceneMaterials(root).map(m -> WallLoads.forScene(simulation, m.getKey(), m.getValue()));
+        }
+        if (simulation.patches().size() > 1) {
+            // a single surface of an assembly type: its parts share surface.material
+            return wallLoadMaterials(root).map(m -> {
+                Map<String, Material> walls = new java.util.LinkedHashMap<>();
+                simulation.patches().forEach(p -> walls.put(p.id(), m[1]));
+                return WallLoads.forScene(simulation, m[0], walls);
+            });
         }
         return wallLoadMaterials(root).map(m -> new WallLoads(PATCH_ID, simulation.surface(),
             simulation.ball().radius(), m[0], m[1]));

@@ -21,6 +21,11 @@ import org.trundle.core.SurfaceMotion;
  * digits, {@code _}, {@code -}, {@code .}), an optional {@code motion} and an optional {@code contact}
  * (the patch's own law, {@link ContactFactory}; default the scenario's {@code contact}).
  *
+ * <p>A section whose {@code type} is an assembly ({@code v_groove}, {@code rails}, {@code bearing_races};
+ * {@link AssemblyFactory}) gives several patches: for the single {@code surface} named by their parts
+ * ({@code left}/{@code right}, {@code inner}/{@code outer}), in a {@code surfaces} list {@code <id>.<part>}; its
+ * {@code contact}, {@code material} and {@code motion} apply to every part.
+ *
  * <p>An entry of {@code surfaces} may give its wall's {@code material} ({@code {"youngs_modulus": Pa,
  * "poisson_ratio": ν}}): with {@code ball.material} the run reports that patch's wall loads, and the patch's
  * own {@code contact.spin_creep} uses the pair.
@@ -40,11 +45,11 @@ final class SceneFactory {
      * @return the patches, with their own laws where they give one (null: the scenario's)
      */
     static List<Patch> patches(Section root, Optional<Material[]> materials) {
+        List<Patch> out = new ArrayList<>();
         if (root.has("surfaces")) {
             if (root.has("surface")) {
                 throw new ScenarioException("give either surface (one patch) or surfaces (a list of patches), not both");
             }
-            List<Patch> out = new ArrayList<>();
             Set<String> ids = new HashSet<>();
             for (Section s : root.sectionList("surfaces")) {
                 String id = s.text("id", null);
@@ -55,14 +60,17 @@ final class SceneFactory {
                     throw new ScenarioException(s.where("id") + " must be 1 to 64 letters, digits, '_', '-' or '.', got \""
                         + Texts.clip(id) + "\"");
                 }
-                if (!ids.add(id)) {
-                    throw new ScenarioException(s.where("id") + " = \"" + id + "\" is used twice; ids must be unique");
+                for (String pid : ids(id, s)) {
+                    if (!ids.add(pid)) {
+                        throw new ScenarioException(s.where("id") + " = \"" + id + "\" gives the patch id \"" + pid
+                            + "\" a second time; ids must be unique");
+                    }
                 }
                 Optional<Material[]> own = s.has("material") && root.section("ball").has("material")
                     ? Optional.of(new Material[] {Scenario.material(root.section("ball").section("material")),
                         Scenario.material(s.section("material"))})
                     : Optional.empty();
-                out.add(patch(id, s.without("material"), own));
+                add(out, id, s.without("material"), own, root);
             }
             return out;
         }
@@ -71,7 +79,44 @@ final class SceneFactory {
             throw new ScenarioException(s.where("contact") + ": the one surface uses the scenario's contact section;"
                 + " a contact per patch is for the entries of surfaces");
         }
-        return List.of(patch(Scenario.PATCH_ID, s, materials));
+        add(out, null, s, materials, root);
+        return out;
+    }
+
+    /**
+     * The patch ids a surface section gives: its own id (or {@link Scenario#PATCH_ID} for the single
+     * {@code surface}), or for an assembly type ({@link AssemblyFactory}) one per part: the part's name, prefixed
+     * by {@code id.} in a {@code surfaces} list.
+     */
+    private static List<String> ids(String id, Section s) {
+        if (!AssemblyFactory.isAssembly(s)) {
+            return List.of(id == null ? Scenario.PATCH_ID : id);
+        }
+        List<String> out = new ArrayList<>();
+        for (String part : AssemblyFactory.partNames(s)) {
+            String pid = id == null ? part : id + "." + part;
+            if (pid.length() > 64) {
+                throw new ScenarioException(s.where("id") + " = \"" + Texts.clip(id) + "\" is too long for the patch id \""
+                    + Texts.clip(pid) + "\" of its part " + part + " (at most 64 characters)");
+            }
+            out.add(pid);
+        }
+        return out;
+    }
+
+    /** Adds the patch, or the patches of an assembly type, of one surface section. */
+    private static void add(List<Patch> out, String id, Section s, Optional<Material[]> materials, Section root) {
+        if (!AssemblyFactory.isAssembly(s)) {
+            out.add(patch(id == null ? Scenario.PATCH_ID : id, s, materials));
+            return;
+        }
+        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact"), materials) : null;
+        double ballRadius = root.section("ball").positive("radius", "m");
+        List<String> pids = ids(id, s);
+        List<AssemblyFactory.Part> parts = AssemblyFactory.expand(s.without("id").without("contact"), ballRadius);
+        for (int i = 0; i < parts.size(); i++) {
+            out.add(new Patch(pids.get(i), parts.get(i).surface(), parts.get(i).motion(), law));
+        }
     }
 
     /**
@@ -86,7 +131,10 @@ final class SceneFactory {
         if (root.has("surfaces")) {
             for (Section s : root.sectionList("surfaces")) {
                 if (s.has("material")) {
-                    out.put(s.text("id", ""), Scenario.material(s.section("material")));
+                    Material m = Scenario.material(s.section("material"));
+                    for (String pid : ids(s.text("id", ""), s)) {
+                        out.put(pid, m);
+                    }
                 }
             }
         }

@@ -1,6 +1,8 @@
 package org.trundle.scenario;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -67,7 +69,9 @@ final class SurfaceFactory {
      * @return the surface
      */
     static Surface create(Section s) {
-        String type = s.choice("type", TYPES.keySet());
+        List<String> all = new ArrayList<>(TYPES.keySet());
+        all.addAll(AssemblyFactory.TYPES.keySet());
+        String type = s.choice("type", all);
         try {
             return TYPES.get(type).make(s);
         } catch (IllegalArgumentException e) {

@@ -151,22 +151,46 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
      * @param root the scenario's root
      * @return the outcome names, in that order
      */
+    /**
+     * The names of a surface's edges: indices 0 up until a name repeats or the surface refuses the index, and for
+     * a {@link org.trundle.surfaces.Bounded} surface its own bounds (indices from
+     * {@link org.trundle.surfaces.Bounded#FIRST_EDGE}) after the inner surface's.
+     *
+     * @param surface a surface
+     * @return the edge names, none for a surface without edges
+     */
+    static List<String> edgeNames(org.trundle.core.Surface surface) {
+        List<String> out = new ArrayList<>();
+        if (surface instanceof org.trundle.surfaces.Bounded b) {
+            out.addAll(edgeNames(b.inner()));
+            addEdges(surface, org.trundle.surfaces.Bounded.FIRST_EDGE, out);
+        } else if (surface.hasEdges()) {
+            addEdges(surface, 0, out);
+        }
+        return out;
+    }
+
+    private static void addEdges(org.trundle.core.Surface surface, int first, List<String> out) {
+        for (int i = 0; i < 16; i++) {
+            String o;
+            try {
+                o = surface.edgeName(first + i);
+            } catch (RuntimeException pastTheLastEdge) {
+                break; // a surface may refuse an index past its last edge
+            }
+            if (out.contains(o) || o.equals("edge" + (first + i))) {
+                break; // or repeat the last edge's name, or give the generic name
+            }
+            out.add(o);
+        }
+    }
+
     static List<String> outcomes(Section root) {
         List<String> out = new ArrayList<>();
         for (org.trundle.core.Patch p : SceneFactory.patches(root, java.util.Optional.empty())) {
-            org.trundle.core.Surface surface = p.surface();
-            if (surface.hasEdges()) {
-                for (int i = 0; i < 16; i++) {
-                    String o;
-                    try {
-                        o = "exit_" + surface.edgeName(i);
-                    } catch (RuntimeException pastTheLastEdge) {
-                        break; // a surface may refuse an index past its last edge
-                    }
-                    if (out.contains(o)) {
-                        break; // or repeat the last edge's name
-                    }
-                    out.add(o);
+            for (String e : edgeNames(p.surface())) {
+                if (!out.contains("exit_" + e)) {
+                    out.add("exit_" + e);
                 }
             }
         }
