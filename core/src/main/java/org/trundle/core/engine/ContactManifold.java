@@ -14,7 +14,9 @@ package org.trundle.core.engine;
  * Both constraints are invariants of the exact flow ({@code ċ = r ω × n} keeps {@code d} constant; the
  * quaternion equation is skew). The time-reversing map of both phases, {@code ω ↦ −ω} (and
  * {@code v ↦ −v} in flight), leaves the constraints and their gradients alone, as the symmetric
- * projection's reversibility needs. Internal to the solver.
+ * projection's reversibility needs. The distance constraint is the active slot's, the one contact the
+ * right-hand side evaluates; when several simultaneous contacts reach {@link Dynamics}, each touching slot
+ * adds its own {@code d_i(c) − r} row here. Internal to the solver.
  */
 final class ContactManifold implements ConstraintManifold {
     private final Run run;
