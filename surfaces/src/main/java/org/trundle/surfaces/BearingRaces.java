@@ -9,13 +9,17 @@ import org.trundle.core.Surface;
 /**
  * The inner and outer raceways of a radial (deep-groove) ball bearing, from the usual dimensions: pitch
  * diameter {@code d_m}, ball diameter {@code D}, inner and outer groove conformities {@code f_i, f_o}
- * (groove radius over ball diameter, {@code > 1/2}), zero clearance and zero contact angle.
+ * (groove radius over ball diameter, {@code > 1/2}), diametral clearance {@code P_d} (default zero) and zero
+ * contact angle.
  *
  * <p>Geometry (common practice for a deep-groove bearing): each groove is a torus about the bearing axis
- * with the ball inside its tube. The inner groove's curvature centres lie on the circle of radius
- * {@code R_i = d_m/2 − D/2 + f_i D}, tube radius {@code f_i D}; the outer groove's on
- * {@code R_o = d_m/2 + D/2 − f_o D}, tube radius {@code f_o D}. A ball whose centre lies on the pitch
- * circle touches the inner groove bottom at radius {@code (d_m − D)/2} and the outer at {@code (d_m + D)/2}.
+ * with the ball inside its tube. The inner groove bottom lies at radius {@code (d_m − D)/2 − P_d/4}, the outer at
+ * {@code (d_m + D)/2 + P_d/4}, so that the outer groove's bottom diameter less the inner's less two ball diameters
+ * is {@code P_d} (the diametral clearance) and a ball on the pitch circle has {@code P_d/4} of play toward each
+ * race ({@code P_d/2} in all). The inner groove's curvature centres lie on the circle of radius
+ * {@code R_i = (d_m − D)/2 − P_d/4 + f_i D}, tube radius {@code f_i D}; the outer groove's on
+ * {@code R_o = (d_m + D)/2 + P_d/4 − f_o D}, tube radius {@code f_o D}. With zero clearance a ball whose centre lies
+ * on the pitch circle touches both groove bottoms.
  * The tori are not bounded in tube angle (the shoulders are left to the scene); either ring may be given a
  * rotation about the axis as a patch motion.
  *
@@ -26,10 +30,13 @@ public final class BearingRaces {
     private final Vector3D axis;
     private final double pitchDiameter;
     private final double ballDiameter;
+    private final double clearance;
     private final Torus inner;
     private final Torus outer;
 
     /**
+     * Races with zero clearance.
+     *
      * @param centre bearing centre (m)
      * @param axis bearing axis (any length, not zero)
      * @param pitchDiameter pitch diameter d_m (m), larger than the ball diameter
@@ -39,6 +46,20 @@ public final class BearingRaces {
      */
     public BearingRaces(Vector3D centre, Vector3D axis, double pitchDiameter, double ballDiameter,
                         double innerConformity, double outerConformity) {
+        this(centre, axis, pitchDiameter, ballDiameter, innerConformity, outerConformity, 0.0);
+    }
+
+    /**
+     * @param centre bearing centre (m)
+     * @param axis bearing axis (any length, not zero)
+     * @param pitchDiameter pitch diameter d_m (m), larger than the ball diameter
+     * @param ballDiameter ball diameter D (m), positive
+     * @param innerConformity inner groove radius over ball diameter f_i, in (1/2, 1)
+     * @param outerConformity outer groove radius over ball diameter f_o, in (1/2, 1)
+     * @param clearance diametral clearance P_d (m), ≥ 0 and below the ball diameter
+     */
+    public BearingRaces(Vector3D centre, Vector3D axis, double pitchDiameter, double ballDiameter,
+                        double innerConformity, double outerConformity, double clearance) {
         this.centre = Checks.finite("centre", centre);
         this.axis = Checks.direction("axis", axis);
         this.ballDiameter = Checks.positive("ball diameter", ballDiameter);
@@ -46,13 +67,24 @@ public final class BearingRaces {
             throw new IllegalArgumentException("bearing pitch diameter must exceed twice the ball diameter "
                 + ballDiameter + " m (the inner ring needs a bore), got " + pitchDiameter);
         }
+        if (!(clearance >= 0 && clearance < ballDiameter)) {
+            throw new IllegalArgumentException("bearing diametral clearance must lie in [0, ball diameter "
+                + ballDiameter + " m), got " + clearance);
+        }
         this.pitchDiameter = pitchDiameter;
+        this.clearance = clearance;
         conformity("inner conformity", innerConformity);
         conformity("outer conformity", outerConformity);
         double fi = innerConformity * ballDiameter;
         double fo = outerConformity * ballDiameter;
-        this.inner = new Torus(centre, axis, pitchDiameter / 2 - ballDiameter / 2 + fi, fi, Side.INSIDE);
-        this.outer = new Torus(centre, axis, pitchDiameter / 2 + ballDiameter / 2 - fo, fo, Side.INSIDE);
+        double q = clearance / 4;
+        this.inner = new Torus(centre, axis, pitchDiameter / 2 - ballDiameter / 2 - q + fi, fi, Side.INSIDE);
+        this.outer = new Torus(centre, axis, pitchDiameter / 2 + ballDiameter / 2 + q - fo, fo, Side.INSIDE);
+    }
+
+    /** @return the diametral clearance P_d (m) */
+    public double clearance() {
+        return clearance;
     }
 
     private static void conformity(String name, double f) {

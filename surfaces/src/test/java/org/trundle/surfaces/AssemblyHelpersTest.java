@@ -55,6 +55,30 @@ class AssemblyHelpersTest {
         assertEquals(0.5 * 100 * (1 - dBall / dm), b.cageSpeed(100, 0), 1e-12);
     }
 
+    /**
+     * Diametral clearance P_d (common practice: outer groove bottom diameter − inner groove bottom diameter − 2 D):
+     * the groove bottoms move to (d_m − D)/2 − P_d/4 and (d_m + D)/2 + P_d/4, and a ball on the pitch circle has
+     * P_d/4 of play toward each race.
+     */
+    @Test
+    void clearanceOpensTheGrooveBottomsSymmetricallyAboutThePitchCircle() {
+        double dm = 0.04;
+        double dBall = 2 * R;
+        double pd = 2e-5;
+        BearingRaces b = new BearingRaces(Vector3D.ZERO, Vector3D.PLUS_K, dm, dBall, 0.52, 0.53, pd);
+        Vector3D c = b.ballCentre(Vector3D.PLUS_I);
+        ContactGeometry gi = query(b.innerRace(), c);
+        ContactGeometry go = query(b.outerRace(), c);
+        assertEquals(R + pd / 4, gi.distance, 1e-15);
+        assertEquals(R + pd / 4, go.distance, 1e-15);
+        double outerBottom = Math.hypot(go.point[0], go.point[1]);
+        double innerBottom = Math.hypot(gi.point[0], gi.point[1]);
+        assertEquals(pd, 2 * outerBottom - 2 * innerBottom - 2 * dBall, 1e-15);
+        assertEquals(pd, b.clearance(), 0.0);
+        assertThrows(IllegalArgumentException.class,
+            () -> new BearingRaces(Vector3D.ZERO, Vector3D.PLUS_K, dm, dBall, 0.52, 0.53, -1e-6));
+    }
+
     /** Both surfaces at distance r, and the chord through the two contact points at distance r_e from the centre. */
     private static void assertTouchesBoth(Surface s1, Surface s2, Vector3D c, Vector3D axis, double re) {
         ContactGeometry g1 = query(s1, c);

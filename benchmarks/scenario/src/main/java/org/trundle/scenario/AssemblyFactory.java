@@ -31,10 +31,11 @@ import org.trundle.surfaces.VGroove;
  *       {@code origin} (midway between the axes at the start, default [0, 0, 0]), {@code slope_deg} or
  *       {@code axis} and {@code up} (the side the ball rides on) as for the groove, optional {@code length}.
  *       Parts {@code left}, {@code right}. The ball must not fall through: {@code spacing < 2 (r + rail_radius)}.</li>
- *   <li>{@code bearing_races} ({@link BearingRaces}; zero clearance, zero contact angle, for the scenario's
- *       ball): {@code axis}, {@code pitch_diameter} (m, more than twice the ball's diameter), optional
+ *   <li>{@code bearing_races} ({@link BearingRaces}; zero contact angle, for the scenario's ball):
+ *       {@code axis}, {@code pitch_diameter} (m, more than twice the ball's diameter), optional
  *       {@code center} (default [0, 0, 0]), {@code inner_conformity}, {@code outer_conformity} (groove radius
  *       over ball diameter, in (0.5, 1), default 0.52 and 0.53, common practice for deep-groove bearings),
+ *       {@code clearance} (diametral clearance P_d, m, default 0: the ball has P_d/4 of play toward each race),
  *       {@code inner_rate}, {@code outer_rate} (rad/s, each race turning right-handed about the axis, default 0).
  *       Parts {@code inner}, {@code outer}. Its motions come from the rates: a {@code motion} key is refused.</li>
  * </ul>
@@ -161,8 +162,8 @@ final class AssemblyFactory {
             throw new ScenarioException(s.where("motion") + ": a bearing's races turn by inner_rate and outer_rate"
                 + " (rad/s about its axis); leave out motion");
         }
-        s.allow("type", "axis", "pitch_diameter", "center", "inner_conformity", "outer_conformity", "inner_rate",
-            "outer_rate");
+        s.allow("type", "axis", "pitch_diameter", "center", "inner_conformity", "outer_conformity", "clearance",
+            "inner_rate", "outer_rate");
         Vector3D axis = s.direction("axis");
         double pitch = s.positive("pitch_diameter", "m");
         if (!(pitch > 4 * ballRadius)) {
@@ -174,7 +175,12 @@ final class AssemblyFactory {
         double fo = conformity(s, "outer_conformity", DEFAULT_OUTER_CONFORMITY);
         double wi = s.optionalNumber("inner_rate", "rad/s").orElse(0.0);
         double wo = s.optionalNumber("outer_rate", "rad/s").orElse(0.0);
-        BearingRaces races = new BearingRaces(centre, axis, pitch, 2 * ballRadius, fi, fo);
+        double clearance = s.nonNegative("clearance", "m", 0.0);
+        if (!(clearance < 2 * ballRadius)) {
+            throw new ScenarioException(s.where("clearance") + " must be below the ball's diameter " + 2 * ballRadius
+                + " m, got " + clearance);
+        }
+        BearingRaces races = new BearingRaces(centre, axis, pitch, 2 * ballRadius, fi, fo, clearance);
         return List.of(new Part("inner", races.innerRace(), turning(axis, centre, wi)),
             new Part("outer", races.outerRace(), turning(axis, centre, wo)));
     }

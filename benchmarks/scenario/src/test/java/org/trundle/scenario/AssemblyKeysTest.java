@@ -107,6 +107,17 @@ class AssemblyKeysTest {
     }
 
     @Test
+    void bearingClearanceGivesTheBallPlayTowardEachRace() {
+        Scenario s = scenario("\"surface\": {\"type\": \"bearing_races\", \"axis\": [1, 0, 0], \"pitch_diameter\": 0.03,"
+            + " \"clearance\": 2e-5}", "0, 0, 0.015");
+        List<Patch> patches = s.simulation().patches();
+        assertEquals(0.004, distance(patches.get(0), new Vector3D(0, 0, 0.015 - 5e-6)), 1e-12, "touching the inner race");
+        assertEquals(0.004, distance(patches.get(1), new Vector3D(0, 0, 0.015 + 5e-6)), 1e-12, "touching the outer race");
+        assertRefused("\"type\": \"bearing_races\", \"axis\": [1, 0, 0], \"pitch_diameter\": 0.03, \"clearance\": 0.01",
+            "surface.clearance must be below the ball's diameter 0.008 m, got 0.01");
+    }
+
+    @Test
     void anEntryOfSurfacesPrefixesItsPartsAndSharesItsMaterial() {
         String json = "{\n\"ball\": {\"radius\": 0.004, \"mass\": 0.0021,"
             + " \"material\": {\"youngs_modulus\": 210e9, \"poisson_ratio\": 0.3}},\n"
