@@ -1,7 +1,6 @@
 package org.trundle.contact;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
-import org.hipparchus.special.elliptic.carlson.CarlsonEllipticIntegral;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Material;
@@ -37,7 +36,8 @@ import org.trundle.core.Material;
  * no cancellation near the circle ({@code e → 0}); the circular limit {@code β = 1} gives exactly
  * {@code a³ = 3PR/(4E*)}, {@code δ = a²/R} with {@code 1/R = 2A}. {@code β} is found by a bracketing
  * root find on {@code ln β} (the Illinois false-position method, allocation-free); the integrals
- * are Hipparchus' {@link CarlsonEllipticIntegral} (no curve fits). Elongations beyond
+ * are Carlson's duplication algorithm ({@code CarlsonIntegrals}, the method of Hipparchus'
+ * {@code CarlsonEllipticIntegral} written out without allocation and checked against it; no curve fits). Elongations beyond
  * {@code b/a = 1e-12} are rejected.
  *
  * <p>All methods are static and thread-safe; {@link #meanRadius} allocates nothing (no solver object per
@@ -115,7 +115,7 @@ public final class HertzContact {
         double unitA = unitSemiMajor(Math.min(rho1, rho2), beta, eStar);
         double unitB = beta * unitA;
         double unitP0 = 3.0 / (2 * Math.PI * unitA * unitB);
-        double unitDelta = unitP0 / eStar * unitB * CarlsonEllipticIntegral.rF(0.0, beta * beta, 1.0);
+        double unitDelta = unitP0 / eStar * unitB * CarlsonIntegrals.rF(0.0, beta * beta, 1.0);
         double s = Math.cbrt(load);
         double a = unitA * s;
         double b = unitB * s;
@@ -246,7 +246,7 @@ public final class HertzContact {
     /** {@code ln(B/A)} as a function of {@code u = ln β}. */
     private static double logRatioOfAxes(double u) {
         double m1 = Math.exp(2 * u);
-        return Math.log(CarlsonEllipticIntegral.rD(0.0, 1.0, m1) / CarlsonEllipticIntegral.rD(0.0, m1, 1.0));
+        return Math.log(CarlsonIntegrals.rD(0.0, 1.0, m1) / CarlsonIntegrals.rD(0.0, m1, 1.0));
     }
 
     /**
@@ -254,7 +254,7 @@ public final class HertzContact {
      * ({@code A = ρ_min/2}); b = β a.
      */
     private static double unitSemiMajor(double rhoMin, double beta, double eStar) {
-        return Math.cbrt(CarlsonEllipticIntegral.rD(0.0, beta * beta, 1.0) / (2 * Math.PI * eStar * 0.5 * rhoMin));
+        return Math.cbrt(CarlsonIntegrals.rD(0.0, beta * beta, 1.0) / (2 * Math.PI * eStar * 0.5 * rhoMin));
     }
 
     private static double relativeCurvature(double ballRadius, double curvature, String name) {
