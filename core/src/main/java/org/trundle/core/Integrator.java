@@ -18,7 +18,7 @@ package org.trundle.core;
  *       The method is reversible, so on a conservative rolling run (a pure-rolling law, no applied
  *       load, no moving patch) the energy error stays bounded instead of growing. Phase switches are
  *       still events: located on the step's cubic Hermite extension, after which the run goes on as
- *       usual. Sliding, compliant contacts and moving patches keep Dormand–Prince; with dissipative
+ *       usual. Sliding, compliant contacts, moving patches and several simultaneous contacts keep Dormand–Prince; with dissipative
  *       laws the option still runs, but the bound is about conservative motion. The step must resolve
  *       the fastest motion (a few dozen steps per period at order 4); the settings' tolerance still
  *       sets the event thresholds and the absolute scales, not the step.</li>

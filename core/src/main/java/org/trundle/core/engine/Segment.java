@@ -136,11 +136,13 @@ final class Segment {
     /**
      * Whether a segment in {@code phase} runs on the {@link SymmetricProjectionIntegrator}: when the
      * settings ask for it and the phase is rolling or flight on a patch that stands still with a rigid
-     * contact (the reversible phases; sliding, compliant contacts and moving patches keep Dormand–Prince).
+     * contact, touching one patch (the reversible phases; sliding, compliant contacts, moving patches and
+     * several simultaneous contacts, whose layout and constraints {@link ContactManifold} does not cover,
+     * keep Dormand–Prince).
      */
     private boolean symmetricApplies(Phase phase) {
         return run.fixedStep > 0 && (phase == Phase.ROLLING || phase == Phase.FLIGHT) && run.compliance == null
-            && !run.slot.moving;
+            && !run.slot.moving && !run.contacts.multi();
     }
 
     /**
