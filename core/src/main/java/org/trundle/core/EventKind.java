@@ -28,7 +28,12 @@ public enum EventKind {
      */
     PIVOT_STICK,
     /** The couple needed to hold the spin about the normal at zero exceeded the pivoting couple. */
-    PIVOT_RELEASE;
+    PIVOT_RELEASE,
+    /**
+     * The ball, touching one patch, reached another with a normal speed at most the settle speed: a further
+     * contact began without a bounce (several contacts at once; a faster arrival is an {@link #IMPACT}).
+     */
+    TOUCH;
 
     /** @return the lower-case name used in files ({@code lift_off}) */
     public String label() {

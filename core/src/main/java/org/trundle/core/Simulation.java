@@ -261,7 +261,9 @@ public final class Simulation {
     }
 
     /**
-     * A consistent rolling start at time 0 with a given spin about the normal. On a moving surface
+     * A consistent rolling start at time 0 with a given spin about the normal. A centre touching several
+     * patches that stand still (a ball in a V-groove, on two rails) gets the spin that rolls without slip at
+     * every contact and {@code normalSpin} is not used (the contacts fix the spin). On a moving surface
      * the spin rolls relative to the surface under the ball: {@code ω = Ω + (n × (v − u(c)))/r + ω_n n},
      * so that the contact point moves with the surface, {@code v − r ω × n = u(p)}, with {@code Ω} the
      * surface's spin and {@code u} its velocity field at time 0.
@@ -293,6 +295,10 @@ public final class Simulation {
             throw new IllegalArgumentException("centre " + centre + " has no contact normal: " + failure.getMessage(),
                 failure);
         }
+        java.util.List<Vector3D> normals = touchedNormals(centre);
+        if (normals.size() > 1) {
+            return severalContactsStart(centre, velocity, normals);
+        }
         SurfaceMotion motion = touched.motion();
         Vector3D n = new Vector3D(g.normal[0], g.normal[1], g.normal[2]);
         Vector3D relative = velocity;
@@ -309,6 +315,61 @@ public final class Simulation {
             .add(normalSpin, n).add(surfaceSpin);
         return BallState.of(0.0, centre, velocity, org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY,
             spin, Phase.ROLLING);
+    }
+
+    /**
+     * The normals of every patch that stands still and touches a ball centred at {@code centre} (distance r
+     * within the contact tolerance, contact point on the patch), scene order.
+     */
+    private java.util.List<Vector3D> touchedNormals(Vector3D centre) {
+        java.util.List<Vector3D> out = new java.util.ArrayList<>();
+        if (patches.size() < 2) {
+            return out;
+        }
+        double tol = settings.contactTolerance() * ball.radius();
+        for (Patch p : patches) {
+            if (!p.motion().stationary()) {
+                continue;
+            }
+            try {
+                ContactGeometry gp = geometryAt(p, centre, 0.0);
+                if (Math.abs(gp.distance - ball.radius()) <= tol && gp.patchMargin >= 0) {
+                    out.add(new Vector3D(gp.normal[0], gp.normal[1], gp.normal[2]));
+                }
+            } catch (SurfaceDomainException e) {
+                // no closest point here: not touched
+            }
+        }
+        return out;
+    }
+
+    /**
+     * A rolling start touching several patches at once: the spin that rolls without slip at every contact,
+     * {@code v = r ω × n_i} for each normal, in the least-squares sense: {@code Σ (1 − n_i n_iᵀ) ω = Σ n_i × v / r}
+     * (the normal equations of {@code min Σ |r ω × n_i − v|²}; exact when the velocity is along the line the
+     * ball can roll, e.g. along a groove or the rails; the spin about that line's perpendicular is then fixed
+     * by the contacts, so no spin about a normal can be given).
+     */
+    private BallState severalContactsStart(Vector3D centre, Vector3D velocity, java.util.List<Vector3D> normals) {
+        double r = ball.radius();
+        double[][] a = new double[3][3];
+        double[] b = new double[3];
+        for (Vector3D n : normals) {
+            double[] nn = n.toArray();
+            for (int i = 0; i < 3; i++) {
+                for (int j = 0; j < 3; j++) {
+                    a[i][j] += (i == j ? 1 : 0) - nn[i] * nn[j];
+                }
+            }
+            Vector3D rhs = Vector3D.crossProduct(n, velocity).scalarMultiply(1.0 / r);
+            b[0] += rhs.getX();
+            b[1] += rhs.getY();
+            b[2] += rhs.getZ();
+        }
+        double[] w = new org.hipparchus.linear.LUDecomposition(new org.hipparchus.linear.Array2DRowRealMatrix(a))
+            .getSolver().solve(new org.hipparchus.linear.ArrayRealVector(b)).toArray();
+        return BallState.of(0.0, centre, velocity, org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY,
+            new Vector3D(w), Phase.ROLLING);
     }
 
     /**

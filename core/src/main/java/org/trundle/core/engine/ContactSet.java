@@ -7,17 +7,32 @@ import org.trundle.core.Phase;
  * of the slots: flight when no slot touches, sliding when a touching slot slides, rolling
  * otherwise; rest is the end state of a touching ball.
  *
- * <p>A scene has one slot per patch; the ball touches one at a time (the active slot), and a
- * hand-over or an impact activates another. Several simultaneous contacts (issue 12) let more than
- * one slot touch at once: their modes already enter the summary.
+ * <p>The ball touches at most {@value ContactForceSolver#MAX_CONTACTS} patches at once. The first one
+ * touched is the active slot (position 0; a hand-over or an impact from flight activates another); the
+ * others touching at the same time follow it in the order they were touched (positions 1 and 2). With one
+ * contact the engine keeps the closed form of design notes §3; with several ({@link #multi()}) the contact
+ * forces come from {@link ContactForceSolver}.
  */
 final class ContactSet {
     private final ContactSlot[] slots;
     /** The slot in touch, or the last one touched (the right-hand side evaluates it). */
     private ContactSlot active;
+    /** Slots touching besides the active one, in the order touched. */
+    private final ContactSlot[] extra = new ContactSlot[ContactForceSolver.MAX_CONTACTS - 1];
+    private int extraCount;
     private boolean rest;
     /** The summary, recomputed whenever a mode changes (read on the hot path). */
     private Phase summary = Phase.FLIGHT;
+    /**
+     * Bumped whenever the touching slots or their modes change, so that a snapshot of a state taken before
+     * a switch (same time and state, other contacts) is not reused after it ({@link Snapshots}).
+     */
+    private long generation;
+
+    /** @return the generation of the contacts (changes with every change of the touching slots or modes) */
+    long generation() {
+        return generation;
+    }
 
     ContactSet(ContactSlot... slots) {
         this.slots = slots.clone();
@@ -31,7 +46,7 @@ final class ContactSet {
 
     /**
      * Makes another slot the active one, carrying the mode over (a hand-over, or the patch an
-     * impact or a start touches).
+     * impact or a start touches). Only with one contact.
      *
      * @param s the slot
      */
@@ -43,7 +58,100 @@ final class ContactSet {
             active.pivotHeld = false;
             active = s;
             summary = summarise();
+            generation++;
         }
+    }
+
+    /** @return whether the ball touches more than one patch now */
+    boolean multi() {
+        return extraCount > 0;
+    }
+
+    /** @return the number of patches touched now (0 in flight) */
+    int count() {
+        return active.mode == Mode.APART ? 0 : 1 + extraCount;
+    }
+
+    /**
+     * @param k position, 0 for the active slot
+     * @return the slot touched at position k
+     */
+    ContactSlot at(int k) {
+        return k == 0 ? active : extra[k - 1];
+    }
+
+    /**
+     * @param s a slot
+     * @return its position among the touching slots, or −1 when it does not touch
+     */
+    int positionOf(ContactSlot s) {
+        if (s.mode == Mode.APART) {
+            return -1;
+        }
+        if (s == active) {
+            return 0;
+        }
+        for (int k = 0; k < extraCount; k++) {
+            if (extra[k] == s) {
+                return k + 1;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * Adds a contact while the ball already touches (a second or third patch reached).
+     *
+     * @param s the slot, not touching
+     * @param mode its mode (rolling or sliding)
+     */
+    void add(ContactSlot s, Mode mode) {
+        if (extraCount == extra.length) {
+            throw new IllegalStateException("at most " + ContactForceSolver.MAX_CONTACTS + " contacts at once");
+        }
+        extra[extraCount++] = s;
+        s.mode = mode;
+        // the exact pivoting stick is a single-contact sub-mode
+        active.pivotHeld = false;
+        summary = summarise();
+        generation++;
+    }
+
+    /**
+     * Ends one contact of several (a release, an exit); when it is the active one, the next touching
+     * slot becomes active.
+     *
+     * @param s a touching slot
+     */
+    void remove(ContactSlot s) {
+        if (s == active) {
+            if (extraCount == 0) {
+                setPhase(Phase.FLIGHT);
+                return;
+            }
+            active = extra[0];
+            System.arraycopy(extra, 1, extra, 0, extraCount - 1);
+        } else {
+            int k = positionOf(s) - 1;
+            System.arraycopy(extra, k + 1, extra, k, extraCount - 1 - k);
+        }
+        extra[--extraCount] = null;
+        s.mode = Mode.APART;
+        s.pivotHeld = false;
+        summary = summarise();
+        generation++;
+    }
+
+    /**
+     * Sets one touching slot's mode.
+     *
+     * @param s the slot
+     * @param mode rolling or sliding
+     */
+    void setMode(ContactSlot s, Mode mode) {
+        s.mode = mode;
+        summary = summarise();
+        generation++;
     }
 
     /** @return the number of slots */
@@ -81,17 +189,36 @@ final class ContactSet {
     }
 
     /**
-     * Sets the active slot's mode from a global phase (the single-contact engine).
+     * Sets the active slot's mode from a global phase (the single-contact engine); flight ends every
+     * contact, rest keeps the modes; with several contacts a contact phase changes no mode (their modes are
+     * set one by one, {@link #setMode}).
      *
      * @param p the phase
      */
     void setPhase(Phase p) {
+        if (extraCount > 0 && p.inContact()) {
+            // several contacts keep their own modes; the global phase is their summary
+            rest = false;
+            summary = summarise();
+            generation++;
+            return;
+        }
         rest = p == Phase.REST;
-        active.mode = p == Phase.SLIDING ? Mode.SLIDING : p == Phase.FLIGHT ? Mode.APART : Mode.ROLLING;
+        if (p == Phase.FLIGHT) {
+            for (int k = 0; k < extraCount; k++) {
+                extra[k].mode = Mode.APART;
+                extra[k] = null;
+            }
+            extraCount = 0;
+        }
+        if (!rest || extraCount == 0) {
+            active.mode = p == Phase.SLIDING ? Mode.SLIDING : p == Phase.FLIGHT ? Mode.APART : Mode.ROLLING;
+        }
         if (p != Phase.ROLLING) {
             // the pivoting stick is a sub-mode of rolling
             active.pivotHeld = false;
         }
         summary = summarise();
+        generation++;
     }
 }

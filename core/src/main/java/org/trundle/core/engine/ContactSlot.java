@@ -54,6 +54,12 @@ final class ContactSlot {
     Mode mode = Mode.APART;
     /** Whether the law context holds the ball and this slot's geometry workspace. */
     boolean contextReady;
+    /**
+     * With several contacts: the unit slip direction held while this contact's slip is within the stick
+     * band (at the onset of sliding, against the friction rolling needed; afterwards the slip direction at
+     * the last accepted step end). The single contact keeps its own in {@link Dynamics#slideDir0}.
+     */
+    final double[] slideDir = new double[3];
 
     // broad phase: the last exact distance and where it was taken (still patches only)
     private final double[] reachPoint = new double[3];

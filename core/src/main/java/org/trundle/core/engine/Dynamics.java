@@ -33,7 +33,21 @@ import org.trundle.core.Phase;
  * <p>State layout: see {@link StateMapper} (full layout) and {@link StateMapper#layout} (the
  * components integrated per phase); this class is also the integrator's equation, on the compact
  * layout of the current segment. It evaluates the one contact of the {@link ContactSet}'s primary
- * slot with the closed form below (several contacts, issue 12, add a small linear system beside it).
+ * slot with the closed form below (the fast path); when the ball touches several patches at once
+ * ({@link ContactSet#multi()}) the forces come from {@link ContactForceSolver} instead (see
+ * {@code multiForces}).
+ *
+ * <p>Several contacts (issue 12; design notes §9): the velocity is integrated (full layout) and the
+ * solve enforces, per rolling contact {@code i}, {@code a − r α × n_i = r ω × (H_i v)} and per sliding
+ * contact {@code n_i·a = −vᵀ H_i v}, with Newton–Euler {@code m a = m g + F_app + Σ F_i},
+ * {@code I α = τ − r Σ n_i × F_i}; the squeeze between two rolling contacts, which the motion cannot
+ * decide, is taken as the split that asks least of friction ({@code min Σ |P_i F_i|²}). The constraints
+ * drift at the integration error and are restored by the projection onto every contact's manifold
+ * (centre onto every surface; velocity onto every contact's constraints, orthogonally in the
+ * kinetic-energy metric; {@link Transitions#projected}) when the drift measure (distance residuals and
+ * the slip of rolling contacts against the projection threshold) reaches 1. A law's sliding friction is
+ * taken proportional to the normal force there (its ratio at the load {@code m|g|}; exact for Coulomb),
+ * and the laws' couples are evaluated at the normal forces of a first solve without them.
  *
  * <p>Rolling (design notes §3): with {@code n}, {@code H} at the centre and the no-slip velocity
  * {@code v = r ω × n}, the constraints {@code n·v = 0}, {@code v − r ω × n = 0} differentiated with
@@ -118,6 +132,32 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
 
     long evaluations;
     long budget = Long.MAX_VALUE;
+
+    // several contacts (issue 12): the run's contact set, the solver, and results per position
+    /** The run's contacts, or null for a right-hand side outside a run (one contact). */
+    private ContactSet contacts;
+    private final ContactForceSolver solver;
+    /** Load (N) at which a law's sliding friction per newton is taken with several contacts: m|g|, at least m·1 m/s². */
+    private final double referenceLoad;
+    /** Normal force N (N) per position, of the last several-contact evaluation. */
+    final double[] contactNormal = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Tangential force (N) per position: needed by rolling, the law's friction while sliding. */
+    final double[] contactNeeded = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Grip (N) per position, rolling contacts; NaN while sliding. */
+    final double[] contactGrip = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Slip speed (m/s) per position (a constraint residual for a rolling contact). */
+    final double[] contactSlipSpeed = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Centre distance from each touched surface (m), per position. */
+    final double[] contactDistance = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Patch margin (m) per position. */
+    final double[] contactMargin = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Slip velocity (m/s) per position. */
+    final double[][] contactSlip = new double[ContactForceSolver.MAX_CONTACTS][3];
+    /** Friction force on the ball (N) per position. */
+    final double[][] contactFriction = new double[ContactForceSolver.MAX_CONTACTS][3];
+    private final double[][] contactDir = new double[ContactForceSolver.MAX_CONTACTS][3];
+    private final double[] contactRatio = new double[ContactForceSolver.MAX_CONTACTS];
+    private final double[] zeroSlip = new double[3];
 
     // workspaces
     private final double[] c = new double[3];
@@ -208,7 +248,24 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         this.access = access;
         this.load = load;
         this.loaded = load != AppliedLoad.NONE;
+        this.solver = new ContactForceSolver(r, m, k);
+        this.referenceLoad = m * Math.max(norm(g), 1.0);
         setSlot(slot);
+    }
+
+    /**
+     * Evaluates the run's contact set: with more than one patch touched the forces come from the
+     * several-contact solve.
+     *
+     * @param set the run's contacts
+     */
+    void setContacts(ContactSet set) {
+        this.contacts = set;
+    }
+
+    /** @return whether the last evaluations see several contacts (the velocity is then integrated) */
+    boolean multi() {
+        return contacts != null && contacts.multi();
     }
 
     /**
@@ -416,6 +473,13 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         lossDamp = 0;
         pressing = false;
         // one method per phase keeps each small enough for the JIT to inline its callees
+        if (phase != Phase.FLIGHT && contacts != null && contacts.multi()) {
+            multiForces(t, y, yDot);
+            if (yDot != null) {
+                checkFinite(t, yDot);
+            }
+            return;
+        }
         if (phase == Phase.ROLLING || phase == Phase.REST) {
             if (moving) {
                 rollingOnMovingPatch(t, y, yDot);
@@ -1042,15 +1106,12 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * {@code Ω̇ × (c − D) + Ω × (Ω × (c − D)) + D̈}) and the couple {@code I Ω̇}.
      */
     boolean canRest(double t, double[] y, double slack) {
-        System.arraycopy(y, C, c, 0, 3);
-        System.arraycopy(y, Q, q, 0, 4);
-        System.arraycopy(y, W, w, 0, 3);
-        System.arraycopy(y, V, vel, 0, 3);
-        zero(fApp);
-        zero(tApp);
+        loadAtRest(t, y);
+        if (contacts != null && contacts.multi()) {
+            return canRestOnSeveral(t, slack);
+        }
         slot.query(t, c);
         double[] n = geo.normal;
-        applyLoad(t);
         double[] f = tmp;
         for (int i = 0; i < 3; i++) {
             f[i] = -(m * g[i] + fApp[i]);
@@ -1109,6 +1170,235 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             throw badBound("pivoting hold limit", holdPivot, "N·m");
         }
         return tt <= holdRoll + scaleT && Math.abs(tn) <= holdPivot + scaleT;
+    }
+
+    // ------------------------------------------------------------ several contacts
+
+    /**
+     * Several contacts at once (issue 12; design notes §9): every touching slot's geometry at the centre, the
+     * forces and accelerations from {@link ContactForceSolver} (rolling contacts: full force; sliding contacts:
+     * normal force, friction {@code μ_i N_i} against the slip), the laws' couples at the normal forces of a
+     * first solve without them, then the solve with them. The velocity is integrated (full layout): the
+     * constraints are held by the solve at acceleration level and by the projection onto every contact's
+     * manifold ({@link Transitions#projected}). Results per position into the {@code contact*} arrays; position
+     * 0 (the active slot) also into the single-contact fields.
+     */
+    private void multiForces(double t, double[] y, double[] yDot) {
+        ContactSet set = contacts;
+        int count = set.count();
+        vel[0] = y[V];
+        vel[1] = y[V + 1];
+        vel[2] = y[V + 2];
+        if (loaded) {
+            applyLoad(t);
+        }
+        boolean anyCouples = false;
+        for (int k = 0; k < count; k++) {
+            ContactSlot s = set.at(k);
+            s.query(t, c);
+            readyContext(s);
+            contactDistance[k] = s.geo.distance;
+            contactMargin[k] = s.geo.patchMargin;
+            anyCouples |= s.couples;
+            double[] sl = contactSlip[k];
+            if (s.mode == Mode.SLIDING) {
+                ContactKinematics.slip(r, vel, 0, w, 0, s.geo.normal, sl);
+                double sp = norm(sl);
+                contactSlipSpeed[k] = sp;
+                double[] dir = contactDir[k];
+                if (sp >= stickEps) {
+                    for (int i = 0; i < 3; i++) {
+                        dir[i] = sl[i] / sp;
+                    }
+                } else {
+                    System.arraycopy(s.slideDir, 0, dir, 0, 3);
+                }
+                // the law's friction per newton at the reference load (exact for Coulomb's f = μ N)
+                access.set(s.ctx, ball, s.geo, referenceLoad, Phase.SLIDING, sl, w, false);
+                double f = s.law.slidingFriction(s.ctx);
+                if (!(f >= 0 && f < Double.POSITIVE_INFINITY)) {
+                    throw badBound("sliding friction", f, "N");
+                }
+                contactRatio[k] = f / referenceLoad;
+            } else {
+                ContactKinematics.slip(r, vel, 0, w, 0, s.geo.normal, sl);
+                contactSlipSpeed[k] = norm(sl);
+            }
+        }
+        System.arraycopy(tApp, 0, tau, 0, 3);
+        solveContacts(count);
+        if (anyCouples) {
+            for (int k = 0; k < count; k++) {
+                ContactSlot s = set.at(k);
+                if (!s.couples) {
+                    continue;
+                }
+                double fn = solver.normalForce(k);
+                if (s.mode == Mode.SLIDING) {
+                    access.set(s.ctx, ball, s.geo, fn, Phase.SLIDING, contactSlip[k], w, false);
+                } else {
+                    access.setRolling(s.ctx, fn, w[0], w[1], w[2], true);
+                }
+                s.law.addCouples(s.ctx);
+                double[] ct = access.torque(s.ctx);
+                double[] lr = access.lossRate(s.ctx);
+                for (int i = 0; i < 3; i++) {
+                    tau[i] += ct[i];
+                }
+                lossRoll += lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+                lossPivot += lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+                lossOther += lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+            }
+            solveContacts(count);
+        }
+        double fx = 0;
+        double fy = 0;
+        double fz = 0;
+        for (int k = 0; k < count; k++) {
+            ContactSlot s = set.at(k);
+            double[] n = s.geo.normal;
+            double[] f = solver.force(k);
+            double fn = solver.normalForce(k);
+            double[] fr = contactFriction[k];
+            for (int i = 0; i < 3; i++) {
+                fr[i] = f[i] - fn * n[i];
+            }
+            fx += f[0];
+            fy += f[1];
+            fz += f[2];
+            contactNormal[k] = fn;
+            contactNeeded[k] = solver.tangentialForce(k);
+            if (s.mode == Mode.SLIDING) {
+                contactGrip[k] = Double.NaN;
+                lossSlide -= dot(fr, contactSlip[k]);
+            } else {
+                access.setRolling(s.ctx, fn, w[0], w[1], w[2], false);
+                double gl = s.law.gripLimit(s.ctx);
+                if (!(gl >= 0)) {
+                    throw badBound("grip limit", gl, "N");
+                }
+                contactGrip[k] = gl;
+            }
+        }
+        // position 0 in the single-contact fields (samples, the ledger, the rules of the active slot)
+        normalForce = contactNormal[0];
+        neededTangential = contactNeeded[0];
+        grip = contactGrip[0];
+        slipSpeed = contactSlipSpeed[0];
+        System.arraycopy(contactFriction[0], 0, friction, 0, 3);
+        System.arraycopy(contactSlip[0], 0, slip, 0, 3);
+        force[0] = fx;
+        force[1] = fy;
+        force[2] = fz;
+        if (yDot == null) {
+            return;
+        }
+        double[] a = solver.acceleration();
+        double[] al = solver.angularAcceleration();
+        double vx = vel[0];
+        double vy = vel[1];
+        double vz = vel[2];
+        yDot[C] = vx;
+        yDot[C + 1] = vy;
+        yDot[C + 2] = vz;
+        yDot[V] = a[0];
+        yDot[V + 1] = a[1];
+        yDot[V + 2] = a[2];
+        rotationRates(y, w[0], w[1], w[2], al[0], al[1], al[2], yDot);
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
+        yDot[APPLIED] = loaded ? dot(fApp, vel) + dot(tApp, w) : 0;
+        yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        yDot[DAMPING] = 0;
+        yDot[DRIVE] = 0;
+    }
+
+    /** Loads the solver with the touching contacts and solves with the couple {@link #tau}. */
+    private void solveContacts(int count) {
+        ContactForceSolver sv = solver;
+        sv.clear();
+        for (int k = 0; k < count; k++) {
+            ContactSlot s = contacts.at(k);
+            if (s.mode == Mode.SLIDING) {
+                sv.addSliding(s.geo.normal, s.geo.hessian, contactRatio[k], contactDir[k]);
+            } else {
+                sv.addRolling(s.geo.normal, s.geo.hessian);
+            }
+        }
+        if (!sv.solve(vel, w, g, fApp, tau)) {
+            StringBuilder ids = new StringBuilder();
+            for (int k = 0; k < count; k++) {
+                ids.append(k == 0 ? "" : ", ").append(contacts.at(k).id).append(" (")
+                    .append(contacts.at(k).mode.name().toLowerCase(java.util.Locale.ROOT)).append(')');
+            }
+            throw new RunFailure("the contacts on " + ids + " cannot all hold: their constraint system is singular"
+                + " beyond the squeeze between rolling contacts");
+        }
+    }
+
+    /** Gives a slot's law context the ball and the slot's geometry workspace, once. */
+    private void readyContext(ContactSlot s) {
+        if (!s.contextReady) {
+            access.set(s.ctx, ball, s.geo, 0.0, Phase.ROLLING, zeroSlip, w, false);
+            s.contextReady = true;
+        }
+    }
+
+    /** The state of a rest test into the workspaces, and the applied load there. */
+    private void loadAtRest(double t, double[] y) {
+        System.arraycopy(y, C, c, 0, 3);
+        System.arraycopy(y, Q, q, 0, 4);
+        System.arraycopy(y, W, w, 0, 3);
+        System.arraycopy(y, V, vel, 0, 3);
+        zero(fApp);
+        zero(tApp);
+        applyLoad(t);
+    }
+
+    /**
+     * The rest test with several contacts: with {@code v = 0}, {@code ω = 0} and every contact rolling, the
+     * solve must give no motion ({@code |a| + r|α|} within {@code slack} times {@code |g| + |F_app|/m}), every
+     * normal force positive and every contact's friction within its grip (with the same slack). The holding
+     * couples of the laws are not asked (at zero spin they are not needed).
+     */
+    private boolean canRestOnSeveral(double t, double slack) {
+        zero(vel);
+        zero(w);
+        int count = contacts.count();
+        solver.clear();
+        for (int k = 0; k < count; k++) {
+            ContactSlot s = contacts.at(k);
+            s.query(t, c);
+            readyContext(s);
+            solver.addRolling(s.geo.normal, s.geo.hessian);
+        }
+        System.arraycopy(tApp, 0, tau, 0, 3);
+        if (!solver.solve(vel, w, g, fApp, tau)) {
+            return false;
+        }
+        double scaleA = slack * (norm(g) + norm(fApp) / m) + 1e-300;
+        double moving = norm(solver.acceleration()) + r * norm(solver.angularAcceleration());
+        if (!(moving <= scaleA)) {
+            return false;
+        }
+        for (int k = 0; k < count; k++) {
+            ContactSlot s = contacts.at(k);
+            double fn = solver.normalForce(k);
+            if (!(fn > 0)) {
+                return false;
+            }
+            access.setRolling(s.ctx, fn, 0, 0, 0, true);
+            double gl = s.law.gripLimit(s.ctx);
+            if (!(gl >= 0)) {
+                throw badBound("grip limit", gl, "N");
+            }
+            if (solver.tangentialForce(k) > gl + m * scaleA) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Thrown when the evaluation budget is used up. */

@@ -11,7 +11,9 @@ import org.trundle.core.Phase;
  * Patch exit: the patch margin of the contact point (m) falls to zero. When a neighbouring patch of
  * the scene continues the surface there ({@link Transitions#neighbour}) the contact is handed over
  * to it (event {@code handover}); otherwise the ball leaves every patch: the run ends there
- * ({@code stopAtExit}) or goes on in flight. Watched in contact on patches with edges.
+ * ({@code stopAtExit}) or goes on in flight. Watched in contact on patches with edges. With several
+ * contacts it watches the active one (the first touched): its exit ends that contact and the others go
+ * on; the edges of the other touched patches are not watched (a limit of this version).
  */
 final class ExitRule extends SwitchRule {
     ExitRule(Run run) {
@@ -55,6 +57,11 @@ final class ExitRule extends SwitchRule {
     EndReason react(Transitions x, BallState before) {
         run.slot.query(run.t, run.centreOf(run.y));
         String edge = run.surface.edgeName(run.dyn.geo.edge);
+        if (run.contacts.multi()) {
+            // one contact of several leaves its patch: the others go on (no hand-over while touching several)
+            x.release(run.slot, EventKind.EXIT, edge, before);
+            return null;
+        }
         if (run.phase() == Phase.ROLLING) {
             x.setDerivedVelocity();
         }
@@ -68,6 +75,15 @@ final class ExitRule extends SwitchRule {
                 x.setDerivedVelocity();
             }
             run.log(EventKind.HANDOVER, before, null, Vector3D.ZERO, edge, from);
+            // the neighbour may not hold the ball (a convex lip taken too fast): then it lifts off at once
+            // (its lift-off rule watches only a normal force that falls through zero)
+            run.dyn.phase = run.phase();
+            run.dyn.evaluate(run.t, run.y);
+            if (!(run.dyn.normalForce > 0)) {
+                BallState at = run.toState(run.t, run.y, run.phase());
+                run.changePhase(Phase.FLIGHT);
+                run.log(EventKind.LIFT_OFF, at, null, Vector3D.ZERO);
+            }
             return null;
         }
         if (run.set.stopAtExit()) {

@@ -34,20 +34,78 @@ final class ImpactRule extends SwitchRule {
         return "impact on " + slot.id;
     }
 
-    @Override
-    boolean watches(Phase phase) {
-        return phase == Phase.FLIGHT && !run.touching;
-    }
+    /** Whether this segment is a contact phase (the ball touches another patch and may reach this one). */
+    private boolean inContact;
 
     @Override
+    boolean watches(Phase phase) {
+        if (phase == Phase.FLIGHT) {
+            inContact = false;
+            return !run.touching;
+        }
+        // in contact on a rigid scene: a patch not touched yet may be reached (a second or third contact)
+        inContact = true;
+        return phase.inContact() && run.compliance == null && slot.mode == Mode.APART
+            && run.contacts.count() < ContactForceSolver.MAX_CONTACTS && secondContactPossible(run, slot);
+    }
+
+    /**
+     * Whether the ball, touching its patches now, may take {@code s} as a further contact: only when
+     * {@code s} and every touched patch stand still (several contacts on a moving patch are not solved; the
+     * ball then keeps its one contact, as with one contact at a time).
+     *
+     * @param run the run
+     * @param s a patch not touched
+     * @return whether it can become a further contact
+     */
+    static boolean secondContactPossible(Run run, ContactSlot s) {
+        if (s.moving) {
+            return false;
+        }
+        for (int k = 0; k < run.contacts.count(); k++) {
+            if (run.contacts.at(k).moving) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * In flight: {@code d − r + slack}. In contact with another patch: the same plus how far the closest
+     * point lies outside this patch, {@code max(0, −margin)} (m), so that the function stays positive while
+     * the ball passes this surface's continuation beyond the patch (a tangent join the ball is handed over
+     * at, whose continuation it may touch) and is continuous where the closest point enters the patch.
+     */
+    @Override
     double value(Snapshot s) {
-        return s.slotDistance[slot.index] - run.r + run.impactSlack;
+        double v = s.slotDistance[slot.index] - run.r + run.impactSlack;
+        return inContact ? v + Math.max(0.0, -s.slotMargin[slot.index]) : v;
+    }
+
+    /**
+     * In contact: the function changes no faster than the centre moves plus the closest point moves over the
+     * patch, {@code |v|(2 + r‖H‖)} with {@code |v| ≤} the speed measure; half the time that needs to reach zero,
+     * never less than the configured interval.
+     */
+    @Override
+    double checkInterval(ODEStateAndDerivative s) {
+        if (!inContact) {
+            return run.set.maxCheckInterval();
+        }
+        Snapshot sn = run.snapshots.at(s);
+        double gap = value(sn);
+        if (!(gap > 0)) {
+            return run.set.maxCheckInterval();
+        }
+        double rate = sn.speed * (2 + run.r * sn.slotHessianNorm[slot.index]) + 1e-300;
+        return Math.max(run.set.maxCheckInterval(), 0.5 * gap / rate);
     }
 
     @Override
     boolean confirms(ODEStateAndDerivative s) {
-        // flight integrates the full mechanical state: c, v sit at their full indices
-        double[] ys = s.getPrimaryState();
+        // flight integrates the full mechanical state: c, v sit at their full indices; a contact layout may
+        // leave the velocity out (rolling): take the full state
+        double[] ys = inContact ? run.snapshots.fullState(s) : s.getPrimaryState();
         try {
             slot.query(s.getTime(), run.centreOf(ys));
         } catch (SurfaceDomainException e) {
@@ -59,6 +117,10 @@ final class ImpactRule extends SwitchRule {
 
     @Override
     void prepare(Transitions x) {
+        if (inContact) {
+            // the ball keeps its contacts; the new one is added at the instant found (no rewind)
+            return;
+        }
         run.activate(slot);
         if (run.compliance == null) {
             x.rewindToContact();
@@ -67,6 +129,10 @@ final class ImpactRule extends SwitchRule {
 
     @Override
     EndReason react(Transitions x, BallState before) {
+        if (inContact) {
+            x.reach(slot, before);
+            return null;
+        }
         if (run.compliance != null) {
             // a compliant contact begins: its damping is set from the normal speed now
             slot.query(run.t, run.centreOf(run.y));
@@ -78,6 +144,8 @@ final class ImpactRule extends SwitchRule {
         }
         Vector3D j = x.impact();
         run.log(EventKind.IMPACT, before, null, j);
+        // a ball landing where two still walls meet touches the second one at once
+        x.reachPressed(before);
         return null;
     }
 }

@@ -50,7 +50,7 @@ final class PivotRule extends SwitchRule {
 
     @Override
     boolean watches(Phase phase) {
-        return phase == Phase.ROLLING && run.slot.pivotStick;
+        return phase == Phase.ROLLING && run.slot.pivotStick && !run.contacts.multi();
     }
 
     @Override

@@ -123,6 +123,7 @@ final class Run {
         this.surface = slot.surface;
         this.law = slot.law;
         this.dyn = new Dynamics(model, slot);
+        this.dyn.setContacts(contacts);
         this.compliance = model.compliance();
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
@@ -140,6 +141,22 @@ final class Run {
             return;
         }
         contacts.activate(s);
+        dyn.setSlot(s);
+        slot = s;
+        surface = s.surface;
+        law = s.law;
+        restitution = law.restitution().orElse(0.0);
+    }
+
+    /**
+     * Follows the contact set's active slot after a change of the touching slots (a release of the active
+     * one among several): the right-hand side and the run's surface, law and restitution follow.
+     */
+    void syncActive() {
+        ContactSlot s = contacts.active();
+        if (s == slot) {
+            return;
+        }
         dyn.setSlot(s);
         slot = s;
         surface = s.surface;
@@ -262,6 +279,11 @@ final class Run {
             dyn.evaluate(ts, ys);
             dyn.phase = keep;
             maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
+            if (dyn.multi()) {
+                for (int k = 1; k < contacts.count(); k++) {
+                    maxNormalForce = Math.max(maxNormalForce, dyn.contactNormal[k]);
+                }
+            }
         }
     }
 
@@ -292,13 +314,30 @@ final class Run {
             onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         }
         java.util.List<SampleContact> touches = java.util.List.of();
-        if (touching) {
+        java.util.List<String> ids = touching ? slot.contactIds : java.util.List.of();
+        if (touching && contacts.multi()) {
+            // several contacts: one entry each, in the order touched (the active slot first)
+            int touched = contacts.count();
+            SampleContact[] all = new SampleContact[touched];
+            String[] names = new String[touched];
+            for (int k = 0; k < touched; k++) {
+                ContactSlot sk = contacts.at(k);
+                double[] n = sk.geo.normal;
+                double[] f = dyn.contactFriction[k];
+                Mode mk = sk.mode;
+                Phase pk = p == Phase.REST ? Phase.REST : mk == Mode.SLIDING ? Phase.SLIDING : Phase.ROLLING;
+                all[k] = new SampleContact(sk.id, pk, dyn.contactNormal[k], new Vector3D(f[0], f[1], f[2]),
+                    new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]), new Vector3D(n[0], n[1], n[2]));
+                names[k] = sk.id;
+            }
+            touches = java.util.List.of(all);
+            ids = java.util.List.of(names);
+        } else if (touching) {
             double[] n = dyn.geo.normal;
             touches = java.util.List.of(new SampleContact(slot.id, p, dyn.normalForce, fr, cp,
                 new Vector3D(n[0], n[1], n[2])));
         }
-        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent,
-            touching ? slot.contactIds : java.util.List.of(), touches));
+        observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent, ids, touches));
     }
 
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse) {
@@ -311,9 +350,15 @@ final class Run {
 
     /** Logs an event on the active patch; {@code from} is the patch left by a hand-over, else null. */
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse, String edge, String from) {
+        logOn(slot.id, kind, before, after, impulse, edge, from);
+    }
+
+    /** Logs an event on the patch {@code patch} (a contact of several); {@code from} as for {@link #log}. */
+    void logOn(String patch, EventKind kind, BallState before, BallState after, Vector3D impulse, String edge,
+               String from) {
         Phase phase = phase();
         BallState a = after != null ? after : toState(t, y, phase);
-        RunEvent e = new RunEvent(kind, before, a, edge, impulse, slot.id, from, from != null ? slot.id : null);
+        RunEvent e = new RunEvent(kind, before, a, edge, impulse, patch, from, from != null ? slot.id : null);
         events.add(e);
         trackForce(t, y, phase);
         emitSample(t, y, phase, true);

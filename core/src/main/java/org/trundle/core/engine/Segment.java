@@ -30,13 +30,21 @@ final class Segment {
         this.run = run;
         this.transitions = transitions;
         java.util.List<SwitchRule> list = new java.util.ArrayList<>(java.util.List.of(
-            new LiftOffRule(run), new RestRule(run), new FitRule(run), new ExitRule(run),
-            new SlipRule(run), new StickRule(run)));
+            new LiftOffRule(run, 0), new RestRule(run), new FitRule(run), new ExitRule(run),
+            new SlipRule(run, 0), new StickRule(run, 0)));
         for (ContactSlot s : run.slots) {
             list.add(new ImpactRule(run, s));
         }
         list.add(new ReleaseRule(run));
         list.add(new PivotRule(run));
+        if (run.slots.length > 1) {
+            // the second and third contacts of a scene: their own release, slip and stick
+            for (int k = 1; k < ContactForceSolver.MAX_CONTACTS; k++) {
+                list.add(new LiftOffRule(run, k));
+                list.add(new SlipRule(run, k));
+                list.add(new StickRule(run, k));
+            }
+        }
         this.rules = list.toArray(new SwitchRule[0]);
         this.layouts = new int[run.slots.length][Phase.values().length][];
     }
@@ -54,7 +62,8 @@ final class Segment {
         Dynamics dyn = run.dyn;
         dyn.phase = phase;
         int[][] perPhase = layouts[run.slot.index];
-        int[] layout = perPhase[phase.ordinal()];
+        // several contacts integrate the full layout (the velocity is not derived from one normal)
+        int[] layout = run.contacts.multi() ? StateMapper.identity() : perPhase[phase.ordinal()];
         if (layout == null) {
             // a compliant contact integrates flight with every loss (its friction, couples and damping)
             layout = run.compliance != null ? StateMapper.identity()
@@ -78,9 +87,15 @@ final class Segment {
         if (phase.inContact()) {
             // a switch may hand over a drifted state: start each contact segment well within the
             // projection thresholds (the step observer checks them only at step ends)
-            run.slot.query(run.t, run.centreOf(run.y));
-            if (run.snapshots.drift(run.y, dyn.geo.distance) >= 0.5) {
-                run.y = transitions.projected(run.t, run.y);
+            if (run.contacts.multi()) {
+                if (transitions.multiDrift(run.t, run.y) >= 0.5) {
+                    run.y = transitions.projected(run.t, run.y);
+                }
+            } else {
+                run.slot.query(run.t, run.centreOf(run.y));
+                if (run.snapshots.drift(run.y, dyn.geo.distance) >= 0.5) {
+                    run.y = transitions.projected(run.t, run.y);
+                }
             }
         } else {
             // a flight may end far from where it began: let Newton-based surfaces start afresh
@@ -102,6 +117,11 @@ final class Segment {
      * force and distance residual {@code |d − r|}.
      */
     private void trackResiduals(Snapshot s) {
+        if (run.contacts.multi()) {
+            run.maxNormalForce = Math.max(run.maxNormalForce, s.contactLargestForce);
+            run.maxDistanceError = Math.max(run.maxDistanceError, s.contactDistanceError);
+            return;
+        }
         run.maxNormalForce = Math.max(run.maxNormalForce, s.normalForce);
         run.maxDistanceError = Math.max(run.maxDistanceError, Math.abs(s.distance - run.r));
     }
@@ -150,7 +170,18 @@ final class Segment {
             // kinetic energy, centre and slip from the snapshot (every layout starts with the
             // centre), which the integrator's FSAL stage at the step end filled without an evaluation
             Snapshot s = run.snapshots.at(cur);
-            if (phase == Phase.SLIDING) {
+            if (run.contacts.multi()) {
+                ContactSet set = run.contacts;
+                for (int k = 0; k < set.count(); k++) {
+                    double sp = s.contactSlipSpeed[k];
+                    if (set.at(k).mode == Mode.SLIDING && sp > run.stickEps) {
+                        double[] dir = set.at(k).slideDir;
+                        for (int i = 0; i < 3; i++) {
+                            dir[i] = s.contactSlip[k][i] / sp;
+                        }
+                    }
+                }
+            } else if (phase == Phase.SLIDING) {
                 double sp = s.slipSpeed;
                 if (sp > run.stickEps) {
                     for (int i = 0; i < 3; i++) {

@@ -9,21 +9,36 @@ import org.trundle.core.Phase;
 /**
  * Slip onset while rolling: the grip minus the tangential force rolling needs,
  * {@code μ_s F_n − |F_t,roll|} for Coulomb (N), falls to zero; sliding starts against
- * {@code F_t,roll} (design notes §4). Watched only when the law's grip is finite.
+ * {@code F_t,roll} (design notes §4). Watched only when the law's grip is finite. One rule per position
+ * of the contact set: with several contacts each rolling contact is watched on its own (its needed
+ * friction {@code |P_i F_i|} against {@code μ_s N_i}) and only that contact starts to slide.
  */
 final class SlipRule extends FlowSpacedRule {
-    SlipRule(Run run) {
+    /** Position in the contact set watched. */
+    private final int position;
+
+    SlipRule(Run run, int position) {
         super(run);
+        this.position = position;
     }
 
     @Override
     String label() {
-        return "slip";
+        return position == 0 ? "slip" : "slip of contact " + position;
     }
 
     @Override
     boolean watches(Phase phase) {
-        if (phase != Phase.ROLLING) {
+        ContactSet set = run.contacts;
+        if (set.multi()) {
+            if (!phase.inContact() || position >= set.count() || set.at(position).mode != Mode.ROLLING) {
+                return false;
+            }
+            run.dyn.phase = phase;
+            run.dyn.evaluate(run.t, run.y);
+            return Double.isFinite(run.dyn.contactGrip[position]);
+        }
+        if (phase != Phase.ROLLING || position != 0) {
             return false;
         }
         run.dyn.evaluate(run.t, run.y);
@@ -32,11 +47,15 @@ final class SlipRule extends FlowSpacedRule {
 
     @Override
     double value(Snapshot s) {
-        return s.gripMargin;
+        return position == 0 ? s.gripMargin : s.contactGripMargin[position];
     }
 
     @Override
     EndReason react(Transitions x, BallState before) {
+        if (run.contacts.multi()) {
+            x.startSliding(run.contacts.at(position), before);
+            return null;
+        }
         run.dyn.phase = Phase.ROLLING;
         run.dyn.evaluate(run.t, run.y);
         x.setSlideDirectionFromRolling();

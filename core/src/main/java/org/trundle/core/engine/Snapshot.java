@@ -47,8 +47,33 @@ final class Snapshot {
      * surface (m), exact within two radii of it (see {@link ContactSlot#distanceBound}).
      */
     final double[] slotDistance;
+    /**
+     * Contact phases of a scene: per patch not touched, the patch margin (m) of the closest point when
+     * {@link #slotDistance} is exact, else 0 (the in-contact impact test of {@link ImpactRule}).
+     */
+    final double[] slotMargin;
+    /** Contact phases of a scene: per patch not touched, the norm of its distance Hessian (1/m) where exact, else 0. */
+    final double[] slotHessianNorm;
+
+    // several contacts (issue 12), per position of the contact set (0: the active slot)
+    /** Normal force per contact (N). */
+    final double[] contactNormalForce = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Grip minus needed tangential force per rolling contact (N). */
+    final double[] contactGripMargin = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Slip speed per contact (m/s). */
+    final double[] contactSlipSpeed = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Slip velocity per contact (m/s). */
+    final double[][] contactSlip = new double[ContactForceSolver.MAX_CONTACTS][3];
+    /** Patch margin per contact (m). */
+    final double[] contactMargin = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Largest distance residual {@code |d_i − r|} over the contacts (m). */
+    double contactDistanceError;
+    /** Largest normal force over the contacts (N). */
+    double contactLargestForce;
 
     Snapshot(int patches) {
         slotDistance = new double[patches];
+        slotMargin = new double[patches];
+        slotHessianNorm = new double[patches];
     }
 }

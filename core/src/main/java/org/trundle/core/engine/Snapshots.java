@@ -12,7 +12,8 @@ import org.trundle.core.Phase;
 
 /**
  * A small cache of {@link Snapshot}s of the last states the detectors asked about: one evaluation
- * per state serves every rule. Keys are the integrator's compact state and time and the phase;
+ * per state serves every rule. Keys are the integrator's compact state and time, the phase and the
+ * contact set's generation (a hand-over or a contact added at the same state is another evaluation);
  * Hipparchus hands the same state object to every detector in turn, so an identity shortcut
  * answers most asks without comparing arrays.
  */
@@ -41,6 +42,8 @@ final class Snapshots {
     private final double[][] cacheY = new double[CACHE][DIM];
     private final double[] cacheTime = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
     private final Phase[] cachePhase = new Phase[CACHE];
+    /** The contact set's generation each entry was evaluated with (a switch at the same state changes it). */
+    private final long[] cacheContacts = new long[CACHE];
     private final int[] cacheLength = new int[CACHE];
     /** Bumped whenever a slot is reused, so that the identity shortcut never reads stale values. */
     private final long[] cacheGeneration = new long[CACHE];
@@ -51,6 +54,7 @@ final class Snapshots {
     private int cacheNext;
     /** Full-layout workspace (the integrator's states are compact). */
     private final double[] eventFull = new double[DIM];
+    private final double[] probeCentre = new double[3];
 
     Snapshots(Run run) {
         this.run = run;
@@ -70,8 +74,9 @@ final class Snapshots {
     Snapshot at(ODEStateAndDerivative s) {
         Phase phase = run.phase();
         int slot;
+        long contacts = run.contacts.generation();
         if (s == lastState && cacheGeneration[lastStateSlot] == lastStateGeneration
-            && cachePhase[lastStateSlot] == phase) {
+            && cachePhase[lastStateSlot] == phase && cacheContacts[lastStateSlot] == contacts) {
             slot = lastStateSlot;
         } else {
             slot = slotOf(s, phase);
@@ -93,7 +98,7 @@ final class Snapshots {
         int len = ys.length;
         for (int i = 0; i < CACHE; i++) {
             if (cachePhase[i] == phase && cacheTime[i] == ts && cacheLength[i] == len
-                && Arrays.equals(ys, 0, len, cacheY[i], 0, len)) {
+                && cacheContacts[i] == run.contacts.generation() && Arrays.equals(ys, 0, len, cacheY[i], 0, len)) {
                 return i;
             }
         }
@@ -112,6 +117,7 @@ final class Snapshots {
         cacheLength[slot] = ys.length;
         cacheTime[slot] = ts;
         cachePhase[slot] = phase;
+        cacheContacts[slot] = run.contacts.generation();
         return slot;
     }
 
@@ -124,7 +130,7 @@ final class Snapshots {
     void stageAtStepEnd(double ts, double[] compact, double[] full, double[] fullDot) {
         Phase phase = run.phase();
         if (phase.inContact()) {
-            fill(full, fullDot, values[nextSlot(ts, compact, phase)], phase);
+            fill(ts, full, fullDot, values[nextSlot(ts, compact, phase)], phase);
         }
     }
 
@@ -143,11 +149,11 @@ final class Snapshots {
                 v.slotDistance[s.index] = s.distanceBound(ts, c, 2 * r, 1e-3 * r);
             }
         }
-        fill(ys, dyn.lastDerivative(), v, phase);
+        fill(ts, ys, dyn.lastDerivative(), v, phase);
     }
 
     /** Fills a snapshot from what the last evaluation left in {@code dyn}, for full state ys and derivative yd. */
-    private void fill(double[] ys, double[] yd, Snapshot v, Phase phase) {
+    private void fill(double ts, double[] ys, double[] yd, Snapshot v, Phase phase) {
         boolean contact = phase.inContact();
         if (contact) {
             v.normalForce = dyn.normalForce;
@@ -199,10 +205,74 @@ final class Snapshots {
         v.normal[1] = n[1];
         v.normal[2] = n[2];
         v.drift = contact ? drift(ys, v.distance) : 0.0;
+        if (contact && dyn.multi()) {
+            fillContacts(ys, v);
+        }
+        if (contact && run.slots.length > 1) {
+            otherPatches(ts, ys[0], ys[1], ys[2], v);
+        }
         double vx = contact ? dyn.vel[0] : ys[V];
         double vy = contact ? dyn.vel[1] : ys[V + 1];
         double vz = contact ? dyn.vel[2] : ys[V + 2];
         v.kinetic = run.kinetic(vx, vy, vz, ys);
+    }
+
+    /** Several contacts: the per-contact values, the residuals and the drift over every contact. */
+    private void fillContacts(double[] ys, Snapshot v) {
+        int count = run.contacts.count();
+        double err = 0;
+        double largest = 0;
+        double slipDrift = 0;
+        for (int k = 0; k < count; k++) {
+            v.contactNormalForce[k] = dyn.contactNormal[k];
+            v.contactGripMargin[k] = dyn.contactGrip[k] - dyn.contactNeeded[k];
+            v.contactSlipSpeed[k] = dyn.contactSlipSpeed[k];
+            System.arraycopy(dyn.contactSlip[k], 0, v.contactSlip[k], 0, 3);
+            v.contactMargin[k] = dyn.contactMargin[k];
+            err = Math.max(err, Math.abs(dyn.contactDistance[k] - r));
+            largest = Math.max(largest, dyn.contactNormal[k]);
+            if (run.contacts.at(k).mode == Mode.ROLLING) {
+                slipDrift = Math.max(slipDrift, dyn.contactSlipSpeed[k]);
+            }
+        }
+        v.contactDistanceError = err;
+        v.contactLargestForce = largest;
+        v.drift = Math.max(Math.max(err / (distanceThreshold * r), slipDrift / (distanceThreshold * run.speedScale)),
+            Math.abs(StateMapper.quaternionNorm(ys) - 1) / quaternionThreshold);
+    }
+
+    /**
+     * Contact phases of a scene: a lower bound of the distance of every patch not touched (exact within two
+     * radii), with its patch margin and Hessian norm where exact, for the in-contact impact test.
+     */
+    private void otherPatches(double ts, double x, double y, double z, Snapshot v) {
+        double[] c = probeCentre;
+        c[0] = x;
+        c[1] = y;
+        c[2] = z;
+        for (ContactSlot s : run.slots) {
+            if (s.mode != Mode.APART) {
+                continue;
+            }
+            double d;
+            try {
+                d = s.distanceBound(ts, c, 2 * r, 1e-3 * r);
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                // no closest point near the centre: the patch is not within reach here
+                d = Double.POSITIVE_INFINITY;
+            }
+            v.slotDistance[s.index] = d;
+            boolean exact = d <= 2 * r;
+            v.slotMargin[s.index] = exact ? s.geo.patchMargin : 0.0;
+            double hn = 0;
+            if (exact) {
+                double[] h = s.geo.hessian;
+                for (int i = 0; i < 9; i++) {
+                    hn += h[i] * h[i];
+                }
+            }
+            v.slotHessianNorm[s.index] = Math.sqrt(hn);
+        }
     }
 
     /**

@@ -13,7 +13,9 @@ import org.trundle.core.Phase;
 /**
  * Stick while sliding: the slip speed {@code |s|} falls to the stick threshold {@code ε} (m/s); the
  * rest of the slip is removed by a sticking impulse and the grip test chooses rolling or sliding
- * (design notes §4).
+ * (design notes §4). One rule per position of the contact set: with several contacts each sliding
+ * contact is watched on its own, and the velocity is projected onto the constraints with that contact
+ * rolling ({@link Transitions#stickContact}).
  */
 final class StickRule extends SwitchRule {
     private final double[] gv = new double[3];
@@ -23,24 +25,31 @@ final class StickRule extends SwitchRule {
     private final double[] ga = new double[3];
     private final double[] gb = new double[3];
     private final double[] full = new double[StateMapper.DIM];
+    /** Position in the contact set watched (0: the active slot). */
+    private final int position;
 
-    StickRule(Run run) {
+    StickRule(Run run, int position) {
         super(run);
+        this.position = position;
     }
 
     @Override
     String label() {
-        return "stick";
+        return position == 0 ? "stick" : "stick of contact " + position;
     }
 
     @Override
     boolean watches(Phase phase) {
-        return phase == Phase.SLIDING;
+        ContactSet set = run.contacts;
+        if (set.multi()) {
+            return phase.inContact() && position < set.count() && set.at(position).mode == Mode.SLIDING;
+        }
+        return phase == Phase.SLIDING && position == 0;
     }
 
     @Override
     double value(Snapshot s) {
-        return s.slipSpeed - run.stickEps;
+        return (position == 0 ? s.slipSpeed : s.contactSlipSpeed[position]) - run.stickEps;
     }
 
     /**
@@ -56,14 +65,17 @@ final class StickRule extends SwitchRule {
         double[] ys = dyn.expand(s.getPrimaryState(), full);
         double[] yd = s.getPrimaryDerivative();
         dyn.evaluate(s.getTime(), ys);
-        double sp = dyn.slipSpeed;
+        boolean multi = dyn.multi();
+        double sp = multi ? dyn.contactSlipSpeed[position] : dyn.slipSpeed;
         double gap = sp - run.stickEps;
         double max = run.set.maxCheckInterval();
         if (!(gap > 0)) {
             return max;
         }
-        double[] n = dyn.geo.normal;
-        double[] h = dyn.geo.hessian;
+        ContactSlot slot = multi ? run.contacts.at(position) : null;
+        double[] n = multi ? slot.geo.normal : dyn.geo.normal;
+        double[] h = multi ? slot.geo.hessian : dyn.geo.hessian;
+        double[] slip = multi ? dyn.contactSlip[position] : dyn.slip;
         for (int i = 0; i < 3; i++) {
             gv[i] = ys[V + i];
             gw[i] = ys[W + i];
@@ -76,7 +88,7 @@ final class StickRule extends SwitchRule {
         double r = run.r;
         for (int i = 0; i < 3; i++) {
             double sdot = yd[V + i] - r * ga[i] - r * gb[i];
-            rate += dyn.slip[i] * sdot / sp;
+            rate += slip[i] * sdot / sp;
         }
         if (!(rate < 0)) {
             return max;
@@ -86,6 +98,10 @@ final class StickRule extends SwitchRule {
 
     @Override
     EndReason react(Transitions x, BallState before) {
+        if (run.contacts.multi()) {
+            x.stickContact(run.contacts.at(position), before);
+            return null;
+        }
         Vector3D j = x.stickImpulse();
         Phase next = x.contactPhaseAfterStick();
         if (next == Phase.SLIDING) {

@@ -30,6 +30,9 @@ final class Transitions {
     private final double k;
     private final double inertia;
 
+    /** Whether a start is being validated (phase changes open no span yet). */
+    private boolean starting;
+
     Transitions(Run run) {
         this.run = run;
         this.dyn = run.dyn;
@@ -76,7 +79,16 @@ final class Transitions {
             }
             return Phase.FLIGHT;
         }
-        ContactSlot touched = run.slots.length > 1 ? touching(t, y, tolLen) : null;
+        ContactSlot touched = null;
+        if (run.slots.length > 1) {
+            java.util.List<ContactSlot> all = touchingAll(t, y, tolLen);
+            if (all.size() > 1 && all.stream().noneMatch(s -> s.moving)) {
+                return startSeveral(requested, all);
+            }
+            // several contacts are solved on still patches only: with a moving one the first patch touched is the
+            // one contact (as with one contact at a time)
+            touched = all.isEmpty() ? null : all.get(0);
+        }
         if (touched != null) {
             run.activate(touched);
         }
@@ -126,11 +138,9 @@ final class Transitions {
         return p;
     }
 
-    /**
-     * The first patch the centre touches (distance r within {@code tol}, contact point on the
-     * patch), or null.
-     */
-    private ContactSlot touching(double t, double[] y, double tol) {
+    /** Every patch the centre touches (distance r within {@code tol}, contact point on the patch), scene order. */
+    private java.util.List<ContactSlot> touchingAll(double t, double[] y, double tol) {
+        java.util.List<ContactSlot> out = new java.util.ArrayList<>();
         for (ContactSlot s : run.slots) {
             try {
                 s.query(t, run.centreOf(y));
@@ -138,10 +148,81 @@ final class Transitions {
                 continue;
             }
             if (Math.abs(s.geo.distance - r) <= tol && s.geo.patchMargin >= 0) {
-                return s;
+                out.add(s);
             }
         }
-        return null;
+        return out;
+    }
+
+    /**
+     * A contact start touching several patches at once (issue 12): each must stand still, the velocity must
+     * be tangential to each surface and, for a rolling start, without slip at each contact point (within the
+     * contact tolerance); then the centre is projected onto every surface, the velocity onto every contact's
+     * constraints, and the modes settle ({@link #settleContacts}).
+     */
+    private Phase startSeveral(Phase requested, java.util.List<ContactSlot> touched) {
+        double t = run.t;
+        double[] y = run.y;
+        if (touched.size() > ContactForceSolver.MAX_CONTACTS) {
+            throw run.reject(String.format(Locale.ROOT, "start touches %d patches at once; at most %d contacts are"
+                + " solved together", touched.size(), ContactForceSolver.MAX_CONTACTS));
+        }
+        double tolSpeed = run.set.contactTolerance() * run.speedScale;
+        for (ContactSlot s : touched) {
+            s.query(t, run.centreOf(y));
+            double vn = ContactKinematics.normalPart(y, V, s.geo.normal);
+            if (Math.abs(vn) > tolSpeed) {
+                throw run.reject(String.format(Locale.ROOT,
+                    "start velocity has a normal component %s m/s on surface %s of patch %s (tolerance %s m/s);"
+                        + " a contact start must move tangentially to every surface it touches",
+                    vn, s.surface.name(), s.id, tolSpeed));
+            }
+        }
+        run.activate(touched.get(0));
+        run.setPhase(Phase.ROLLING);
+        for (int i = 1; i < touched.size(); i++) {
+            run.contacts.add(touched.get(i), Mode.ROLLING);
+        }
+        projectPositionOnContacts(t, y);
+        for (ContactSlot s : touched) {
+            s.query(t, run.centreOf(y));
+            double[] sl = new double[3];
+            ContactKinematics.slip(r, y, V, y, W, s.geo.normal, sl);
+            double sp = Vec.norm(sl);
+            if (requested != Phase.SLIDING && sp > tolSpeed) {
+                throw run.reject(String.format(Locale.ROOT,
+                    "start velocity violates the no-slip condition at patch %s by %s m/s (tolerance %s m/s);"
+                        + " a ball touching several patches rolls about the line through its contact points:"
+                        + " build the start with Simulation.rollingStart(centre, velocity)",
+                    s.id, sp, tolSpeed));
+            }
+            if (requested == Phase.SLIDING && sp > run.stickEps) {
+                for (int i = 0; i < 3; i++) {
+                    s.slideDir[i] = sl[i] / sp;
+                }
+                run.contacts.setMode(s, Mode.SLIDING);
+            }
+        }
+        BallState s0 = run.toState(t, y, requested == Phase.SLIDING ? Phase.SLIDING : Phase.ROLLING);
+        starting = true;
+        try {
+            settleContacts();
+        } finally {
+            starting = false;
+        }
+        Phase p = run.phase();
+        if (p == Phase.FLIGHT) {
+            run.events.add(new RunEvent(EventKind.LIFT_OFF, s0, run.toState(t, run.y, Phase.FLIGHT), null,
+                Vector3D.ZERO, touched.get(0).id, null, null));
+        } else if (requested != Phase.SLIDING) {
+            for (ContactSlot s : touched) {
+                if (s.mode == Mode.SLIDING) {
+                    run.events.add(new RunEvent(EventKind.SLIP, s0, run.toState(t, run.y, p), null,
+                        Vector3D.ZERO, s.id, null, null));
+                }
+            }
+        }
+        return p;
     }
 
     /**
@@ -294,7 +375,7 @@ final class Transitions {
      */
     EventKind pivotCheck() {
         ContactSlot slot = run.slot;
-        if (!slot.pivotStick || run.phase() != Phase.ROLLING) {
+        if (!slot.pivotStick || run.phase() != Phase.ROLLING || run.contacts.multi()) {
             return null;
         }
         dyn.phase = Phase.ROLLING;
@@ -453,6 +534,454 @@ final class Transitions {
         }
     }
 
+    // ---------------------------------------------------------------- several contacts
+
+    /**
+     * Constraint drift of a state with several contacts, as the snapshot measures it: the largest distance
+     * residual {@code |d_i − r|} over (projection threshold · r), the largest slip of a rolling contact over
+     * (projection threshold · speed scale), and the quaternion-norm drift.
+     */
+    double multiDrift(double ts, double[] ys) {
+        dyn.phase = run.phase();
+        dyn.evaluate(ts, ys);
+        double thr = run.set.effectiveProjectionThreshold();
+        double d = 0;
+        ContactSet set = run.contacts;
+        for (int k = 0; k < set.count(); k++) {
+            d = Math.max(d, Math.abs(dyn.contactDistance[k] - r) / (thr * r));
+            if (set.at(k).mode == Mode.ROLLING) {
+                d = Math.max(d, dyn.contactSlipSpeed[k] / (thr * run.speedScale));
+            }
+        }
+        double qd = Math.abs(StateMapper.quaternionNorm(ys) - 1) / (Snapshots.QUATERNION_DRIFT * (thr / 1e-10));
+        return Math.max(d, qd);
+    }
+
+    /**
+     * Moves the centre onto every touched surface at once: Gauss–Newton on {@code d_i(c) = r} with
+     * {@code ∂d_i/∂c = n_iᵀ}, the least-norm step {@code Δc = Nᵀ (N Nᵀ)⁺ (r − d)} (pseudo-inverse, so two
+     * parallel walls at the same gap are handled), a few iterations (one for planes).
+     */
+    void projectPositionOnContacts(double ts, double[] ys) {
+        ContactSet set = run.contacts;
+        int count = set.count();
+        double[][] rows = new double[count][];
+        double[] res = new double[count];
+        double[] unit = {1, 1, 1};
+        for (int iter = 0; iter < 6; iter++) {
+            double worst = 0;
+            for (int k = 0; k < count; k++) {
+                ContactSlot s = set.at(k);
+                s.query(ts, run.centreOf(ys));
+                rows[k] = s.geo.normal.clone();
+                res[k] = r - s.geo.distance;
+                worst = Math.max(worst, Math.abs(res[k]));
+            }
+            if (worst <= 1e-15 * r) {
+                return;
+            }
+            double[] step = LeastNorm.solve(rows, unit, res);
+            for (int i = 0; i < 3; i++) {
+                ys[C + i] += step[i];
+            }
+        }
+    }
+
+    /**
+     * The velocity projection onto the constraints of every contact, orthogonal in the kinetic-energy metric
+     * ({@code M = diag(m 1, I 1)}): with {@code J} the stacked constraint rows (a rolling contact: its
+     * contact-point velocity {@code v + r n_i × ω}, three rows; a sliding contact: its normal speed
+     * {@code n_i·v}, one row), {@code ν ← ν − M⁻¹Jᵀ (J M⁻¹ Jᵀ)⁺ J ν}. This is the smallest change of kinetic
+     * energy that meets the constraints, the impulses {@code Jᵀλ} acting at the contact points (a sticking
+     * or plastic impulse per contact, solved together; the pseudo-inverse takes the squeeze between two
+     * rolling contacts as zero). The geometry must be queried at the state's centre.
+     *
+     * @return the impulse each contact received (N·s), per position
+     */
+    double[][] projectVelocityOnContacts(double[] ys) {
+        ContactSet set = run.contacts;
+        int count = set.count();
+        java.util.List<double[]> jr = new java.util.ArrayList<>();
+        java.util.List<Integer> owner = new java.util.ArrayList<>();
+        for (int k = 0; k < count; k++) {
+            ContactSlot s = set.at(k);
+            double[] n = s.geo.normal;
+            if (s.mode == Mode.SLIDING) {
+                jr.add(new double[] {n[0], n[1], n[2], 0, 0, 0});
+                owner.add(k);
+                continue;
+            }
+            for (int c = 0; c < 3; c++) {
+                double[] e = {c == 0 ? 1 : 0, c == 1 ? 1 : 0, c == 2 ? 1 : 0};
+                double[] en = new double[3];
+                Vec.cross(e, n, en);
+                jr.add(new double[] {e[0], e[1], e[2], r * en[0], r * en[1], r * en[2]});
+                owner.add(k);
+            }
+        }
+        double[][] rows = jr.toArray(new double[0][]);
+        double[] minv = {1 / m, 1 / m, 1 / m, 1 / inertia, 1 / inertia, 1 / inertia};
+        double[] b = new double[rows.length];
+        for (int p = 0; p < rows.length; p++) {
+            double[] row = rows[p];
+            b[p] = row[0] * ys[V] + row[1] * ys[V + 1] + row[2] * ys[V + 2]
+                + row[3] * ys[W] + row[4] * ys[W + 1] + row[5] * ys[W + 2];
+        }
+        double[] dnu = LeastNorm.solve(rows, minv, b);
+        for (int i = 0; i < 3; i++) {
+            ys[V + i] -= dnu[i];
+            ys[W + i] -= dnu[3 + i];
+        }
+        // the impulse on the ball is −M Δν: split by contact from the linear rows is not unique with a squeeze;
+        // report the total change of momentum on contact 0 (callers use the total)
+        double[][] imp = new double[count][3];
+        for (int i = 0; i < 3; i++) {
+            imp[0][i] = -m * dnu[i];
+        }
+        return imp;
+    }
+
+    /**
+     * Settles the modes of several contacts after a change (a contact reached, released, stuck, or a start):
+     * a rolling contact whose slip exceeds the stick threshold slides along its slip; the velocity is
+     * projected onto the constraints (the energy removed booked as sliding friction, as for the sticking
+     * impulse of one contact); then, repeatedly, a contact whose normal force is not positive is released
+     * (the most negative first) and a rolling contact that needs more friction than its grip slides against
+     * the friction it needed (the largest excess first), until every contact holds. With one contact left the
+     * single-contact engine takes over (rolling: the velocity is set to the no-slip {@code r ω × n}).
+     *
+     * @return the patch ids released on the way (no events are logged for them)
+     */
+    java.util.List<String> settleContacts() {
+        double[] y = run.y;
+        ContactSet set = run.contacts;
+        java.util.List<String> released = new java.util.ArrayList<>();
+        if (!set.multi() && set.count() == 1 && set.active().mode == Mode.SLIDING) {
+            // one sliding contact keeps its held direction in the right-hand side: the slot takes it over
+            System.arraycopy(dyn.slideDir0, 0, set.active().slideDir, 0, 3);
+        }
+        for (int k = 0; k < set.count(); k++) {
+            ContactSlot s = set.at(k);
+            s.query(run.t, run.centreOf(y));
+            if (s.mode == Mode.ROLLING) {
+                double[] sl = new double[3];
+                ContactKinematics.slip(r, y, V, y, W, s.geo.normal, sl);
+                double sp = Vec.norm(sl);
+                if (sp > run.stickEps) {
+                    for (int i = 0; i < 3; i++) {
+                        s.slideDir[i] = sl[i] / sp;
+                    }
+                    set.setMode(s, Mode.SLIDING);
+                }
+            }
+        }
+        for (int round = 0; round < 4 * ContactForceSolver.MAX_CONTACTS; round++) {
+            if (set.count() == 0) {
+                break;
+            }
+            projectPositionOnContacts(run.t, y);
+            for (int k = 0; k < set.count(); k++) {
+                set.at(k).query(run.t, run.centreOf(y));
+            }
+            double before = run.kinetic(y);
+            projectVelocityOnContacts(y);
+            y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] += before - run.kinetic(y);
+            if (!set.multi()) {
+                break;
+            }
+            dyn.phase = run.phase();
+            dyn.evaluate(run.t, y);
+            int worst = -1;
+            double low = 0;
+            for (int k = 0; k < set.count(); k++) {
+                if (dyn.contactNormal[k] <= low) {
+                    low = dyn.contactNormal[k];
+                    worst = k;
+                }
+            }
+            if (worst >= 0) {
+                ContactSlot s = set.at(worst);
+                released.add(s.id);
+                set.remove(s);
+                run.syncActive();
+                continue;
+            }
+            int slips = -1;
+            double excess = 1;
+            for (int k = 0; k < set.count(); k++) {
+                double gl = dyn.contactGrip[k];
+                if (set.at(k).mode == Mode.ROLLING && dyn.contactNeeded[k] > gl) {
+                    double ratio = gl > 0 ? dyn.contactNeeded[k] / gl : Double.POSITIVE_INFINITY;
+                    if (ratio > excess || slips < 0) {
+                        excess = ratio;
+                        slips = k;
+                    }
+                }
+            }
+            if (slips >= 0) {
+                slideAgainstNeeded(slips);
+                continue;
+            }
+            break;
+        }
+        finishSettle();
+        return released;
+    }
+
+    /** After a change of several contacts: one left is the single-contact engine's again. */
+    private void finishSettle() {
+        ContactSet set = run.contacts;
+        run.syncActive();
+        if (set.count() == 0) {
+            phaseTo(Phase.FLIGHT);
+            return;
+        }
+        if (!set.multi()) {
+            ContactSlot s = set.active();
+            // the single contact keeps its hold direction in the right-hand side
+            System.arraycopy(s.slideDir, 0, dyn.slideDir0, 0, 3);
+            Phase p = s.mode == Mode.SLIDING ? Phase.SLIDING : Phase.ROLLING;
+            phaseTo(p);
+            if (p == Phase.ROLLING) {
+                setDerivedVelocity();
+                // the grip test of the one contact left (its own rule watches only from above)
+                Phase q = contactPhaseAfterStick();
+                if (q != p) {
+                    phaseTo(q);
+                }
+            }
+            return;
+        }
+        phaseTo(set.phase());
+    }
+
+    /** Sets the global phase: at the start without a phase span (the run opens its first span after). */
+    private void phaseTo(Phase p) {
+        if (starting) {
+            run.setPhase(p);
+        } else {
+            run.changePhase(p);
+        }
+    }
+
+    /** Sets the contact at position k sliding against the friction rolling needed there. */
+    private void slideAgainstNeeded(int k) {
+        ContactSlot s = run.contacts.at(k);
+        double[] f = dyn.contactFriction[k];
+        double fn = Vec.norm(f);
+        if (fn > 0) {
+            for (int i = 0; i < 3; i++) {
+                s.slideDir[i] = -f[i] / fn;
+            }
+        } else {
+            double[] n = s.geo.normal;
+            double[] a = Math.abs(n[0]) < 0.9 ? new double[] {1, 0, 0} : new double[] {0, 1, 0};
+            Vec.cross(n, a, s.slideDir);
+            Vec.scale(s.slideDir, 1.0 / Vec.norm(s.slideDir));
+        }
+        run.contacts.setMode(s, Mode.SLIDING);
+    }
+
+    /**
+     * One contact of several ends: lift-off (its normal force fell to zero) or exit (its contact point left
+     * the patch); the event names that patch; the others settle ({@link #settleContacts}).
+     */
+    void release(ContactSlot s, EventKind kind, String edge, BallState before) {
+        run.contacts.remove(s);
+        run.syncActive();
+        settleContacts();
+        run.logOn(s.id, kind, before, null, Vector3D.ZERO, edge, null);
+    }
+
+    /** Slip onset at one contact of several: it slides against the friction rolling needed there. */
+    void startSliding(ContactSlot s, BallState before) {
+        dyn.phase = run.phase();
+        dyn.evaluate(run.t, run.y);
+        slideAgainstNeeded(run.contacts.positionOf(s));
+        run.changePhase(run.contacts.phase());
+        run.logOn(s.id, EventKind.SLIP, before, null, Vector3D.ZERO, null, null);
+    }
+
+    /**
+     * Stick at one contact of several: it is set rolling, and the velocity projection of
+     * {@link #settleContacts} removes the rest of its slip (and the grip test may send it sliding again, with
+     * no event, as for one contact).
+     */
+    void stickContact(ContactSlot s, BallState before) {
+        run.contacts.setMode(s, Mode.ROLLING);
+        double[] v0 = {run.y[V], run.y[V + 1], run.y[V + 2]};
+        settleContacts();
+        if (s.mode == Mode.ROLLING) {
+            Vector3D j = new Vector3D(m * (run.y[V] - v0[0]), m * (run.y[V + 1] - v0[1]), m * (run.y[V + 2] - v0[2]));
+            run.logOn(s.id, EventKind.STICK, before, null, j, null, null);
+        }
+    }
+
+    /**
+     * The ball, touching one or two patches, reaches another (design notes §9): with the relative normal speed
+     * {@code u = −n_j·v} at most the settle speed it is a gentle touch (event {@code touch}): the normal
+     * velocity into the wall is removed and the contact begins; faster, it is an impact (event {@code impact}):
+     * the impulse of one contact ({@link #impact}'s restitution and friction) at the new wall, then the
+     * velocity into the walls already touched removed by plastic impulses there (solved together,
+     * {@link #projectVelocityOnContacts}); when the rebound from the new wall is at most the settle speed the
+     * new contact begins, else the ball leaves it. Then the modes settle ({@link #settleContacts}).
+     * Only on patches that stand still ({@link ImpactRule#secondContactPossible}); should it be asked with a moving
+     * patch it fails with a {@link RunFailure} naming both patches.
+     */
+    void reach(ContactSlot j, BallState before) {
+        double[] y = run.y;
+        ContactSet set = run.contacts;
+        for (int k = 0; k < set.count(); k++) {
+            if (set.at(k).moving || j.moving) {
+                throw new RunFailure(String.format(Locale.ROOT,
+                    "the ball touching patch %s reached patch %s at t = %s s: several contacts at once are solved"
+                        + " only on patches that stand still (%s moves)",
+                    set.at(k).id, j.id, run.t, j.moving ? j.id : set.at(k).id));
+            }
+        }
+        if (run.phase() == Phase.ROLLING && !set.multi()) {
+            setDerivedVelocity();
+        }
+        j.query(run.t, run.centreOf(y));
+        double[] n = j.geo.normal.clone();
+        double vn = ContactKinematics.normalPart(y, V, n);
+        double before0 = run.kinetic(y);
+        Vector3D impulse;
+        EventKind kind;
+        boolean joins;
+        if (-vn <= run.settleSpeed) {
+            kind = EventKind.TOUCH;
+            double[] jn = {-m * vn * n[0], -m * vn * n[1], -m * vn * n[2]};
+            for (int i = 0; i < 3; i++) {
+                y[V + i] += jn[i] / m;
+            }
+            impulse = new Vector3D(jn[0], jn[1], jn[2]);
+            joins = true;
+        } else {
+            kind = EventKind.IMPACT;
+            double[] s = new double[3];
+            ContactKinematics.slip(r, y, V, y, W, n, s);
+            double e = j.law.restitution().orElse(0.0);
+            double jnMag = -(1 + e) * m * vn;
+            double f = -k * m / (1 + k);
+            double[] jt = {f * s[0], f * s[1], f * s[2]};
+            double[] w = {y[W], y[W + 1], y[W + 2]};
+            if (!j.contextReady) {
+                run.model.access().set(j.ctx, run.ball, j.geo, 0.0, Phase.ROLLING, new double[3], w, false);
+                j.contextReady = true;
+            }
+            run.model.access().set(j.ctx, run.ball, j.geo, jnMag, Phase.SLIDING, s, w, true);
+            double gripJ = j.law.gripLimit(j.ctx);
+            if (!(gripJ >= 0)) {
+                throw new RunFailure("contact law " + j.law.name() + " returned grip limit " + gripJ
+                    + " N·s at normal impulse " + jnMag + " N·s; it must be a number >= 0");
+            }
+            if (Vec.norm(jt) > gripJ) {
+                double slideJ = j.law.slidingFriction(j.ctx);
+                if (!(slideJ >= 0 && slideJ < Double.POSITIVE_INFINITY)) {
+                    throw new RunFailure("contact law " + j.law.name() + " returned sliding friction " + slideJ
+                        + " N·s at normal impulse " + jnMag + " N·s; it must be a number >= 0 and finite");
+                }
+                double sp = Vec.norm(s);
+                for (int i = 0; i < 3; i++) {
+                    jt[i] = sp > 0 ? -slideJ * s[i] / sp : 0.0;
+                }
+            }
+            double[] jv = {jnMag * n[0] + jt[0], jnMag * n[1] + jt[1], jnMag * n[2] + jt[2]};
+            double[] nxj = new double[3];
+            Vec.cross(n, jv, nxj);
+            for (int i = 0; i < 3; i++) {
+                y[V + i] += jv[i] / m;
+                y[W + i] -= r * nxj[i] / inertia;
+            }
+            // the walls already touched hold: no velocity into them (plastic impulses, solved together)
+            pressOnlyOutOf(y);
+            double vn1 = ContactKinematics.normalPart(y, V, n);
+            joins = vn1 <= run.settleSpeed;
+            impulse = new Vector3D(jv[0], jv[1], jv[2]);
+        }
+        run.impactLoss += before0 - run.kinetic(y);
+        if (joins) {
+            set.add(j, Mode.ROLLING);
+            double lossBefore = y[LOSS + LossKind.SLIDING_FRICTION.ordinal()];
+            settleContacts();
+            // the settling of a new contact is part of the impact's loss
+            double settled = y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] - lossBefore;
+            y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossBefore;
+            run.impactLoss += settled;
+        } else {
+            settleContacts();
+        }
+        run.logOn(j.id, kind, before, null, impulse, null, null);
+    }
+
+    /**
+     * After an impact from flight that left the ball in contact: any other still patch that the ball already
+     * touches (distance r within the contact tolerance, contact point on the patch) and moves into is reached
+     * at once ({@link #reach}), so that a ball landing where two walls meet (the bottom of a groove) does not
+     * start its contact segment inside the second wall, where no root of the impact function would be left.
+     *
+     * @param before the state before the impact (for the events)
+     */
+    void reachPressed(BallState before) {
+        if (run.slots.length < 2 || !run.phase().inContact() || run.compliance != null) {
+            return;
+        }
+        double tol = run.set.contactTolerance() * r;
+        for (ContactSlot s : run.slots) {
+            if (s.mode != Mode.APART || run.contacts.count() >= ContactForceSolver.MAX_CONTACTS
+                || !ImpactRule.secondContactPossible(run, s)) {
+                continue;
+            }
+            double[] full = run.y.clone();
+            if (run.phase() == Phase.ROLLING && !run.contacts.multi()) {
+                run.slot.query(run.t, run.centreOf(full));
+                ContactKinematics.rollingVelocity(run.slot, run.t, r, run.dyn.geo.normal, full);
+            }
+            try {
+                s.query(run.t, run.centreOf(full));
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                continue;
+            }
+            if (s.geo.distance - r <= tol && s.geo.patchMargin >= 0
+                && ContactKinematics.normalPart(full, V, s.geo.normal) <= 0) {
+                reach(s, before);
+            }
+        }
+    }
+
+    /**
+     * Removes any velocity into the walls already touched (contacts whose normal speed is negative after an
+     * impulse elsewhere), by the projection of {@link #projectVelocityOnContacts} restricted to their normal
+     * rows: the walls the ball moves away from are left alone.
+     */
+    private void pressOnlyOutOf(double[] y) {
+        ContactSet set = run.contacts;
+        int count = set.count();
+        java.util.List<double[]> into = new java.util.ArrayList<>();
+        for (int k = 0; k < count; k++) {
+            ContactSlot s = set.at(k);
+            s.query(run.t, run.centreOf(y));
+            if (ContactKinematics.normalPart(y, V, s.geo.normal) < 0) {
+                into.add(s.geo.normal.clone());
+            }
+        }
+        if (into.isEmpty()) {
+            return;
+        }
+        double[] v = {y[V], y[V + 1], y[V + 2]};
+        double[][] rows = into.toArray(new double[0][]);
+        double[] b = new double[rows.length];
+        for (int p = 0; p < rows.length; p++) {
+            b[p] = Vec.dot(rows[p], v);
+        }
+        // normal impulses act through the centre: Δv = −Nᵀ (N Nᵀ)⁺ N v, the spin is unchanged
+        double[] dv = LeastNorm.solve(rows, new double[] {1, 1, 1}, b);
+        for (int i = 0; i < 3; i++) {
+            y[V + i] -= dv[i];
+        }
+    }
+
     // ---------------------------------------------------------------- kinematics on the run state
 
     /** Slip velocity of the contact point, tangential part, from the state's v and ω (uses dyn.geo; allocates). */
@@ -471,6 +1000,10 @@ final class Transitions {
 
     /** Sets the velocity slot of the run's state to the no-slip velocity r ω × n. */
     void setDerivedVelocity() {
+        if (run.contacts.multi()) {
+            // several contacts integrate the velocity
+            return;
+        }
         double[] y = run.y;
         run.slot.query(run.t, run.centreOf(y));
         ContactKinematics.rollingVelocity(run.slot, run.t, r, dyn.geo.normal, y);
@@ -501,6 +1034,21 @@ final class Transitions {
      * stripped of its normal part (sliding).
      */
     double[] projected(double ts, double[] ys) {
+        if (run.contacts.multi()) {
+            // several contacts: the centre onto every surface, the quaternion normalised, the velocity onto
+            // every contact's constraints (the energy this changes is at the integration tolerance, not booked)
+            double[] p = ys.clone();
+            double qn = StateMapper.quaternionNorm(p);
+            for (int i = 0; i < 4; i++) {
+                p[Q + i] /= qn;
+            }
+            projectPositionOnContacts(ts, p);
+            for (int k = 0; k < run.contacts.count(); k++) {
+                run.contacts.at(k).query(ts, run.centreOf(p));
+            }
+            projectVelocityOnContacts(p);
+            return p;
+        }
         run.slot.query(ts, run.centreOf(ys));
         double[] p = ys.clone();
         double dr = r - dyn.geo.distance;

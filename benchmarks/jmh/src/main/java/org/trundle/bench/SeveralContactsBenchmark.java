@@ -1,0 +1,110 @@
+package org.trundle.bench;
+
+import java.util.concurrent.TimeUnit;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Level;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.trundle.contact.Coulomb;
+import org.trundle.core.Ball;
+import org.trundle.core.BallState;
+import org.trundle.core.EndReason;
+import org.trundle.core.Patch;
+import org.trundle.core.RunResult;
+import org.trundle.core.Simulation;
+import org.trundle.surfaces.Plane;
+import org.trundle.surfaces.VGroove;
+
+/**
+ * A run with two contacts at once against the same run with one (issue 12's cost target: a V-groove run at
+ * most twice a plane run of the same length and tolerance). A solid ball (r = 10 mm, m = 30 g, Coulomb
+ * μ = 0.5) rolls from rest for 0.5 s down a 10° slope: in a 60° V-groove (two plane walls, the
+ * several-contact solve on the full layout) and on a plane (the single-contact closed form on the rolling
+ * layout), at the default tolerance. Throughput in runs per second; the setup refuses to measure unless the
+ * groove run keeps both contacts rolling to the end and the plane run rolls to the end.
+ */
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.SECONDS)
+public class SeveralContactsBenchmark {
+    /** Simulated time of each run (s). */
+    static final double DURATION = 0.5;
+
+    /** The two runs. */
+    @State(Scope.Thread)
+    public static class Runs {
+        Simulation groove;
+        BallState grooveStart;
+        Simulation plane;
+        BallState planeStart;
+
+        /** Builds both runs and checks them once. */
+        @Setup(Level.Trial)
+        public void setUp() {
+            groove = grooveRun();
+            grooveStart = grooveStart(groove);
+            plane = planeRun();
+            planeStart = planeStart(plane);
+            check(groove.run(grooveStart, DURATION), "groove");
+            check(plane.run(planeStart, DURATION), "plane");
+        }
+    }
+
+    private static void check(RunResult r, String which) {
+        if (r.endReason() != EndReason.DURATION || !r.events().isEmpty()) {
+            throw new IllegalStateException(which + " run: " + r.endReason() + " " + r.events());
+        }
+    }
+
+    private static Vector3D slope() {
+        double theta = Math.toRadians(10);
+        return new Vector3D(9.81 * Math.sin(theta), 0, -9.81 * Math.cos(theta));
+    }
+
+    /** @return the groove scene: two plane walls of a 60° V along x, opening up */
+    static Simulation grooveRun() {
+        VGroove v = new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, Math.toRadians(60));
+        return Simulation.builder().ball(Ball.solid(0.01, 0.03)).patch(Patch.of("plus", v.plusWall()))
+            .patch(Patch.of("minus", v.minusWall())).law(new Coulomb(0.5, 0.5, 0.0)).gravity(slope()).build();
+    }
+
+    /** @param sim the groove scene @return the ball at rest in the groove, touching both walls */
+    static BallState grooveStart(Simulation sim) {
+        VGroove v = new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, Math.toRadians(60));
+        return sim.rollingStart(v.restingCentre(0.01, 0), Vector3D.ZERO);
+    }
+
+    /** @return the plane: z = 0 under the same tilted gravity */
+    static Simulation planeRun() {
+        return Simulation.builder().ball(Ball.solid(0.01, 0.03)).surface(new Plane(Vector3D.ZERO, Vector3D.PLUS_K))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(slope()).build();
+    }
+
+    /** @param sim the plane @return the ball at rest on the plane */
+    static BallState planeStart(Simulation sim) {
+        return sim.rollingStart(new Vector3D(0, 0, 0.01), Vector3D.ZERO);
+    }
+
+    /**
+     * @param s the runs
+     * @return the result
+     */
+    @Benchmark
+    public RunResult grooveTwoContacts(Runs s) {
+        return s.groove.run(s.grooveStart, DURATION);
+    }
+
+    /**
+     * @param s the runs
+     * @return the result
+     */
+    @Benchmark
+    public RunResult planeOneContact(Runs s) {
+        return s.plane.run(s.planeStart, DURATION);
+    }
+}

@@ -1,0 +1,244 @@
+package org.trundle.physics;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.trundle.contact.Coulomb;
+import org.trundle.core.Ball;
+import org.trundle.core.BallState;
+import org.trundle.core.ContactLaw;
+import org.trundle.core.EndReason;
+import org.trundle.core.EventKind;
+import org.trundle.core.Patch;
+import org.trundle.core.Phase;
+import org.trundle.core.RunEvent;
+import org.trundle.core.RunResult;
+import org.trundle.core.Sample;
+import org.trundle.core.SampleContact;
+import org.trundle.core.Simulation;
+import org.trundle.core.SolverSettings;
+import org.trundle.core.SurfaceMotion;
+import org.trundle.surfaces.Rails;
+import org.trundle.surfaces.VGroove;
+
+/**
+ * Full runs with two contacts at once (issue 12): a ball rolling down two parallel rails and down a V-groove,
+ * sliding down a groove, the energy budget, and a ball dropped into a groove that gets its second contact on
+ * the way. Frame: x along the rails or groove, z up from the apex plane; the slope is given by tilting
+ * gravity, {@code g = (g sinθ, 0, −g cosθ)}.
+ *
+ * <p>Tolerances: the runs use the integrator tolerance 1e-11, and the velocity after 0.3 s of uniform
+ * acceleration is compared with {@code a t}; its error is the integration error of a smooth motion, about the
+ * tolerance times a few, so 1e-9 relative has two orders of margin and would catch any wrong force term
+ * (the rolling radius enters at order one).
+ */
+class SeveralContactsTest {
+    private static final double R = 0.01;
+    private static final double M = 0.03;
+    private static final double K = 0.4;
+    private static final double G = 9.81;
+
+    private static Vector3D gravity(double theta) {
+        return new Vector3D(G * Math.sin(theta), 0, -G * Math.cos(theta));
+    }
+
+    private static Simulation scene(Vector3D gravity, ContactLaw law, org.trundle.core.Surface a,
+                                    org.trundle.core.Surface b) {
+        return Simulation.builder().ball(Ball.of(R, M, K)).patch(Patch.of("plus", a)).patch(Patch.of("minus", b))
+            .law(law).gravity(gravity)
+            .settings(SolverSettings.defaults().withTolerance(1e-11).withSampleInterval(0.01)).build();
+    }
+
+    private static VGroove groove60() {
+        return new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, Math.toRadians(60));
+    }
+
+    /** Samples with two contacts, in time order. */
+    private static List<Sample> twoContactSamples(List<Sample> all) {
+        List<Sample> out = new ArrayList<>();
+        for (Sample s : all) {
+            if (s.touches().size() == 2) {
+                out.add(s);
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Two parallel rails {@code S} apart, rail diameter 6 mm, slope 12°: the ball rolls about the chord through
+     * both contacts, {@code r_e = √(r² − d²/4)}, so {@code a = g sinθ / (1 + k r²/r_e²)} (energy method; the
+     * textbook result for a ball on rails, from memory: J. L. Meriam and L. G. Kraige, Engineering Mechanics:
+     * Dynamics, plane motion of rigid bodies), and by statics across the rails each carries
+     * {@code N = m g cosθ r/(2 r_e)} (each rail's force along its normal in the cross-section); the energy is
+     * conserved (rolling without slip does no work) to 1e-8 of the energy scale.
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {0.0, 0.3})
+    void ballOnRailsRollsAtTheTextbookAcceleration(double v0) {
+        double theta = Math.toRadians(12);
+        Rails rails = new Rails(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, 0.016, 0.006);
+        Simulation sim = scene(gravity(theta), new Coulomb(0.5, 0.5, 0.0), rails.plusRail(), rails.minusRail());
+        double re = rails.rollingRadius(R);
+        double d = rails.contactSpacing(R);
+        assertEquals(Math.sqrt(R * R - d * d / 4), re, 1e-15);
+        List<Sample> samples = new ArrayList<>();
+        double t = 0.3;
+        RunResult res = sim.run(sim.rollingStart(rails.restingCentre(R, 0), new Vector3D(v0, 0, 0)), t,
+            samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        assertTrue(res.events().isEmpty(), res.events().toString());
+        double a = G * Math.sin(theta) / (1 + K * R * R / (re * re));
+        assertEquals(v0 + a * t, res.endState().velocity().getX(), 1e-9 * a * t);
+        assertEquals(v0 * t + 0.5 * a * t * t, res.endState().centre().getX(), 1e-9 * a * t * t);
+        double n = M * G * Math.cos(theta) * R / (2 * re);
+        List<Sample> two = twoContactSamples(samples);
+        assertEquals(samples.size(), two.size());
+        for (Sample s : two) {
+            for (SampleContact c : s.touches()) {
+                assertEquals(Phase.ROLLING, c.mode());
+                assertEquals(n, c.normalForce(), 1e-9 * n, c.patch() + " at t = " + s.time());
+            }
+            assertEquals(List.of("plus", "minus"), s.contacts());
+        }
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
+     * A V-groove of included angle 60° on a 10° slope with a solid ball (k = 2/5): the same law with
+     * {@code r_e = r sin 30°}, {@code a = g sinθ/(1 + k/sin²30°) = g sinθ/2.6}, and each wall carries
+     * {@code N = m g cosθ/(2 sin 30°)} (statics across the groove; common practice).
+     */
+    @Test
+    void vGrooveRollsAboutTheChord() {
+        double theta = Math.toRadians(10);
+        VGroove v = groove60();
+        Simulation sim = scene(gravity(theta), new Coulomb(0.5, 0.5, 0.0), v.plusWall(), v.minusWall());
+        List<Sample> samples = new ArrayList<>();
+        double t = 0.3;
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), t, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        double a = G * Math.sin(theta) / 2.6;
+        assertEquals(a * t, res.endState().velocity().getX(), 1e-9 * a * t);
+        assertEquals(v.rollingRadius(R), R * Math.sin(Math.toRadians(30)), 1e-15);
+        double n = M * G * Math.cos(theta) / (2 * Math.sin(Math.toRadians(30)));
+        for (Sample s : twoContactSamples(samples)) {
+            for (SampleContact c : s.touches()) {
+                assertEquals(n, c.normalForce(), 1e-9 * n);
+            }
+        }
+        assertEquals(samples.size(), twoContactSamples(samples).size());
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
+     * Slip onset per wall in the 60° groove on a 10° slope: rolling needs on each wall the friction
+     * {@code m g sinθ (q/(1+q))/2} ({@code q = k/sin²γ}) against {@code N = m g cosθ/(2 sin γ)}, so it holds while
+     * {@code μ_s ≥ tanθ q sinγ/(1 + q)} (derived from the rolling solution above). Just above that μ_s the ball
+     * rolls with no event; just below, both walls slip at the start, and the ball slides with
+     * {@code a = g (sinθ − μ_k cosθ / sin(α/2))}, {@code α} the included angle (each wall's Coulomb friction
+     * {@code μ_k N} against the slip down the groove; derived here), with the slip growing, and the energy budget
+     * closes with the sliding work counted.
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {1.01, 0.5})
+    void slipStartsWhereTheNeededFrictionExceedsTheGripOnEachWall(double factor) {
+        double theta = Math.toRadians(10);
+        double gamma = Math.toRadians(30);
+        double q = K / (Math.sin(gamma) * Math.sin(gamma));
+        double critical = Math.tan(theta) * q * Math.sin(gamma) / (1 + q);
+        double mu = critical * factor;
+        VGroove v = groove60();
+        Simulation sim = scene(gravity(theta), new Coulomb(mu, mu, 0.0), v.plusWall(), v.minusWall());
+        double t = 0.3;
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), t, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        double a;
+        if (factor > 1) {
+            assertTrue(res.events().isEmpty(), res.events().toString());
+            a = G * Math.sin(theta) / 2.6;
+            assertEquals(Phase.ROLLING, res.endState().phase());
+        } else {
+            List<RunEvent> slips = res.eventsOf(EventKind.SLIP);
+            assertEquals(2, slips.size(), res.events().toString());
+            assertEquals(0.0, slips.get(0).time(), 0.0);
+            assertEquals(List.of("plus", "minus"), List.of(slips.get(0).patch(), slips.get(1).patch()));
+            assertEquals(Phase.SLIDING, res.endState().phase());
+            a = G * (Math.sin(theta) - mu * Math.cos(theta) / Math.sin(gamma));
+            for (SampleContact c : samples.get(samples.size() - 1).touches()) {
+                assertEquals(Phase.SLIDING, c.mode());
+                double n = M * G * Math.cos(theta) / (2 * Math.sin(gamma));
+                assertEquals(n, c.normalForce(), 1e-9 * n);
+                assertEquals(mu * n, c.frictionForce().getNorm(), 1e-9 * n);
+            }
+        }
+        assertEquals(a * t, res.endState().velocity().getX(), 1e-9 * a * t);
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+        if (factor < 1) {
+            assertTrue(res.energy().slidingFrictionLoss() > 0);
+        }
+    }
+
+    /**
+     * A ball dropped into the groove off its centre line lands on one wall (impact on that patch), rolls or
+     * slides down it, reaches the other wall (a second contact: an impact or a touch on that patch) and then
+     * rolls with both contacts at {@code a = g sinθ/2.6} along the groove (as above). Dropped on the centre
+     * line it meets both walls at the same instant: the second contact is taken at once (no penetration).
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {-0.004, 0.0, 0.003})
+    void ballDroppedIntoAGrooveGetsItsSecondContact(double offset) {
+        double theta = Math.toRadians(10);
+        VGroove v = groove60();
+        Simulation sim = scene(gravity(theta), new Coulomb(0.5, 0.4, 0.0), v.plusWall(), v.minusWall());
+        Vector3D rest = v.restingCentre(R, 0);
+        BallState drop = BallState.flying(rest.add(new Vector3D(0, offset, 0.01)), Vector3D.ZERO, Vector3D.ZERO);
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(drop, 0.6, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        List<RunEvent> events = res.events();
+        assertTrue(events.size() >= 2, events.toString());
+        assertEquals(EventKind.IMPACT, events.get(0).kind(), events.toString());
+        String first = events.get(0).patch();
+        RunEvent second = events.stream().filter(e -> (e.kind() == EventKind.IMPACT || e.kind() == EventKind.TOUCH)
+            && !e.patch().equals(first)).findFirst().orElseThrow(() -> new AssertionError(events.toString()));
+        assertTrue(offset == 0 ? second.time() == events.get(0).time() : second.time() > events.get(0).time());
+        List<Sample> two = twoContactSamples(samples);
+        assertTrue(two.size() > 10, "samples with two contacts: " + two.size());
+        // the last samples roll with both contacts at the groove's acceleration
+        Sample p = two.get(two.size() - 11);
+        Sample q = two.get(two.size() - 1);
+        double a = (q.state().velocity().getX() - p.state().velocity().getX()) / (q.time() - p.time());
+        assertEquals(G * Math.sin(theta) / 2.6, a, 1e-9 * G);
+        assertEquals(0.0, q.state().velocity().getY(), 1e-9);
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
+     * Several contacts are solved only on patches that stand still: a ball at rest in a groove whose second wall
+     * turns (however slowly) keeps one contact, on the first wall of the scene, as with one contact at a time
+     * (the limit the README states); its samples list that one patch.
+     */
+    @Test
+    void aMovingPatchIsNotTakenAsASecondContact() {
+        VGroove v = groove60();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K)).patch(Patch.of("plus", v.plusWall()))
+            .patch(Patch.of("minus", v.minusWall()).withMotion(SurfaceMotion.rotation(Vector3D.PLUS_K, Vector3D.ZERO,
+                1e-3)))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(0.1))
+            .settings(SolverSettings.defaults().withSampleInterval(0.01)).build();
+        List<Sample> samples = new ArrayList<>();
+        sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), 0.05, samples::add);
+        for (Sample s : samples) {
+            assertTrue(s.touches().size() <= 1, s.touches().toString());
+        }
+        assertEquals(List.of("plus"), samples.get(0).contacts());
+    }
+}
