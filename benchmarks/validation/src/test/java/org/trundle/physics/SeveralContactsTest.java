@@ -222,23 +222,67 @@ class SeveralContactsTest {
     }
 
     /**
-     * Several contacts are solved only on patches that stand still: a ball at rest in a groove whose second wall
-     * turns (however slowly) keeps one contact, on the first wall of the scene, as with one contact at a time
-     * (the limit the README states); its samples list that one patch.
+     * A groove wall that moves (design notes §9): the plus wall slides along the groove at {@code V} like a belt,
+     * the minus wall stands still. Rolling without slip on both, the ball's centre moves at {@code V/2} plus the
+     * still groove's motion (the contact points move at {@code V} and 0; the constraints differentiated are
+     * those of the still groove, since a plane translating at constant velocity adds no term), so
+     * {@code v_x(t) = V/2 + g sinθ t/2.6}; the energy budget closes with the belt's drive work counted.
      */
     @Test
-    void aMovingPatchIsNotTakenAsASecondContact() {
+    void aBeltWallAndAStillWallCarryTheBallAtHalfTheBeltSpeed() {
+        double theta = Math.toRadians(10);
+        double belt = 0.2;
         VGroove v = groove60();
-        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K)).patch(Patch.of("plus", v.plusWall()))
-            .patch(Patch.of("minus", v.minusWall()).withMotion(SurfaceMotion.rotation(Vector3D.PLUS_K, Vector3D.ZERO,
-                1e-3)))
-            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(0.1))
-            .settings(SolverSettings.defaults().withSampleInterval(0.01)).build();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus", v.plusWall()).withMotion(SurfaceMotion.translation(new Vector3D(belt, 0, 0))))
+            .patch(Patch.of("minus", v.minusWall())).law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11).withSampleInterval(0.01)).build();
         List<Sample> samples = new ArrayList<>();
-        sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), 0.05, samples::add);
+        double t = 0.3;
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), new Vector3D(belt / 2, 0, 0)), t,
+            samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        assertTrue(res.events().isEmpty(), res.events().toString());
+        double a = G * Math.sin(theta) / 2.6;
+        assertEquals(belt / 2 + a * t, res.endState().velocity().getX(), 1e-9 * (belt + a * t));
         for (Sample s : samples) {
-            assertTrue(s.touches().size() <= 1, s.touches().toString());
+            assertEquals(2, s.touches().size());
         }
-        assertEquals(List.of("plus"), samples.get(0).contacts());
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
+     * A groove on a carriage accelerating at {@code A} along the groove: relative to the groove the ball rolls as
+     * under the gravity {@code g − A} (d'Alembert), so in the ground frame {@code a = A + (g sinθ − A)/2.6}; this
+     * checks the moving patches' constraint terms ({@code β = A} for a translating wall); the budget closes with
+     * the carriage's drive work.
+     */
+    @Test
+    void aGrooveOnAnAcceleratingCarriage() {
+        double theta = Math.toRadians(10);
+        double acc = 0.8;
+        SurfaceMotion carriage = new SurfaceMotion() {
+            @Override
+            public void at(double time, org.trundle.core.MotionState out) {
+                out.setIdentity();
+                out.offset[0] = 0.5 * acc * time * time;
+                out.velocity[0] = acc * time;
+                out.acceleration[0] = acc;
+            }
+        };
+        VGroove v = groove60();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))
+            .patch(Patch.of("minus", v.minusWall()).withMotion(carriage))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11)).build();
+        double t = 0.3;
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), t);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        assertTrue(res.events().isEmpty(), res.events().toString());
+        double a = acc + (G * Math.sin(theta) - acc) / 2.6;
+        assertEquals(a * t, res.endState().velocity().getX(), 1e-9 * a * t);
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+        assertTrue(res.energy().driveWork() != 0);
     }
 }
