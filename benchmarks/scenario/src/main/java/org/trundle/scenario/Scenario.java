@@ -12,6 +12,7 @@ import org.trundle.core.Ball;
 import org.trundle.core.BallState;
 import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
+import org.trundle.core.Integrator;
 import org.trundle.core.Material;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
@@ -42,7 +43,7 @@ public record Scenario(JsonNode document, String description, Simulation simulat
     List<String> warnings, StartPlacement placement) {
     /** Keys allowed at the top level. */
     static final List<String> TOP_KEYS = List.of("description", "ball", "surface", "surfaces", "contact", "gravity", "start", "run",
-        "sweep");
+        "sweep", "solver");
 
     /** Default gravity (m/s²): standard gravity, downward along z. */
     static final Vector3D DEFAULT_GRAVITY = new Vector3D(0, 0, -9.81);
@@ -105,6 +106,9 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         if (run.has("max_check_interval")) {
             set = set.withMaxCheckInterval(run.positive("max_check_interval", "s"));
         }
+        if (root.has("solver")) {
+            set = solver(root.section("solver"), set);
+        }
         Simulation sim;
         try {
             Simulation.Builder b = Simulation.builder().ball(ball).law(law).gravity(gravity).settings(set)
@@ -123,6 +127,33 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         BallState start = (placement == null ? startSpec : startSpec.at(placement.centre())).state(sim);
         List<String> warnings = Plausibility.warnings(doc, ball.radius(), ball.mass(), gravity);
         return new Scenario(doc, description, sim, start, duration, List.copyOf(warnings), placement);
+    }
+
+    /**
+     * The integration method: {@code "solver": {"integrator": "symmetric", "step": 1e-3, "order": 4}} chooses
+     * the symmetric projection method for long conservative runs ({@link Integrator#SYMMETRIC_PROJECTION})
+     * with its fixed step (s) and order (2, 4 or 6); {@code "integrator": "dormand-prince"} is the default.
+     */
+    private static SolverSettings solver(Section s, SolverSettings set) {
+        s.allow("integrator", "step", "order");
+        String name = s.choice("integrator", List.of(Integrator.DORMAND_PRINCE.label(),
+            Integrator.SYMMETRIC_PROJECTION.label()));
+        SolverSettings out = set.withIntegrator(Integrator.ofLabel(name));
+        if (s.has("step")) {
+            out = out.withFixedStep(s.positive("step", "s"));
+        }
+        if (s.has("order")) {
+            double order = s.number("order", "");
+            if (order != 2 && order != 4 && order != 6) {
+                throw new ScenarioException(s.where("order") + " must be 2, 4 or 6, got " + order);
+            }
+            out = out.withSymmetricOrder((int) order);
+        }
+        if (out.integrator() == Integrator.DORMAND_PRINCE && (s.has("step") || s.has("order"))) {
+            throw new ScenarioException(s.where(s.has("step") ? "step" : "order") + " applies to the symmetric"
+                + " integrator only; set " + s.where("integrator") + " to \"symmetric\" or leave it out");
+        }
+        return out;
     }
 
     private static Ball ball(Section s) {

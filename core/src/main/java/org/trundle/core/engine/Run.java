@@ -15,6 +15,7 @@ import org.trundle.core.BallState;
 import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EventKind;
+import org.trundle.core.Integrator;
 import org.trundle.core.Phase;
 import org.trundle.core.PhaseSpan;
 import org.trundle.core.RunEvent;
@@ -90,6 +91,13 @@ final class Run {
     /** Drive work received in impulses (impacts, sticking, settling) from a moving patch (J). */
     double impulseDrive;
     long steps;
+    /**
+     * Fixed step (s) of the symmetric integrator for rolling and flight segments, or 0 for Dormand–Prince
+     * throughout (see {@code Segment#symmetricApplies}).
+     */
+    final double fixedStep;
+    /** The symmetric integrator's base method. */
+    final MidpointComposition composition;
     /** Step size (s) the next segment starts with, after a projection restart; 0: Hipparchus' own estimate. */
     double restartStep;
     int sampleIndex;
@@ -128,6 +136,8 @@ final class Run {
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
         this.dyn.stageObserver = snapshots::stageAtStepEnd;
+        this.fixedStep = set.integrator() == Integrator.SYMMETRIC_PROJECTION ? set.fixedStep() : 0.0;
+        this.composition = MidpointComposition.ofOrder(set.symmetricOrder());
     }
 
     /**
