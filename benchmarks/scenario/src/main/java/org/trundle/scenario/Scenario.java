@@ -75,6 +75,11 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         Optional<Material[]> materials = wallLoadMaterials(root);
         List<Patch> patches = SceneFactory.patches(root, materials);
         Section contactSection = root.section("contact");
+        if (root.has("surfaces") && contactSection.bool("spin_creep", false)) {
+            // spin creep needs each wall's material: the scenario's contact becomes each patch's own law
+            patches = spinCreepPerPatch(root, contactSection.without("compliant"), patches);
+            materials = sceneMaterials(root).map(m -> new Material[] {m.getKey(), m.getValue().values().iterator().next()});
+        }
         ContactLaw law = ContactFactory.create(contactSection.without("compliant"), materials);
         Compliance compliance = compliance(root, contactSection, law);
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
@@ -247,6 +252,31 @@ public record Scenario(JsonNode document, String description, Simulation simulat
                 + " (surfaces[].material); none is given");
         }
         return Optional.of(Map.entry(material(ball.section("material")), walls));
+    }
+
+    /**
+     * In a scene, the scenario's {@code contact} with {@code spin_creep: true} built for each patch that has no
+     * {@code contact} of its own, with {@code ball.material} and that patch's {@code material} (refused, naming the
+     * patch, where one is missing).
+     */
+    private static List<Patch> spinCreepPerPatch(Section root, Section contact, List<Patch> patches) {
+        Map<String, Material> walls = sceneMaterials(root).map(Map.Entry::getValue).orElse(Map.of());
+        Material ballMaterial = root.section("ball").has("material")
+            ? material(root.section("ball").section("material")) : null;
+        List<Patch> out = new java.util.ArrayList<>();
+        for (Patch p : patches) {
+            if (p.law() != null) {
+                out.add(p);
+                continue;
+            }
+            Material wall = walls.get(p.id());
+            if (ballMaterial == null || wall == null) {
+                throw new ScenarioException("contact.spin_creep = true in a scene needs ball.material and the material"
+                    + " of every patch without a contact of its own; patch \"" + p.id() + "\" has none");
+            }
+            out.add(p.withLaw(ContactFactory.create(contact, Optional.of(new Material[] {ballMaterial, wall}))));
+        }
+        return out;
     }
 
     /** A material from {@code {"youngs_modulus": Pa, "poisson_ratio": ...}}. */
