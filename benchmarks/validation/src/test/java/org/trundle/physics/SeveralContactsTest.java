@@ -285,4 +285,43 @@ class SeveralContactsTest {
         assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
         assertTrue(res.energy().driveWork() != 0);
     }
+
+    /**
+     * Two contacts on a turning patch: a scene of two coincident turntables (the same plane, the same rotation)
+     * touched at one point, so that the two contacts' constraints coincide (a system singular beyond the
+     * squeeze modes, solved for the minimum-norm forces) and every term of a rotating patch enters the
+     * constraints ({@code Ω × n}, {@code A} with the centripetal and Coriolis parts). The ball must move as on one
+     * turntable: its velocity turns at {@code kΩ/(1+k)} about the centre {@code c₀ + ẑ × v₀/(kΩ/(1+k))} (W. Weltner,
+     * Am. J. Phys. 47 (1979) 984; from memory; the same check as the one-contact turntable), to 1e-9 of the speed
+     * and of the orbit radius over a quarter orbit, with both contacts listed in every sample.
+     */
+    @Test
+    void twoContactsOnATurntableOrbitAsOne() {
+        double omega = 3.0;
+        double k = 0.4;
+        Vector3D origin = new Vector3D(0.02, -0.01, 0);
+        SurfaceMotion turn = SurfaceMotion.rotation(Vector3D.PLUS_K, origin, omega);
+        org.trundle.surfaces.Plane table = new org.trundle.surfaces.Plane(Vector3D.ZERO, Vector3D.PLUS_K);
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, k)).patch(Patch.of("table", table).withMotion(turn))
+            .patch(Patch.of("twin", table).withMotion(turn)).law(new org.trundle.contact.PureRolling())
+            .gravity(new Vector3D(0, 0, -G)).settings(SolverSettings.defaults().withSampleInterval(0.05)).build();
+        Vector3D c0 = new Vector3D(0.05, 0.01, R);
+        Vector3D v0 = new Vector3D(-0.03, 0.08, 0);
+        double rate = k * omega / (1 + k);
+        Vector3D centre = c0.add(Vector3D.crossProduct(Vector3D.PLUS_K, v0).scalarMultiply(1 / rate));
+        double radius = v0.getNorm() / Math.abs(rate);
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(sim.rollingStart(c0, v0), 0.5 * Math.PI / rate, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        assertTrue(res.events().isEmpty(), res.events().toString());
+        for (Sample s : samples) {
+            assertEquals(2, s.touches().size());
+            org.hipparchus.geometry.euclidean.threed.Rotation rot = new org.hipparchus.geometry.euclidean.threed.Rotation(
+                Vector3D.PLUS_K, rate * s.time(), org.hipparchus.geometry.euclidean.threed.RotationConvention.VECTOR_OPERATOR);
+            assertEquals(0, s.state().velocity().subtract(rot.applyTo(v0)).getNorm(), 1e-9 * v0.getNorm());
+            assertEquals(0, s.state().centre().subtract(centre.add(rot.applyTo(c0.subtract(centre)))).getNorm(),
+                1e-9 * radius);
+        }
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
 }
