@@ -12,6 +12,7 @@ import org.trundle.core.Material;
 import org.trundle.core.MotionState;
 import org.trundle.core.Patch;
 import org.trundle.core.Sample;
+import org.trundle.core.SampleContact;
 import org.trundle.core.Simulation;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceMotion;
@@ -34,9 +35,9 @@ import org.trundle.core.SurfaceMotion;
  * <p>The curvatures are those of each patch's wall at its contact, from the patch's geometry at the sample's
  * centre (a moving patch is queried at its pose at the sample's time; curvatures do not change under a rigid
  * motion, the ellipse's axes turn with the patch). The forces of a contact are the sample's: a sample touching
- * one patch carries that contact's normal force and friction force ({@link Sample#normalForce()},
- * {@link Sample#frictionForce()}). A sample touching several patches at once must carry one force per contact;
- * the {@code Sample} of this version carries one, so such a sample is refused rather than split by guess.
+ * its contacts' own forces and modes ({@link Sample#touches()}: a ball in a V-groove or on two rails gives one
+ * load per wall). A sample made by hand without per-contact data is taken as on the one patch of a calculator made
+ * for one patch, and refused otherwise rather than split by guess.
  *
  * <p>Not thread-safe (a geometry workspace per patch); make one per run.
  */
@@ -147,41 +148,40 @@ public final class WallLoads {
 
     /**
      * The loads of every contact of a sample on a patch with a material, in the order the sample lists its
-     * contacts.
+     * contacts ({@link Sample#touches()}: each contact's own normal and friction force and mode).
      *
      * @param s a sample of a run on these patches
      * @return one load per such contact that presses with a positive force; empty in flight
-     * @throws IllegalArgumentException for a sample touching several patches at once (it carries one force)
+     * @throws IllegalArgumentException for a sample without per-contact data that cannot be assigned to one patch
      */
     public List<WallLoad> loads(Sample s) {
-        if (s.contactPoint() == null || !(s.normalForce() > 0)) {
-            return List.of();
+        List<SampleContact> touches = s.touches();
+        if (touches.isEmpty()) {
+            if (s.contactPoint() == null || !(s.normalForce() > 0)) {
+                return List.of();
+            }
+            if (!onePatchRun) {
+                throw new IllegalArgumentException("the sample at t = " + s.time() + " s touches " + s.contacts()
+                    + " but carries no per-contact forces (Sample.touches); the loads of each wall need them");
+            }
+            // a sample made by hand without patch ids, on the one patch of this calculator
+            Wall w = walls.get(patch());
+            return List.of(load(s, w, s.normalForce(), s.frictionForce(), s.state().phase().label()));
         }
-        List<String> ids = s.contacts();
-        String id;
-        if (onePatchRun && ids.size() <= 1) {
-            id = patch();
-        } else if (ids.isEmpty()) {
-            throw new IllegalArgumentException("a sample without patch ids cannot be assigned to one of the patches "
-                + walls.keySet());
-        } else if (ids.size() == 1) {
-            id = ids.get(0);
-        } else {
-            throw new IllegalArgumentException("the sample at t = " + s.time() + " s touches " + ids
-                + " at once but carries one contact force; per-contact forces are needed for the loads of each wall");
+        List<WallLoad> out = new ArrayList<>(touches.size());
+        for (SampleContact c : touches) {
+            Wall w = onePatchRun && touches.size() == 1 ? walls.get(patch()) : walls.get(c.patch());
+            if (w != null && c.normalForce() > 0) {
+                out.add(load(s, w, c.normalForce(), c.frictionForce(), c.mode().label()));
+            }
         }
-        Wall w = walls.get(id);
-        if (w == null) {
-            return List.of();
-        }
-        return List.of(load(s, w, s.normalForce(), s.frictionForce()));
+        return out;
     }
 
-    private WallLoad load(Sample s, Wall w, double normalForce, Vector3D friction) {
+    private WallLoad load(Sample s, Wall w, double normalForce, Vector3D friction, String mode) {
         w.query(s.time(), s.state().centre().toArray());
         HertzPatch h = HertzContact.solve(normalForce, ballRadius, ball, w.geo, w.material);
-        return new WallLoad(s.time(), w.id, s.state().phase().label(), normalForce,
-            friction == null ? 0.0 : friction.getNorm(), h);
+        return new WallLoad(s.time(), w.id, mode, normalForce, friction == null ? 0.0 : friction.getNorm(), h);
     }
 
     /**

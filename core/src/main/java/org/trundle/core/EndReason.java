@@ -12,7 +12,11 @@ public enum EndReason {
     BUDGET,
     /** The geometry stopped the run: the ball no longer fits the surface where it touches it, or
      *  reached a point where the surface is undefined (see {@link RunResult#message()}). */
-    GEOMETRY;
+    GEOMETRY,
+    /** The ball is in flight on a path that provably meets no patch again (free flight under
+     *  gravity alone, every patch still and bounded in the direction it flies off; see
+     *  {@link Surface#extent()}): the run ends there instead of flying through empty space. */
+    LEFT_FOR_GOOD;
 
     /** @return the lower-case name used in files */
     public String label() {

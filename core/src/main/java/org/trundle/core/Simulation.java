@@ -103,7 +103,8 @@ public final class Simulation {
         }
         for (Patch p : patches) {
             double kmax = p.surface().maxConcaveCurvature();
-            if (Double.isFinite(kmax) && ball.radius() * kmax >= 1.0) {
+            // NaN: unknown in advance, checked during the run; +∞: no ball fits (Surface#maxConcaveCurvature)
+            if (!Double.isNaN(kmax) && !(ball.radius() * kmax < 1.0)) {
                 throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
                     "ball of radius %s m does not fit surface %s: r*kappa_max = %s >= 1 "
                         + "(smallest concave radius of curvature %s m)",
@@ -262,8 +263,10 @@ public final class Simulation {
 
     /**
      * A consistent rolling start at time 0 with a given spin about the normal. A centre touching several
-     * patches that stand still (a ball in a V-groove, on two rails) gets the spin that rolls without slip at
-     * every contact and {@code normalSpin} is not used (the contacts fix the spin). On a moving surface
+     * patches (a ball in a V-groove, on two rails, between two races) gets the spin that rolls without slip at
+     * every contact and {@code normalSpin} is not used (the contacts fix the spin); when the velocity allows no
+     * such spin (a ball at rest between a turning race and a still one) it rolls on the patch touched most
+     * closely and the run starts the others sliding. On a moving surface
      * the spin rolls relative to the surface under the ball: {@code ω = Ω + (n × (v − u(c)))/r + ω_n n},
      * so that the contact point moves with the surface, {@code v − r ω × n = u(p)}, with {@code Ω} the
      * surface's spin and {@code u} its velocity field at time 0.
@@ -295,9 +298,15 @@ public final class Simulation {
             throw new IllegalArgumentException("centre " + centre + " has no contact normal: " + failure.getMessage(),
                 failure);
         }
-        java.util.List<Vector3D> normals = touchedNormals(centre);
-        if (normals.size() > 1) {
-            return severalContactsStart(centre, velocity, normals);
+        java.util.List<Patch> touchedPatches = new java.util.ArrayList<>();
+        java.util.List<ContactGeometry> several = touchedGeometry(centre, touchedPatches);
+        if (several.size() > 1) {
+            BallState s = severalContactsStart(centre, velocity, several, touchedPatches);
+            if (s != null) {
+                return s;
+            }
+            // the velocity cannot roll on every patch: roll on the one touched most closely (the run's start
+            // lets the others slip)
         }
         SurfaceMotion motion = touched.motion();
         Vector3D n = new Vector3D(g.normal[0], g.normal[1], g.normal[2]);
@@ -318,23 +327,21 @@ public final class Simulation {
     }
 
     /**
-     * The normals of every patch that stands still and touches a ball centred at {@code centre} (distance r
-     * within the contact tolerance, contact point on the patch), scene order.
+     * The geometry of every patch that touches a ball centred at {@code centre} at time 0 (distance r within the
+     * contact tolerance, contact point on the patch), scene order; the patches into {@code touchedPatches}.
      */
-    private java.util.List<Vector3D> touchedNormals(Vector3D centre) {
-        java.util.List<Vector3D> out = new java.util.ArrayList<>();
+    private java.util.List<ContactGeometry> touchedGeometry(Vector3D centre, java.util.List<Patch> touchedPatches) {
+        java.util.List<ContactGeometry> out = new java.util.ArrayList<>();
         if (patches.size() < 2) {
             return out;
         }
         double tol = settings.contactTolerance() * ball.radius();
         for (Patch p : patches) {
-            if (!p.motion().stationary()) {
-                continue;
-            }
             try {
                 ContactGeometry gp = geometryAt(p, centre, 0.0);
                 if (Math.abs(gp.distance - ball.radius()) <= tol && gp.patchMargin >= 0) {
-                    out.add(new Vector3D(gp.normal[0], gp.normal[1], gp.normal[2]));
+                    out.add(gp);
+                    touchedPatches.add(p);
                 }
             } catch (SurfaceDomainException e) {
                 // no closest point here: not touched
@@ -345,31 +352,72 @@ public final class Simulation {
 
     /**
      * A rolling start touching several patches at once: the spin that rolls without slip at every contact,
-     * {@code v = r ω × n_i} for each normal, in the least-squares sense: {@code Σ (1 − n_i n_iᵀ) ω = Σ n_i × v / r}
-     * (the normal equations of {@code min Σ |r ω × n_i − v|²}; exact when the velocity is along the line the
-     * ball can roll, e.g. along a groove or the rails; the spin about that line's perpendicular is then fixed
-     * by the contacts, so no spin about a normal can be given).
+     * {@code v − u_i(c) = r (ω − Ω_i) × n_i} for each patch (its velocity field {@code u_i} and spin {@code Ω_i}
+     * at time 0; zero for a still patch), in the least-squares sense:
+     * {@code Σ (1 − n_i n_iᵀ) ω = Σ n_i × t_i} with {@code t_i = (v − u_i(c))/r + Ω_i × n_i} (the normal equations of
+     * {@code min Σ |ω × n_i − t_i|²}; exact when the velocity is one the contacts allow, e.g. along a groove or
+     * the rails, or the cage speed between two races; the spin is then fixed by the contacts, so no spin about
+     * a normal can be given; minimum-norm, so with antipodal contacts the spin about their common normal is zero).
+     * When no spin rolls on every patch (the velocity is not one they allow) this returns null and the start rolls
+     * on the patch touched most closely, the others slipping from the start.
      */
-    private BallState severalContactsStart(Vector3D centre, Vector3D velocity, java.util.List<Vector3D> normals) {
+    private BallState severalContactsStart(Vector3D centre, Vector3D velocity, java.util.List<ContactGeometry> geos,
+                                           java.util.List<Patch> touched) {
         double r = ball.radius();
         double[][] a = new double[3][3];
         double[] b = new double[3];
-        for (Vector3D n : normals) {
-            double[] nn = n.toArray();
+        int count = geos.size();
+        Vector3D[] normals = new Vector3D[count];
+        Vector3D[][] rels = new Vector3D[count][];
+        for (int p = 0; p < count; p++) {
+            double[] nn = geos.get(p).normal;
+            Vector3D n = new Vector3D(nn[0], nn[1], nn[2]);
+            normals[p] = n;
+            rels[p] = relativeTo(touched.get(p), centre, velocity);
             for (int i = 0; i < 3; i++) {
                 for (int j = 0; j < 3; j++) {
                     a[i][j] += (i == j ? 1 : 0) - nn[i] * nn[j];
                 }
             }
-            Vector3D rhs = Vector3D.crossProduct(n, velocity).scalarMultiply(1.0 / r);
+            Vector3D target = rels[p][0].scalarMultiply(1.0 / r).add(Vector3D.crossProduct(rels[p][1], n));
+            Vector3D rhs = Vector3D.crossProduct(n, target);
             b[0] += rhs.getX();
             b[1] += rhs.getY();
             b[2] += rhs.getZ();
         }
-        double[] w = new org.hipparchus.linear.LUDecomposition(new org.hipparchus.linear.Array2DRowRealMatrix(a))
-            .getSolver().solve(new org.hipparchus.linear.ArrayRealVector(b)).toArray();
+        // minimum-norm least squares (SVD): with antipodal contacts (a ball between two races) the spin about the
+        // common normal is free and taken as zero
+        double[] w = new org.hipparchus.linear.SingularValueDecomposition(
+            new org.hipparchus.linear.Array2DRowRealMatrix(a)).getSolver()
+            .solve(new org.hipparchus.linear.ArrayRealVector(b)).toArray();
+        Vector3D spin = new Vector3D(w);
+        // the run's start check uses the contact tolerance times its speed scale, at least this
+        double tolSpeed = settings.contactTolerance()
+            * Math.max(Math.max(velocity.getNorm(), Math.sqrt(gravity.getNorm() * r)), 1e-3);
+        for (int p = 0; p < count; p++) {
+            Vector3D n = normals[p];
+            Vector3D relative = rels[p][0];
+            Vector3D patchSpin = rels[p][1];
+            Vector3D slip = relative.subtract(Vector3D.crossProduct(spin.subtract(patchSpin), n).scalarMultiply(r));
+            if (slip.subtract(n.scalarMultiply(slip.dotProduct(n))).getNorm() > tolSpeed) {
+                return null;
+            }
+        }
         return BallState.of(0.0, centre, velocity, org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY,
-            new Vector3D(w), Phase.ROLLING);
+            spin, Phase.ROLLING);
+    }
+
+    /** The velocity relative to a patch at time 0, {@code v − u(c)}, and the patch's spin Ω (zero for a still one). */
+    private static Vector3D[] relativeTo(Patch patch, Vector3D centre, Vector3D velocity) {
+        SurfaceMotion motion = patch.motion();
+        if (motion.stationary()) {
+            return new Vector3D[] {velocity, Vector3D.ZERO};
+        }
+        MotionState pose = new MotionState();
+        motion.at(0.0, pose);
+        double[] u = new double[3];
+        pose.velocityAt(centre.toArray(), u);
+        return new Vector3D[] {velocity.subtract(new Vector3D(u)), new Vector3D(pose.spin)};
     }
 
     /**

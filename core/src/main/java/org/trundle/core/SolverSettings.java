@@ -6,7 +6,8 @@ package org.trundle.core;
  * record that checks its own values.
  *
  * <ul>
- *   <li>{@link IntegrationSettings}: the integrator's tolerance and the projection threshold;</li>
+ *   <li>{@link IntegrationSettings}: the method, the integrator's tolerance, the projection threshold,
+ *       and the fixed step and order of the symmetric method for long runs;</li>
  *   <li>{@link EventSettings}: the spacing of event checks near a root and the event time convergence;</li>
  *   <li>{@link ContactThresholds}: the stick, settle, rest, smoothing and contact-start thresholds;</li>
  *   <li>{@link RunControl}: output sampling, the end at the patch exit, the budget.</li>
@@ -84,6 +85,21 @@ public record SolverSettings(IntegrationSettings integration, EventSettings even
         return integration.tolerance();
     }
 
+    /** @return the integration method */
+    public Integrator integrator() {
+        return integration.integrator();
+    }
+
+    /** @return step of the symmetric method (s) */
+    public double fixedStep() {
+        return integration.fixedStep();
+    }
+
+    /** @return order of the symmetric method (2, 4 or 6) */
+    public int symmetricOrder() {
+        return integration.symmetricOrder();
+    }
+
     /** @return projection threshold as a fraction of the ball radius, as set (0: follow the tolerance) */
     public double projectionThreshold() {
         return integration.projectionThreshold();
@@ -157,7 +173,7 @@ public record SolverSettings(IntegrationSettings integration, EventSettings even
      * @return a copy with that value
      */
     public SolverSettings withTolerance(double v) {
-        return withIntegration(new IntegrationSettings(v, integration.projectionThreshold()));
+        return withIntegration(integration.withTolerance(v));
     }
 
     /**
@@ -165,7 +181,32 @@ public record SolverSettings(IntegrationSettings integration, EventSettings even
      * @return a copy with that value
      */
     public SolverSettings withProjectionThreshold(double v) {
-        return withIntegration(new IntegrationSettings(integration.tolerance(), v));
+        return withIntegration(integration.withProjectionThreshold(v));
+    }
+
+    /**
+     * @param v new value: the integration method ({@link Integrator#SYMMETRIC_PROJECTION} for long
+     *     conservative runs)
+     * @return a copy with that value
+     */
+    public SolverSettings withIntegrator(Integrator v) {
+        return withIntegration(integration.withIntegrator(v));
+    }
+
+    /**
+     * @param v new value: step of the symmetric method (s), positive and finite
+     * @return a copy with that value
+     */
+    public SolverSettings withFixedStep(double v) {
+        return withIntegration(integration.withFixedStep(v));
+    }
+
+    /**
+     * @param v new value: order of the symmetric method, 2, 4 or 6
+     * @return a copy with that value
+     */
+    public SolverSettings withSymmetricOrder(int v) {
+        return withIntegration(integration.withSymmetricOrder(v));
     }
 
     /**

@@ -60,12 +60,27 @@ public interface Surface {
     /**
      * Largest principal curvature (1/m) anywhere on the patch, for the fit check
      * {@code r κ_max < 1} at the start of a run; {@link Double#NaN} when it cannot be known in
-     * advance (the solver then checks during the run, at each step).
+     * advance (the solver then checks during the run, at each step); {@link Double#POSITIVE_INFINITY}
+     * where the curvature has no bound on the patch (a cone's apex), so that no ball fits and every
+     * simulation on it is refused.
      *
      * @return the largest concave curvature, 0 for a patch that is nowhere concave
      */
     default double maxConcaveCurvature() {
         return Double.NaN;
+    }
+
+    /**
+     * Slabs that each hold the whole patch (every point a contact point can take on it), so that a
+     * ball in flight whose path stays out of them, grown by its radius, can never meet the patch
+     * again ({@link EndReason#LEFT_FOR_GOOD}). A slab may be open on one side, and a plane is a
+     * slab of zero thickness. Empty, the default, when nothing is known: a flight then never ends
+     * for leaving this patch.
+     *
+     * @return the slabs (m), at the surface's rest pose
+     */
+    default java.util.List<Slab> extent() {
+        return java.util.List.of();
     }
 
     /**

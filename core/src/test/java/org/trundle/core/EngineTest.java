@@ -183,4 +183,42 @@ class EngineTest {
         assertEquals(1.3, end.centre().getZ(), 1e-12);
         assertEquals(0.15, end.centre().getX(), 1e-12);
     }
+
+    /** A floor that reports a given largest concave curvature (the test floor's answers otherwise). */
+    private static Surface floorReporting(double kmax) {
+        FloorForTests base = new FloorForTests(Double.POSITIVE_INFINITY);
+        return new Surface() {
+            @Override
+            public void query(double t, double[] x, ContactGeometry out) {
+                base.query(t, x, out);
+            }
+
+            @Override
+            public double maxConcaveCurvature() {
+                return kmax;
+            }
+
+            @Override
+            public String name() {
+                return "floor reporting kappa_max " + kmax;
+            }
+        };
+    }
+
+    /**
+     * The fit check {@code r κ_max < 1} (design notes §2): an unbounded curvature ({@code +∞}) fits
+     * no ball and is refused by name; NaN means "unknown in advance" and is checked during the run.
+     */
+    @Test
+    void unboundedCurvatureFitsNoBall() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Simulation.builder()
+            .ball(Ball.solid(0.01, 0.02)).surface(floorReporting(Double.POSITIVE_INFINITY)).law(GRIP)
+            .gravity(new Vector3D(0, 0, -G)).build());
+        assertTrue(e.getMessage().contains("does not fit") && e.getMessage().contains("kappa_max Infinity"),
+            e.getMessage());
+        Simulation unknown = Simulation.builder().ball(Ball.solid(0.01, 0.02)).surface(floorReporting(Double.NaN))
+            .law(GRIP).gravity(new Vector3D(0, 0, -G)).build();
+        assertEquals(EndReason.DURATION, unknown.run(unknown.rollingStart(new Vector3D(0, 0, 0.01),
+            new Vector3D(0.1, 0, 0)), 0.1).endReason());
+    }
 }

@@ -374,4 +374,31 @@ class RunFailureTest {
         ArithmeticException e = assertThrows(ArithmeticException.class, () -> rhs.evaluate(0, y, new double[rhs.dimension()]));
         assertTrue(e.getMessage().contains("floor with NaN normal"), e.getMessage());
     }
+
+    /**
+     * A load that drives the speed to infinity in finite time: {@code m dv/dt = m v²/L} gives
+     * {@code v = v₀/(1 − v₀ (t − t₀)/L)}, which blows up at {@code t₀ + L/v₀} (separation of
+     * variables, common practice). The steps shrink towards the blow-up until they cannot advance
+     * the time: the failure names the step size underflow, the time and the phase in our words and
+     * keeps the integrator's exception as the cause.
+     */
+    @Test
+    void stepSizeUnderflowIsNamed() {
+        double m = 0.02;
+        AppliedLoad runaway = (state, out) -> out.force(0, 0, m * state.velocity(2) * state.velocity(2) / 1.0);
+        Simulation sim = Simulation.builder().ball(Ball.solid(R, m)).surface(new FloorForTests(Double.POSITIVE_INFINITY))
+            .law(() -> "grip").load(runaway).gravity(Vector3D.ZERO).build();
+        BallState s0 = BallState.of(1.0, new Vector3D(0, 0, 0.1), new Vector3D(0, 0, 1.0),
+            org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY, Vector3D.ZERO, Phase.FLIGHT);
+        SimulationException e = assertThrows(SimulationException.class, () -> sim.run(s0, 5.0));
+        String msg = e.getMessage();
+        assertTrue(msg.contains("step size underflow") && msg.contains("phase flight"), msg);
+        assertFalse(msg.contains("minimal step size"), msg);
+        assertTrue(e.getCause() instanceof org.hipparchus.exception.MathRuntimeException, String.valueOf(e.getCause()));
+        // the last good state is next to the blow-up at t = 2 s (where the integration error of
+        // the runaway speed shifts it by far less than the 1e-6 s allowed here)
+        BallState last = e.lastGoodState();
+        assertEquals(2.0, last.time(), 1e-6, msg);
+        assertTrue(last.velocity().getZ() > 1e6 && Double.isFinite(last.velocity().getZ()), msg);
+    }
 }

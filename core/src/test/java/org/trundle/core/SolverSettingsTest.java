@@ -45,6 +45,16 @@ class SolverSettingsTest {
         assertEquals(d.withRun(new RunControl(0.0, true, 7L, 100_000)), d.withMaxEvaluations(7L));
         assertEquals(d.withRun(new RunControl(0.0, true, 20_000_000L, 9)), d.withMaxEvents(9));
         assertEquals(1e-7, d.withProjectionThreshold(1e-7).effectiveProjectionThreshold());
+        assertEquals(d.withIntegration(new IntegrationSettings(1e-10, 0.0, Integrator.SYMMETRIC_PROJECTION, 1e-3, 4)),
+                d.withIntegrator(Integrator.SYMMETRIC_PROJECTION));
+        assertEquals(d.withIntegration(new IntegrationSettings(1e-10, 0.0, Integrator.DORMAND_PRINCE, 2e-4, 4)),
+                d.withFixedStep(2e-4));
+        assertEquals(d.withIntegration(new IntegrationSettings(1e-10, 0.0, Integrator.DORMAND_PRINCE, 1e-3, 6)),
+                d.withSymmetricOrder(6));
+        SolverSettings sym = d.withIntegrator(Integrator.SYMMETRIC_PROJECTION).withFixedStep(2e-4).withSymmetricOrder(2);
+        assertEquals(sym.integration().withTolerance(1e-9), sym.withTolerance(1e-9).integration(),
+                "the tolerance copy keeps the method, step and order");
+        assertEquals(Integrator.DORMAND_PRINCE, d.integrator());
     }
 
     @Test
@@ -62,6 +72,11 @@ class SolverSettingsTest {
         assertMessage("maxEvaluations must be positive, got 0", () -> d.withMaxEvaluations(0));
         assertMessage("maxEvents must be positive, got -3", () -> d.withMaxEvents(-3));
         assertMessage("run must be given, got null", () -> d.withRun(null));
+        assertMessage("fixedStep must be finite and positive, got -0.001", () -> d.withFixedStep(-1e-3));
+        assertMessage("symmetricOrder must be 2, 4 or 6, got 3", () -> d.withSymmetricOrder(3));
+        assertMessage("integrator must be given, got null", () -> d.withIntegrator(null));
+        assertMessage("integrator must be \"dormand-prince\" or \"symmetric\", got \"leapfrog\"",
+                () -> Integrator.ofLabel("leapfrog"));
     }
 
     private static void assertMessage(String expected, Runnable r) {

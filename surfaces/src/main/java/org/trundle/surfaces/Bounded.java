@@ -8,6 +8,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.TriangleMesh;
@@ -264,6 +265,16 @@ public final class Bounded implements Surface {
     @Override
     public void coordinatesAt(double t, double[] x, ContactGeometry work, double[] out) {
         inner.coordinatesAt(t, x, work, out);
+    }
+
+    /**
+     * Slabs holding the patch: the bounded surface's slabs (the cuts only shrink the patch).
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        return inner.extent();
     }
 
     @Override

@@ -7,6 +7,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
@@ -257,6 +258,16 @@ public final class Cone implements Surface {
             return 0.0;
         }
         return cosA * cosA / (from * sinA);
+    }
+
+    /**
+     * Slabs holding the patch: the axial range from the apex and, when bounded, the opening's radius {@code to·tan α}.
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        return Extents.aboutAxis(new Vector3D(ox, oy, oz), new Vector3D(ax, ay, az), from, to, to * sinA / cosA);
     }
 
     @Override

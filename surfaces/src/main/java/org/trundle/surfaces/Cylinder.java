@@ -7,6 +7,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
@@ -239,6 +240,16 @@ public final class Cylinder implements Surface {
     @Override
     public double maxConcaveCurvature() {
         return side == Side.INSIDE ? 1.0 / radius : 0.0;
+    }
+
+    /**
+     * Slabs holding the patch: the axial range and the radius about the axis.
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        return Extents.aboutAxis(new Vector3D(ox, oy, oz), new Vector3D(ax, ay, az), from, to, radius);
     }
 
     @Override

@@ -9,6 +9,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.TriangleMesh;
@@ -210,6 +211,20 @@ public final class Placed implements Surface {
     @Override
     public double maxConcaveCurvature() {
         return local.maxConcaveCurvature();
+    }
+
+    /**
+     * Slabs holding the patch: the placed surface's slabs, moved by the transform.
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        List<Slab> out = new ArrayList<>();
+        for (Slab s : local.extent()) {
+            out.add(s.moved(rotation, new Vector3D(tx, ty, tz)));
+        }
+        return List.copyOf(out);
     }
 
     @Override

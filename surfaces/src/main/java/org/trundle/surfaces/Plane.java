@@ -7,6 +7,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.TriangleMesh;
@@ -111,6 +112,16 @@ public final class Plane implements Surface {
     @Override
     public double maxConcaveCurvature() {
         return 0.0;
+    }
+
+    /**
+     * Slabs holding the patch: the plane itself: the slab of zero thickness {@code x·n = o·n}.
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        return List.of(Slab.about(new Vector3D(nx, ny, nz), new Vector3D(ox, oy, oz), 0.0, 0.0));
     }
 
     @Override

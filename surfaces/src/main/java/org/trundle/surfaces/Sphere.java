@@ -7,6 +7,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
@@ -206,6 +207,16 @@ public final class Sphere implements Surface {
     @Override
     public double maxConcaveCurvature() {
         return side == Side.INSIDE ? 1.0 / radius : 0.0;
+    }
+
+    /**
+     * Slabs holding the patch: the sphere's box: the radius about the centre along three perpendicular directions.
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        return Extents.aboutAxis(new Vector3D(ox, oy, oz), Vector3D.PLUS_K, -radius, radius, radius);
     }
 
     @Override

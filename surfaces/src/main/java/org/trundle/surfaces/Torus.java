@@ -7,6 +7,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
@@ -302,6 +303,16 @@ public final class Torus implements Surface {
         }
         double cmin = tubeFrom <= -Math.PI || tubeTo >= Math.PI ? -1.0 : Math.min(Math.cos(tubeFrom), Math.cos(tubeTo));
         return cmin < 0 ? -cmin / (major + minor * cmin) : 0.0;
+    }
+
+    /**
+     * Slabs holding the patch: the tube's radius about the mid-plane, and major plus minor radius about the axis.
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        return Extents.aboutAxis(new Vector3D(ox, oy, oz), new Vector3D(ax, ay, az), -minor, minor, major + minor);
     }
 
     @Override

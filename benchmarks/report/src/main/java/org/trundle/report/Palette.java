@@ -128,6 +128,8 @@ final class Palette {
                 return new Color(0xe0, 0xb0, 0x20);
             case "budget":
                 return new Color(0x90, 0x50, 0xa0);
+            case "left_for_good":
+                return new Color(0x8a, 0x9b, 0xa8);
             case "failed":
                 return new Color(0x30, 0x30, 0x30);
             default:

@@ -246,6 +246,9 @@ final class RunOutputs {
                 return String.format(Locale.ROOT, "came to rest at t = %.4f s", r.endState().time());
             case BUDGET:
                 return String.format(Locale.ROOT, "stopped at t = %.4f s: %s", r.endState().time(), r.message());
+            case LEFT_FOR_GOOD:
+                return String.format(Locale.ROOT, "left for good at t = %.4f s: in flight on a path that meets no"
+                    + " patch again, speed %.4f m/s", r.endState().time(), r.endState().velocity().getNorm());
             case GEOMETRY:
             default:
                 return String.format(Locale.ROOT, "failed at t = %.4f s: %s", r.endState().time(), r.message());

@@ -232,7 +232,7 @@ class BadInputTest {
             + " \"random\": {\"samples\": 3, \"seed\": 1}}"), "a width beyond the largest double", "sweep");
         assertRejected(base.replace("SWEEP", "{\"start.speed\": [0.5], \"labels\": {\"exit_tp\": \"top\"}}"),
             "unknown key sweep.labels.exit_tp: not an outcome of this scenario; outcomes: exit_from, exit_to, duration,"
-                + " rest, budget, failed", "sweep");
+                + " rest, budget, left_for_good, failed", "sweep");
     }
 
     @Test

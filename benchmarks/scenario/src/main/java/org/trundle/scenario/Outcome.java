@@ -7,7 +7,8 @@ import org.trundle.core.sweep.SweepRun;
 /**
  * The outcome class of a sweep run, as named in {@code sweep.csv} and the regime map:
  * {@code exit_<edge>} (left the patch through that edge, e.g. {@code exit_to}), {@code duration}
- * (still on or over the surface when the duration ran out), {@code rest}, {@code budget}, or
+ * (still on or over the surface when the duration ran out), {@code rest}, {@code budget},
+ * {@code left_for_good} (in flight on a path that meets no patch again), or
  * {@code failed} (the run could not be made, or the library stopped it).
  */
 public final class Outcome {
@@ -47,6 +48,8 @@ public final class Outcome {
                 return "came to rest";
             case "budget":
                 return "budget exhausted";
+            case "left_for_good":
+                return "flew off for good";
             default:
                 return "failed";
         }

@@ -12,6 +12,7 @@ import org.trundle.core.Ball;
 import org.trundle.core.BallState;
 import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
+import org.trundle.core.Integrator;
 import org.trundle.core.Material;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
@@ -42,7 +43,7 @@ public record Scenario(JsonNode document, String description, Simulation simulat
     List<String> warnings, StartPlacement placement) {
     /** Keys allowed at the top level. */
     static final List<String> TOP_KEYS = List.of("description", "ball", "surface", "surfaces", "contact", "gravity", "start", "run",
-        "sweep");
+        "sweep", "solver");
 
     /** Default gravity (m/s²): standard gravity, downward along z. */
     static final Vector3D DEFAULT_GRAVITY = new Vector3D(0, 0, -9.81);
@@ -74,6 +75,11 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         Optional<Material[]> materials = wallLoadMaterials(root);
         List<Patch> patches = SceneFactory.patches(root, materials);
         Section contactSection = root.section("contact");
+        if (root.has("surfaces") && contactSection.bool("spin_creep", false)) {
+            // spin creep needs each wall's material: the scenario's contact becomes each patch's own law
+            patches = spinCreepPerPatch(root, contactSection.without("compliant"), patches);
+            materials = sceneMaterials(root).map(m -> new Material[] {m.getKey(), m.getValue().values().iterator().next()});
+        }
         ContactLaw law = ContactFactory.create(contactSection.without("compliant"), materials);
         Compliance compliance = compliance(root, contactSection, law);
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
@@ -105,6 +111,9 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         if (run.has("max_check_interval")) {
             set = set.withMaxCheckInterval(run.positive("max_check_interval", "s"));
         }
+        if (root.has("solver")) {
+            set = solver(root.section("solver"), set);
+        }
         Simulation sim;
         try {
             Simulation.Builder b = Simulation.builder().ball(ball).law(law).gravity(gravity).settings(set)
@@ -123,6 +132,33 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         BallState start = (placement == null ? startSpec : startSpec.at(placement.centre())).state(sim);
         List<String> warnings = Plausibility.warnings(doc, ball.radius(), ball.mass(), gravity);
         return new Scenario(doc, description, sim, start, duration, List.copyOf(warnings), placement);
+    }
+
+    /**
+     * The integration method: {@code "solver": {"integrator": "symmetric", "step": 1e-3, "order": 4}} chooses
+     * the symmetric projection method for long conservative runs ({@link Integrator#SYMMETRIC_PROJECTION})
+     * with its fixed step (s) and order (2, 4 or 6); {@code "integrator": "dormand-prince"} is the default.
+     */
+    private static SolverSettings solver(Section s, SolverSettings set) {
+        s.allow("integrator", "step", "order");
+        String name = s.choice("integrator", List.of(Integrator.DORMAND_PRINCE.label(),
+            Integrator.SYMMETRIC_PROJECTION.label()));
+        SolverSettings out = set.withIntegrator(Integrator.ofLabel(name));
+        if (s.has("step")) {
+            out = out.withFixedStep(s.positive("step", "s"));
+        }
+        if (s.has("order")) {
+            double order = s.number("order", "");
+            if (order != 2 && order != 4 && order != 6) {
+                throw new ScenarioException(s.where("order") + " must be 2, 4 or 6, got " + order);
+            }
+            out = out.withSymmetricOrder((int) order);
+        }
+        if (out.integrator() == Integrator.DORMAND_PRINCE && (s.has("step") || s.has("order"))) {
+            throw new ScenarioException(s.where(s.has("step") ? "step" : "order") + " applies to the symmetric"
+                + " integrator only; set " + s.where("integrator") + " to \"symmetric\" or leave it out");
+        }
+        return out;
     }
 
     private static Ball ball(Section s) {
@@ -216,6 +252,31 @@ public record Scenario(JsonNode document, String description, Simulation simulat
                 + " (surfaces[].material); none is given");
         }
         return Optional.of(Map.entry(material(ball.section("material")), walls));
+    }
+
+    /**
+     * In a scene, the scenario's {@code contact} with {@code spin_creep: true} built for each patch that has no
+     * {@code contact} of its own, with {@code ball.material} and that patch's {@code material} (refused, naming the
+     * patch, where one is missing).
+     */
+    private static List<Patch> spinCreepPerPatch(Section root, Section contact, List<Patch> patches) {
+        Map<String, Material> walls = sceneMaterials(root).map(Map.Entry::getValue).orElse(Map.of());
+        Material ballMaterial = root.section("ball").has("material")
+            ? material(root.section("ball").section("material")) : null;
+        List<Patch> out = new java.util.ArrayList<>();
+        for (Patch p : patches) {
+            if (p.law() != null) {
+                out.add(p);
+                continue;
+            }
+            Material wall = walls.get(p.id());
+            if (ballMaterial == null || wall == null) {
+                throw new ScenarioException("contact.spin_creep = true in a scene needs ball.material and the material"
+                    + " of every patch without a contact of its own; patch \"" + p.id() + "\" has none");
+            }
+            out.add(p.withLaw(ContactFactory.create(contact, Optional.of(new Material[] {ballMaterial, wall}))));
+        }
+        return out;
     }
 
     /** A material from {@code {"youngs_modulus": Pa, "poisson_ratio": ...}}. */

@@ -194,7 +194,7 @@ public record SweepSpec(List<ScenarioPath> paths, ParameterSpace space, boolean 
                 }
             }
         }
-        out.addAll(List.of("duration", "rest", "budget", "failed"));
+        out.addAll(List.of("duration", "rest", "budget", "left_for_good", "failed"));
         return out;
     }
 

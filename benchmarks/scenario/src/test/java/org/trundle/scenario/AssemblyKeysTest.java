@@ -136,6 +136,26 @@ class AssemblyKeysTest {
     }
 
     @Test
+    void spinCreepInASceneUsesEachPatchsOwnMaterial() {
+        String json = "{\n\"ball\": {\"radius\": 0.004, \"mass\": 0.0021,"
+            + " \"material\": {\"youngs_modulus\": 210e9, \"poisson_ratio\": 0.3}},\n"
+            + "\"surfaces\": [{\"id\": \"feeder\", \"type\": \"v_groove\", \"included_angle_deg\": 90,"
+            + " \"material\": {\"youngs_modulus\": 70e9, \"poisson_ratio\": 0.33}},\n"
+            + " {\"id\": \"tray\", \"type\": \"plane\", \"origin\": [0, 0, -0.5], \"normal\": [0, 0, 1],"
+            + " \"material\": {\"youngs_modulus\": 3e9, \"poisson_ratio\": 0.37}}],\n"
+            + String.format(REST, "0, 0, 0.1").replace("\"law\": \"rolling\"", "\"law\": \"rolling\", \"spin_creep\": true")
+            + "}";
+        List<Patch> patches = ScenarioParsingTest.parse(json).simulation().patches();
+        assertTrue(patches.get(0).law().name().contains("wall Material[E=7.0E10 Pa"), patches.get(0).law().name());
+        assertTrue(patches.get(1).law().name().contains("wall Material[E=7.0E10 Pa"), patches.get(1).law().name());
+        assertTrue(patches.get(2).law().name().contains("wall Material[E=3.0E9 Pa"), patches.get(2).law().name());
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioParsingTest.parse(json.replace(
+            ", \"material\": {\"youngs_modulus\": 3e9, \"poisson_ratio\": 0.37}}", "}")));
+        assertTrue(e.getMessage().contains("needs ball.material and the material of every patch without a contact of its"
+            + " own; patch \"tray\" has none"), e.getMessage());
+    }
+
+    @Test
     void badValuesAreRefusedNamingKeyAndValue() {
         assertRefused("\"type\": \"v_groove\", \"included_angle_deg\": 180",
             "surface.included_angle_deg must lie in (0, 180) degrees, got 180");

@@ -180,7 +180,7 @@ class ScenarioInputLimitsTest {
         String m = message(() -> SweepSpec.parse(ScenarioFiles.parse(SWEEP_BASE.replace("SWEEP",
             "{\"start.speed\": [0.5], \"labels\": {\"exit_tp\": \"out of the top\"}}"))));
         assertEquals("unknown key sweep.labels.exit_tp: not an outcome of this scenario; outcomes: exit_from, exit_to,"
-            + " duration, rest, budget, failed", m);
+            + " duration, rest, budget, left_for_good, failed", m);
         String chute = SWEEP_BASE.replace("SWEEP", "{\"start.speed\": [0.5], \"labels\": LABELS}")
             .replace("{ \"type\": \"cylinder\", \"side\": \"inside\", \"radius\": 0.015,\n"
                 + "               \"origin\": [0, 0, 0], \"axis\": [0, 0, 1], \"from\": -0.25, \"to\": 0.0 }",

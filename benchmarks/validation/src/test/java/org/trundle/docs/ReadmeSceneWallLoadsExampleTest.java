@@ -75,7 +75,7 @@ class ReadmeSceneWallLoadsExampleTest {
         Sample twoWithOneForce = new Sample(s, 1.0, Vector3D.ZERO, Vector3D.ZERO, Vector3D.ZERO, false,
             List.of("left", "right"));
         IllegalArgumentException two = assertThrows(IllegalArgumentException.class, () -> loads.loads(twoWithOneForce));
-        assertTrue(two.getMessage().contains("touches [left, right] at once but carries one contact force"),
+        assertTrue(two.getMessage().contains("touches [left, right] but carries no per-contact forces"),
             two.getMessage());
     }
 }

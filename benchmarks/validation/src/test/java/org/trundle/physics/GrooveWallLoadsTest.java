@@ -8,7 +8,6 @@ import java.util.List;
 import java.util.Map;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.trundle.contact.Coulomb;
 import org.trundle.contact.WallLoad;
@@ -35,7 +34,6 @@ import org.trundle.surfaces.VGroove;
  */
 class GrooveWallLoadsTest {
     @Test
-    @Disabled("needs simultaneous contacts in runs (issue 12, item 1): enable when the engine touches two patches at once")
     void eachWallOfAGrooveCarriesItsShareFromStaticsAndItsHertzPatchFromJohnson() {
         double r = 0.005;
         double m = 0.004;

@@ -222,23 +222,106 @@ class SeveralContactsTest {
     }
 
     /**
-     * Several contacts are solved only on patches that stand still: a ball at rest in a groove whose second wall
-     * turns (however slowly) keeps one contact, on the first wall of the scene, as with one contact at a time
-     * (the limit the README states); its samples list that one patch.
+     * A groove wall that moves (design notes §9): the plus wall slides along the groove at {@code V} like a belt,
+     * the minus wall stands still. Rolling without slip on both, the ball's centre moves at {@code V/2} plus the
+     * still groove's motion (the contact points move at {@code V} and 0; the constraints differentiated are
+     * those of the still groove, since a plane translating at constant velocity adds no term), so
+     * {@code v_x(t) = V/2 + g sinθ t/2.6}; the energy budget closes with the belt's drive work counted.
      */
     @Test
-    void aMovingPatchIsNotTakenAsASecondContact() {
+    void aBeltWallAndAStillWallCarryTheBallAtHalfTheBeltSpeed() {
+        double theta = Math.toRadians(10);
+        double belt = 0.2;
         VGroove v = groove60();
-        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K)).patch(Patch.of("plus", v.plusWall()))
-            .patch(Patch.of("minus", v.minusWall()).withMotion(SurfaceMotion.rotation(Vector3D.PLUS_K, Vector3D.ZERO,
-                1e-3)))
-            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(0.1))
-            .settings(SolverSettings.defaults().withSampleInterval(0.01)).build();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus", v.plusWall()).withMotion(SurfaceMotion.translation(new Vector3D(belt, 0, 0))))
+            .patch(Patch.of("minus", v.minusWall())).law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11).withSampleInterval(0.01)).build();
         List<Sample> samples = new ArrayList<>();
-        sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), 0.05, samples::add);
+        double t = 0.3;
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), new Vector3D(belt / 2, 0, 0)), t,
+            samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        assertTrue(res.events().isEmpty(), res.events().toString());
+        double a = G * Math.sin(theta) / 2.6;
+        assertEquals(belt / 2 + a * t, res.endState().velocity().getX(), 1e-9 * (belt + a * t));
         for (Sample s : samples) {
-            assertTrue(s.touches().size() <= 1, s.touches().toString());
+            assertEquals(2, s.touches().size());
         }
-        assertEquals(List.of("plus"), samples.get(0).contacts());
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
+     * A groove on a carriage accelerating at {@code A} along the groove: relative to the groove the ball rolls as
+     * under the gravity {@code g − A} (d'Alembert), so in the ground frame {@code a = A + (g sinθ − A)/2.6}; this
+     * checks the moving patches' constraint terms ({@code β = A} for a translating wall); the budget closes with
+     * the carriage's drive work.
+     */
+    @Test
+    void aGrooveOnAnAcceleratingCarriage() {
+        double theta = Math.toRadians(10);
+        double acc = 0.8;
+        SurfaceMotion carriage = new SurfaceMotion() {
+            @Override
+            public void at(double time, org.trundle.core.MotionState out) {
+                out.setIdentity();
+                out.offset[0] = 0.5 * acc * time * time;
+                out.velocity[0] = acc * time;
+                out.acceleration[0] = acc;
+            }
+        };
+        VGroove v = groove60();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))
+            .patch(Patch.of("minus", v.minusWall()).withMotion(carriage))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11)).build();
+        double t = 0.3;
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), t);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        assertTrue(res.events().isEmpty(), res.events().toString());
+        double a = acc + (G * Math.sin(theta) - acc) / 2.6;
+        assertEquals(a * t, res.endState().velocity().getX(), 1e-9 * a * t);
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+        assertTrue(res.energy().driveWork() != 0);
+    }
+
+    /**
+     * Two contacts on a turning patch: a scene of two coincident turntables (the same plane, the same rotation)
+     * touched at one point, so that the two contacts' constraints coincide (a system singular beyond the
+     * squeeze modes, solved for the minimum-norm forces) and every term of a rotating patch enters the
+     * constraints ({@code Ω × n}, {@code A} with the centripetal and Coriolis parts). The ball must move as on one
+     * turntable: its velocity turns at {@code kΩ/(1+k)} about the centre {@code c₀ + ẑ × v₀/(kΩ/(1+k))} (W. Weltner,
+     * Am. J. Phys. 47 (1979) 984; from memory; the same check as the one-contact turntable), to 1e-9 of the speed
+     * and of the orbit radius over a quarter orbit, with both contacts listed in every sample.
+     */
+    @Test
+    void twoContactsOnATurntableOrbitAsOne() {
+        double omega = 3.0;
+        double k = 0.4;
+        Vector3D origin = new Vector3D(0.02, -0.01, 0);
+        SurfaceMotion turn = SurfaceMotion.rotation(Vector3D.PLUS_K, origin, omega);
+        org.trundle.surfaces.Plane table = new org.trundle.surfaces.Plane(Vector3D.ZERO, Vector3D.PLUS_K);
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, k)).patch(Patch.of("table", table).withMotion(turn))
+            .patch(Patch.of("twin", table).withMotion(turn)).law(new org.trundle.contact.PureRolling())
+            .gravity(new Vector3D(0, 0, -G)).settings(SolverSettings.defaults().withSampleInterval(0.05)).build();
+        Vector3D c0 = new Vector3D(0.05, 0.01, R);
+        Vector3D v0 = new Vector3D(-0.03, 0.08, 0);
+        double rate = k * omega / (1 + k);
+        Vector3D centre = c0.add(Vector3D.crossProduct(Vector3D.PLUS_K, v0).scalarMultiply(1 / rate));
+        double radius = v0.getNorm() / Math.abs(rate);
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(sim.rollingStart(c0, v0), 0.5 * Math.PI / rate, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        assertTrue(res.events().isEmpty(), res.events().toString());
+        for (Sample s : samples) {
+            assertEquals(2, s.touches().size());
+            org.hipparchus.geometry.euclidean.threed.Rotation rot = new org.hipparchus.geometry.euclidean.threed.Rotation(
+                Vector3D.PLUS_K, rate * s.time(), org.hipparchus.geometry.euclidean.threed.RotationConvention.VECTOR_OPERATOR);
+            assertEquals(0, s.state().velocity().subtract(rot.applyTo(v0)).getNorm(), 1e-9 * v0.getNorm());
+            assertEquals(0, s.state().centre().subtract(centre.add(rot.applyTo(c0.subtract(centre)))).getNorm(),
+                1e-9 * radius);
+        }
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
     }
 }

@@ -5,7 +5,7 @@ import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.linsol.LinearSolverDense;
 
 /**
- * The rigid constraint forces of a ball touching several static patches at once (design notes §9,
+ * The rigid constraint forces of a ball touching several patches at once (design notes §9,
  * "Several contacts"): one small linear system for all contacts, allocation-free after construction.
  *
  * <p><b>Unknowns and equations.</b> Generalised velocity {@code ν = (v, ω)}, mass matrix
@@ -47,6 +47,9 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
  * its solution satisfies {@code J M⁻¹ G λ = rhs} and {@code Zᵀ C λ = 0} (the rhs has no component along
  * {@code Z}, which spans the left null space too).
  *
+ * <p>A system singular beyond those modes (two sliding contacts pressing along one line, whose squeeze the
+ * friction weight does not see) is solved for the minimum-norm forces (SVD pseudo-inverse, made on first use).
+ *
  * <p><b>Storage.</b> EJML's fixed-size types stop at 6×6 and offer no 6×6 solve, while three contacts need
  * up to 9 unknowns, so the system lives in a {@link DMatrixRMaj} of the largest size, allocated once, with a
  * reused LU solver; every contact occupies three rows (a sliding contact's two spare rows are identity rows).
@@ -73,6 +76,9 @@ final class ContactForceSolver {
     private final boolean[] rolling = new boolean[MAX_CONTACTS];
     private final double[] frictionRatio = new double[MAX_CONTACTS];
     private final double[][] slideDir = new double[MAX_CONTACTS][3];
+    /** Whether the caller gave the constraint's right-hand side (a moving patch), and its value. */
+    private final boolean[] given = new boolean[MAX_CONTACTS];
+    private final double[][] givenBeta = new double[MAX_CONTACTS][3];
 
     // outputs
     private final double[] acc = new double[3];
@@ -86,6 +92,14 @@ final class ContactForceSolver {
     private final DMatrixRMaj rhs = new DMatrixRMaj(3 * MAX_CONTACTS, 1);
     private final DMatrixRMaj sol = new DMatrixRMaj(3 * MAX_CONTACTS, 1);
     private final LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(3 * MAX_CONTACTS);
+    /**
+     * The minimum-norm fallback for a system that is singular beyond the rolling squeeze modes (two sliding
+     * contacts pressing along one line, as a ball between two races whose normals are antipodal): made on first
+     * use only.
+     */
+    private LinearSolverDense<DMatrixRMaj> pinv;
+    /** Relative LU quality below which the fallback solves. */
+    private static final double SINGULAR = 1e-12;
     /** Rows of J (linear and angular parts) and columns of G, per unknown. */
     private final double[][] jLin = new double[3 * MAX_CONTACTS][3];
     private final double[][] jAng = new double[3 * MAX_CONTACTS][3];
@@ -126,6 +140,39 @@ final class ContactForceSolver {
         System.arraycopy(n, 0, normal[i], 0, 3);
         System.arraycopy(h, 0, hessian[i], 0, 9);
         rolling[i] = true;
+        given[i] = false;
+    }
+
+    /**
+     * Adds a rolling contact on a moving patch, whose differentiated no-slip constraint has the right-hand
+     * side {@code β_i = A − r Ω̇ × n_i + r (ω − Ω) × ṅ_i} given by the caller (design notes §9: {@code A} the
+     * patch's velocity field differentiated along the centre's path, {@code ṅ_i = Ω × n_i + H_i (v − u(c))});
+     * it is {@code r ω × (H_i v)} on a still patch.
+     *
+     * @param n unit normal toward the ball (copied)
+     * @param h distance Hessian at the centre (copied)
+     * @param beta the constraint's right-hand side β_i (m/s², copied)
+     */
+    void addRolling(double[] n, double[] h, double[] beta) {
+        addRolling(n, h);
+        given[count - 1] = true;
+        System.arraycopy(beta, 0, givenBeta[count - 1], 0, 3);
+    }
+
+    /**
+     * Adds a sliding contact on a moving patch, whose normal constraint {@code n_i·a = β_n} has the right-hand
+     * side {@code β_n = n_i·A − ṅ_i·(v − u(c))} given by the caller ({@code −vᵀ H_i v} on a still patch).
+     *
+     * @param n unit normal toward the ball (copied)
+     * @param h distance Hessian at the centre (copied)
+     * @param mu friction ratio μ = f/N
+     * @param slip unit slip direction ŝ relative to the patch (copied)
+     * @param betaN the normal constraint's right-hand side (m/s²)
+     */
+    void addSliding(double[] n, double[] h, double mu, double[] slip, double betaN) {
+        addSliding(n, h, mu, slip);
+        given[count - 1] = true;
+        givenBeta[count - 1][0] = betaN;
     }
 
     /**
@@ -141,6 +188,7 @@ final class ContactForceSolver {
         System.arraycopy(n, 0, normal[i], 0, 3);
         System.arraycopy(h, 0, hessian[i], 0, 9);
         rolling[i] = false;
+        given[i] = false;
         frictionRatio[i] = mu;
         System.arraycopy(slip, 0, slideDir[i], 0, 3);
     }
@@ -184,9 +232,9 @@ final class ContactForceSolver {
                     Vec.scale(jAng[row], r);
                     System.arraycopy(jLin[row], 0, gLin[row], 0, 3);
                     System.arraycopy(jAng[row], 0, gAng[row], 0, 3);
-                    // β = r ω × (H v), component c
+                    // β = r ω × (H v), component c (or the caller's, on a moving patch)
                     Vec.cross(w, hv, tmp);
-                    beta[row] = r * tmp[c];
+                    beta[row] = given[i] ? givenBeta[i][c] : r * tmp[c];
                 } else if (c == 0) {
                     active[row] = true;
                     System.arraycopy(ni, 0, jLin[row], 0, 3);
@@ -199,7 +247,7 @@ final class ContactForceSolver {
                     // −r n × u
                     Vec.cross(gLin[row], ni, gAng[row]);
                     Vec.scale(gAng[row], r);
-                    beta[row] = -Vec.dot(v, hv);
+                    beta[row] = given[i] ? givenBeta[i][0] : -Vec.dot(v, hv);
                 } else {
                     active[row] = false;
                 }
@@ -227,10 +275,19 @@ final class ContactForceSolver {
             rhs.unsafe_set(p, 0, beta[p] - free);
         }
         addSqueezeModes(n);
-        if (!lu.setA(mat)) {
-            return false;
+        if (lu.setA(mat) && lu.quality() > SINGULAR) {
+            lu.solve(rhs, sol);
+        } else {
+            // a squeeze the weights do not see (two sliding contacts on one line): the minimum-norm forces,
+            // which split it equally; a negative normal force is then released by the caller
+            if (pinv == null) {
+                pinv = LinearSolverFactory_DDRM.pseudoInverse(true);
+            }
+            if (!pinv.setA(mat)) {
+                return false;
+            }
+            pinv.solve(rhs, sol);
         }
-        lu.solve(rhs, sol);
         // forces, then a and α
         for (int k = 0; k < 3; k++) {
             acc[k] = g[k] + fApp[k] * invM;

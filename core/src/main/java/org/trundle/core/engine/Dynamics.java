@@ -47,7 +47,8 @@ import org.trundle.core.Phase;
  * kinetic-energy metric; {@link Transitions#projected}) when the drift measure (distance residuals and
  * the slip of rolling contacts against the projection threshold) reaches 1. A law's sliding friction is
  * taken proportional to the normal force there (its ratio at the load {@code m|g|}; exact for Coulomb),
- * and the laws' couples are evaluated at the normal forces of a first solve without them.
+ * and the laws' couples are evaluated at the normal forces of a first solve without them. On a moving
+ * patch the constraints are relative to it (see {@code movingContact}) and the drive power is integrated.
  *
  * <p>Rolling (design notes §3): with {@code n}, {@code H} at the centre and the no-slip velocity
  * {@code v = r ω × n}, the constraints {@code n·v = 0}, {@code v − r ω × n = 0} differentiated with
@@ -157,6 +158,16 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     final double[][] contactFriction = new double[ContactForceSolver.MAX_CONTACTS][3];
     private final double[][] contactDir = new double[ContactForceSolver.MAX_CONTACTS][3];
     private final double[] contactRatio = new double[ContactForceSolver.MAX_CONTACTS];
+    /** Spin relative to each contact's patch (rad/s). */
+    private final double[][] contactSpin = new double[ContactForceSolver.MAX_CONTACTS][3];
+    /** Moving patches: velocity relative to the patch at the centre (m/s). */
+    private final double[][] contactRelVel = new double[ContactForceSolver.MAX_CONTACTS][3];
+    /** Moving patches: the patch velocity at the contact point u(p) (m/s). */
+    private final double[][] contactUp = new double[ContactForceSolver.MAX_CONTACTS][3];
+    /** Moving patches: the rolling constraint's right-hand side β (m/s²). */
+    private final double[][] contactBeta = new double[ContactForceSolver.MAX_CONTACTS][3];
+    /** Moving patches: the normal constraint's right-hand side β_n (m/s²). */
+    private final double[] contactBetaN = new double[ContactForceSolver.MAX_CONTACTS];
     private final double[] zeroSlip = new double[3];
 
     // workspaces
@@ -1201,8 +1212,14 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             contactMargin[k] = s.geo.patchMargin;
             anyCouples |= s.couples;
             double[] sl = contactSlip[k];
-            if (s.mode == Mode.SLIDING) {
+            double[] spin = contactSpin[k];
+            if (s.moving) {
+                movingContact(t, s, k);
+            } else {
+                System.arraycopy(w, 0, spin, 0, 3);
                 ContactKinematics.slip(r, vel, 0, w, 0, s.geo.normal, sl);
+            }
+            if (s.mode == Mode.SLIDING) {
                 double sp = norm(sl);
                 contactSlipSpeed[k] = sp;
                 double[] dir = contactDir[k];
@@ -1214,14 +1231,13 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
                     System.arraycopy(s.slideDir, 0, dir, 0, 3);
                 }
                 // the law's friction per newton at the reference load (exact for Coulomb's f = μ N)
-                access.set(s.ctx, ball, s.geo, referenceLoad, Phase.SLIDING, sl, w, false);
+                access.set(s.ctx, ball, s.geo, referenceLoad, Phase.SLIDING, sl, spin, false);
                 double f = s.law.slidingFriction(s.ctx);
                 if (!(f >= 0 && f < Double.POSITIVE_INFINITY)) {
                     throw badBound("sliding friction", f, "N");
                 }
                 contactRatio[k] = f / referenceLoad;
             } else {
-                ContactKinematics.slip(r, vel, 0, w, 0, s.geo.normal, sl);
                 contactSlipSpeed[k] = norm(sl);
             }
         }
@@ -1234,16 +1250,21 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
                     continue;
                 }
                 double fn = solver.normalForce(k);
+                double[] spin = contactSpin[k];
                 if (s.mode == Mode.SLIDING) {
-                    access.set(s.ctx, ball, s.geo, fn, Phase.SLIDING, contactSlip[k], w, false);
+                    access.set(s.ctx, ball, s.geo, fn, Phase.SLIDING, contactSlip[k], spin, false);
                 } else {
-                    access.setRolling(s.ctx, fn, w[0], w[1], w[2], true);
+                    access.setRolling(s.ctx, fn, spin[0], spin[1], spin[2], true);
                 }
                 s.law.addCouples(s.ctx);
                 double[] ct = access.torque(s.ctx);
                 double[] lr = access.lossRate(s.ctx);
                 for (int i = 0; i < 3; i++) {
                     tau[i] += ct[i];
+                }
+                if (s.moving) {
+                    // the couple's power on the patch's spin is drive work (design notes §9)
+                    drivePower += dot(ct, s.pose.spin);
                 }
                 lossRoll += lr[LossKind.ROLLING_RESISTANCE.ordinal()];
                 lossPivot += lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
@@ -1268,11 +1289,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             fz += f[2];
             contactNormal[k] = fn;
             contactNeeded[k] = solver.tangentialForce(k);
+            if (s.moving) {
+                drivePower += dot(f, contactUp[k]);
+            }
             if (s.mode == Mode.SLIDING) {
                 contactGrip[k] = Double.NaN;
                 lossSlide -= dot(fr, contactSlip[k]);
             } else {
-                access.setRolling(s.ctx, fn, w[0], w[1], w[2], false);
+                double[] spin = contactSpin[k];
+                access.setRolling(s.ctx, fn, spin[0], spin[1], spin[2], false);
                 double gl = s.law.gripLimit(s.ctx);
                 if (!(gl >= 0)) {
                     throw badBound("grip limit", gl, "N");
@@ -1312,7 +1337,54 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[APPLIED] = loaded ? dot(fApp, vel) + dot(tApp, w) : 0;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
         yDot[DAMPING] = 0;
-        yDot[DRIVE] = 0;
+        yDot[DRIVE] = drivePower;
+    }
+
+    /**
+     * A contact of several on a moving patch (design notes §9), into the per-position workspaces: the velocity
+     * and spin relative to the patch ({@code v − u(c)}, {@code w = ω − Ω}), the slip
+     * {@code s = P((v − u(c)) − r w × n)}, {@code ṅ = Ω × n + H (v − u(c))}, the patch's velocity field
+     * differentiated along the centre's path {@code A = Ω̇ × (c − D) − Ω × Ḋ + D̈ + Ω × v}, the constraints'
+     * right-hand sides {@code β = A − r Ω̇ × n + r w × ṅ} (rolling) and {@code β_n = n·A − ṅ·(v − u(c))}
+     * (sliding), and the patch velocity at the contact point {@code u(p) = u(c) − r Ω × n} (drive power).
+     */
+    private void movingContact(double t, ContactSlot s, int k) {
+        MotionState ps = s.poseAt(t);
+        double[] n = s.geo.normal;
+        double[] om = ps.spin;
+        double[] sr = ps.spinRate;
+        double[] dv = ps.velocity;
+        double[] uc = contactUp[k];
+        ps.velocityAt(c, uc);
+        double[] rv = contactRelVel[k];
+        double[] spin = contactSpin[k];
+        for (int i = 0; i < 3; i++) {
+            rv[i] = vel[i] - uc[i];
+            spin[i] = w[i] - om[i];
+        }
+        ContactKinematics.slip(r, rv, 0, spin, 0, n, contactSlip[k]);
+        double[] h = s.geo.hessian;
+        double ndx = om[1] * n[2] - om[2] * n[1] + h[0] * rv[0] + h[1] * rv[1] + h[2] * rv[2];
+        double ndy = om[2] * n[0] - om[0] * n[2] + h[3] * rv[0] + h[4] * rv[1] + h[5] * rv[2];
+        double ndz = om[0] * n[1] - om[1] * n[0] + h[6] * rv[0] + h[7] * rv[1] + h[8] * rv[2];
+        double qx = c[0] - ps.offset[0];
+        double qy = c[1] - ps.offset[1];
+        double qz = c[2] - ps.offset[2];
+        double ax = sr[1] * qz - sr[2] * qy - (om[1] * dv[2] - om[2] * dv[1]) + ps.acceleration[0]
+            + (om[1] * vel[2] - om[2] * vel[1]);
+        double ay = sr[2] * qx - sr[0] * qz - (om[2] * dv[0] - om[0] * dv[2]) + ps.acceleration[1]
+            + (om[2] * vel[0] - om[0] * vel[2]);
+        double az = sr[0] * qy - sr[1] * qx - (om[0] * dv[1] - om[1] * dv[0]) + ps.acceleration[2]
+            + (om[0] * vel[1] - om[1] * vel[0]);
+        double[] b = contactBeta[k];
+        b[0] = ax - r * (sr[1] * n[2] - sr[2] * n[1]) + r * (spin[1] * ndz - spin[2] * ndy);
+        b[1] = ay - r * (sr[2] * n[0] - sr[0] * n[2]) + r * (spin[2] * ndx - spin[0] * ndz);
+        b[2] = az - r * (sr[0] * n[1] - sr[1] * n[0]) + r * (spin[0] * ndy - spin[1] * ndx);
+        contactBetaN[k] = n[0] * ax + n[1] * ay + n[2] * az - (ndx * rv[0] + ndy * rv[1] + ndz * rv[2]);
+        // u(p) = u(c) − r Ω × n, in place of u(c)
+        uc[0] -= r * (om[1] * n[2] - om[2] * n[1]);
+        uc[1] -= r * (om[2] * n[0] - om[0] * n[2]);
+        uc[2] -= r * (om[0] * n[1] - om[1] * n[0]);
     }
 
     /** Loads the solver with the touching contacts and solves with the couple {@link #tau}. */
@@ -1322,7 +1394,13 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         for (int k = 0; k < count; k++) {
             ContactSlot s = contacts.at(k);
             if (s.mode == Mode.SLIDING) {
-                sv.addSliding(s.geo.normal, s.geo.hessian, contactRatio[k], contactDir[k]);
+                if (s.moving) {
+                    sv.addSliding(s.geo.normal, s.geo.hessian, contactRatio[k], contactDir[k], contactBetaN[k]);
+                } else {
+                    sv.addSliding(s.geo.normal, s.geo.hessian, contactRatio[k], contactDir[k]);
+                }
+            } else if (s.moving) {
+                sv.addRolling(s.geo.normal, s.geo.hessian, contactBeta[k]);
             } else {
                 sv.addRolling(s.geo.normal, s.geo.hessian);
             }
@@ -1364,6 +1442,12 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * couples of the laws are not asked (at zero spin they are not needed).
      */
     private boolean canRestOnSeveral(double t, double slack) {
+        for (int k = 0; k < contacts.count(); k++) {
+            if (contacts.at(k).moving) {
+                // rest relative to several patches that move apart is not defined: no rest
+                return false;
+            }
+        }
         zero(vel);
         zero(w);
         int count = contacts.count();

@@ -8,9 +8,13 @@ import static org.trundle.core.engine.StateMapper.PATH;
 import static org.trundle.core.engine.StateMapper.Q;
 import static org.trundle.core.engine.StateMapper.V;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.hipparchus.exception.MathRuntimeException;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEStateAndDerivative;
+import org.trundle.core.AppliedLoad;
 import org.trundle.core.BallState;
 import org.trundle.core.EndReason;
 import org.trundle.core.EnergyBudget;
@@ -22,6 +26,7 @@ import org.trundle.core.RunObserver;
 import org.trundle.core.RunResult;
 import org.trundle.core.SimulationException;
 import org.trundle.core.SimulationInterruptedException;
+import org.trundle.core.Slab;
 import org.trundle.core.SurfaceDomainException;
 
 /**
@@ -72,7 +77,8 @@ public final class Engine {
      * The exception boundary of a run: every exception that leaves it is the engine's own
      * rejection of the start ({@link IllegalArgumentException}) or a {@link SimulationException}
      * with the last good state; a failure of the engine's own checks ({@link RunFailure}) gives its
-     * message, anything else (user code, the integrator) becomes the cause.
+     * message, an integrator failure is described in our words ({@link IntegratorFailure}), and
+     * anything else (user code, the integrator) becomes the cause.
      */
     private RuntimeException failure(RuntimeException e, BallState start) {
         if (e == run.rejection) {
@@ -85,7 +91,8 @@ public final class Engine {
         } else if (e instanceof RunFailure) {
             return new SimulationException(at + e.getMessage(), last, null);
         } else if (e instanceof MathRuntimeException) {
-            return new SimulationException(at + "the integrator failed: " + e.getMessage(), last, e);
+            return new SimulationException(at + IntegratorFailure.describe((MathRuntimeException) e, last.time(),
+                run.phase() != null ? run.phase() : last.phase()), last, e);
         } else if (e instanceof Dynamics.BudgetExhausted || e instanceof Segment.ProjectionRestart) {
             return new SimulationException(at + "internal signal escaped: " + e.getMessage(), last, null);
         }
@@ -175,6 +182,12 @@ public final class Engine {
                 if (pivot != null) {
                     run.log(pivot, run.toState(run.t, run.y, run.phase()), null, Vector3D.ZERO);
                 }
+                run.flightClear = flightClear();
+                if (run.flightClear - run.t < shortestInterval(run.t, run.flightClear)) {
+                    reason = EndReason.LEFT_FOR_GOOD;
+                    message = leftMessage();
+                    break;
+                }
                 ODEStateAndDerivative end;
                 try {
                     end = segment.integrate();
@@ -199,7 +212,12 @@ public final class Engine {
                 run.y = run.snapshots.fullState(end);
                 SwitchRule fired = segment.fired;
                 if (fired == null) {
-                    reason = EndReason.DURATION;
+                    if (run.t >= run.flightClear) {
+                        reason = EndReason.LEFT_FOR_GOOD;
+                        message = leftMessage();
+                    } else {
+                        reason = EndReason.DURATION;
+                    }
                     break;
                 }
                 try {
@@ -231,6 +249,39 @@ public final class Engine {
             run.restoreLastGood();
         }
         return close(reason, message, e0, gn, eScale);
+    }
+
+    /**
+     * In free flight (gravity alone: no applied load, every patch still, not in a compliant
+     * contact) the time from which the ball can meet no patch again ({@link LeaveCheck}); +∞ in
+     * every other case, or when it cannot be shown. The reach is the radius grown by 1e-6 of it,
+     * far above the integration error of a parabola (Dormand–Prince integrates a quadratic
+     * exactly up to rounding).
+     */
+    private double flightClear() {
+        Run run = this.run;
+        if (run.phase() != Phase.FLIGHT || run.touching || run.model.load() != AppliedLoad.NONE) {
+            return Double.POSITIVE_INFINITY;
+        }
+        for (ContactSlot s : run.slots) {
+            if (s.moving) {
+                return Double.POSITIVE_INFINITY;
+            }
+        }
+        if (run.extents == null) {
+            List<List<Slab>> all = new ArrayList<>();
+            for (ContactSlot s : run.slots) {
+                all.add(List.copyOf(s.surface.extent()));
+            }
+            run.extents = all;
+        }
+        double[] y = run.y;
+        return LeaveCheck.clearFrom(run.t, new double[] {y[0], y[1], y[2]}, new double[] {y[V], y[V + 1], y[V + 2]},
+            run.g, run.extents, run.r * (1 + 1e-6));
+    }
+
+    private String leftMessage() {
+        return "left for good: in flight at t = " + run.t + " s on a path that meets no patch again";
     }
 
     /** Sets the time, state, end time, thresholds and tolerances of the run from its start; returns the energy scale. */

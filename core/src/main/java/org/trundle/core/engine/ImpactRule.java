@@ -46,28 +46,7 @@ final class ImpactRule extends SwitchRule {
         // in contact on a rigid scene: a patch not touched yet may be reached (a second or third contact)
         inContact = true;
         return phase.inContact() && run.compliance == null && slot.mode == Mode.APART
-            && run.contacts.count() < ContactForceSolver.MAX_CONTACTS && secondContactPossible(run, slot);
-    }
-
-    /**
-     * Whether the ball, touching its patches now, may take {@code s} as a further contact: only when
-     * {@code s} and every touched patch stand still (several contacts on a moving patch are not solved; the
-     * ball then keeps its one contact, as with one contact at a time).
-     *
-     * @param run the run
-     * @param s a patch not touched
-     * @return whether it can become a further contact
-     */
-    static boolean secondContactPossible(Run run, ContactSlot s) {
-        if (s.moving) {
-            return false;
-        }
-        for (int k = 0; k < run.contacts.count(); k++) {
-            if (run.contacts.at(k).moving) {
-                return false;
-            }
-        }
-        return true;
+            && run.contacts.count() < ContactForceSolver.MAX_CONTACTS;
     }
 
     /**

@@ -22,6 +22,30 @@ final class LeastNorm {
      * @return x (n)
      */
     static double[] solve(double[][] rows, double[] inverseWeight, double[] b) {
+        double[] lambda = multipliers(rows, inverseWeight, b);
+        int p = rows.length;
+        int n = inverseWeight.length;
+        double[] x = new double[n];
+        for (int c = 0; c < n; c++) {
+            double s = 0;
+            for (int i = 0; i < p; i++) {
+                s += rows[i][c] * lambda[i];
+            }
+            x[c] = inverseWeight[c] * s;
+        }
+        return x;
+    }
+
+    /**
+     * The multipliers {@code λ = (A W⁻¹ Aᵀ)⁺ b} of {@link #solve} ({@code x = W⁻¹ Aᵀ λ}): with {@code W} the mass
+     * matrix they are the impulses per constraint row (over the mass).
+     *
+     * @param rows the rows of A (p × n)
+     * @param inverseWeight the diagonal of {@code W⁻¹} (n)
+     * @param b the right-hand side (p)
+     * @return λ (p)
+     */
+    static double[] multipliers(double[][] rows, double[] inverseWeight, double[] b) {
         int p = rows.length;
         int n = inverseWeight.length;
         DMatrixRMaj aw = new DMatrixRMaj(p, p);
@@ -44,14 +68,6 @@ final class LeastNorm {
             }
             lambda[i] = s;
         }
-        double[] x = new double[n];
-        for (int c = 0; c < n; c++) {
-            double s = 0;
-            for (int i = 0; i < p; i++) {
-                s += rows[i][c] * lambda[i];
-            }
-            x[c] = inverseWeight[c] * s;
-        }
-        return x;
+        return lambda;
     }
 }

@@ -15,12 +15,14 @@ import org.trundle.core.BallState;
 import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EventKind;
+import org.trundle.core.Integrator;
 import org.trundle.core.Phase;
 import org.trundle.core.PhaseSpan;
 import org.trundle.core.RunEvent;
 import org.trundle.core.RunObserver;
 import org.trundle.core.Sample;
 import org.trundle.core.SampleContact;
+import org.trundle.core.Slab;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.Surface;
 
@@ -74,6 +76,10 @@ final class Run {
     double t;
     double[] y;
     double endTime;
+    /** In free flight: the time from which no patch can be met again ({@link LeaveCheck}); +∞ otherwise. */
+    double flightClear = Double.POSITIVE_INFINITY;
+    /** Every patch's slabs ({@code Surface#extent}), asked on the first flight; null before. */
+    List<List<Slab>> extents;
 
     final List<RunEvent> events = new ArrayList<>();
     final List<PhaseSpan> spans = new ArrayList<>();
@@ -90,6 +96,13 @@ final class Run {
     /** Drive work received in impulses (impacts, sticking, settling) from a moving patch (J). */
     double impulseDrive;
     long steps;
+    /**
+     * Fixed step (s) of the symmetric integrator for rolling and flight segments, or 0 for Dormand–Prince
+     * throughout (see {@code Segment#symmetricApplies}).
+     */
+    final double fixedStep;
+    /** The symmetric integrator's base method. */
+    final MidpointComposition composition;
     /** Step size (s) the next segment starts with, after a projection restart; 0: Hipparchus' own estimate. */
     double restartStep;
     int sampleIndex;
@@ -128,6 +141,8 @@ final class Run {
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
         this.dyn.stageObserver = snapshots::stageAtStepEnd;
+        this.fixedStep = set.integrator() == Integrator.SYMMETRIC_PROJECTION ? set.fixedStep() : 0.0;
+        this.composition = MidpointComposition.ofOrder(set.symmetricOrder());
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.trundle.core.engine;
 
+import org.hipparchus.ode.AbstractIntegrator;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
@@ -10,7 +11,8 @@ import org.trundle.core.Phase;
 import org.trundle.core.RunObserver;
 
 /**
- * The Hipparchus adapter: integrates one segment of constant phase with Dormand–Prince 8(5,3) on
+ * The Hipparchus adapter: integrates one segment of constant phase with Dormand–Prince 8(5,3), or with
+ * the {@link SymmetricProjectionIntegrator} when the settings ask for it in rolling and flight, on
  * the phase's compact layout, watching the {@link SwitchRule}s of that phase, until the first
  * switch or the end time. Its step observer samples, keeps the last good state and the ledger, and
  * leaves the integration ({@link ProjectionRestart}) when a step end has drifted past the projection
@@ -25,6 +27,16 @@ final class Segment {
     private final int[][][] layouts;
     /** The rule whose switch stopped the segment, or null. */
     SwitchRule fired;
+    /** The time the current segment started at (s). */
+    double startTime;
+    /** The right-hand side's observer of Dormand–Prince's step-end stage (off on symmetric segments). */
+    private final Dynamics.StageObserver stageObserver;
+    /**
+     * Whether the current segment runs on the symmetric integrator, whose step ends are on the manifold
+     * to rounding already: no projection restart (with a projection threshold set near rounding, a
+     * restart after every step would only cost).
+     */
+    private boolean symmetricSegment;
 
     Segment(Run run, Transitions transitions) {
         this.run = run;
@@ -47,6 +59,7 @@ final class Segment {
         }
         this.rules = list.toArray(new SwitchRule[0]);
         this.layouts = new int[run.slots.length][Phase.values().length][];
+        this.stageObserver = run.dyn.stageObserver;
     }
 
     /**
@@ -77,13 +90,28 @@ final class Segment {
             abs[i] = run.absTol[layout[i]];
             rel[i] = run.relTol[layout[i]];
         }
-        DormandPrince853Integrator integ = new DormandPrince853Integrator(0.0, run.endTime - run.t + 1e-300, abs, rel);
-        if (run.restartStep > 0) {
-            integ.setInitialStepSize(run.restartStep);
-            run.restartStep = 0;
+        // the smallest step advances the time (a step of zero length would end no step and no check)
+        // a free flight ends where it is clear of every patch for good (LeaveCheck), if that is sooner
+        double until = Math.min(run.endTime, run.flightClear);
+        AbstractIntegrator integ;
+        symmetricSegment = symmetricApplies(phase);
+        if (symmetricSegment) {
+            integ = symmetric(phase, layout);
+            // the implicit stages evaluate many times at one time: that is not Dormand–Prince's step end
+            dyn.stageObserver = null;
+        } else {
+            DormandPrince853Integrator dp = new DormandPrince853Integrator(minStep(run.t), until - run.t + 1e-300,
+                abs, rel);
+            if (run.restartStep > 0) {
+                dp.setInitialStepSize(run.restartStep);
+            }
+            integ = dp;
+            dyn.stageObserver = stageObserver;
         }
+        run.restartStep = 0;
         integ.addStepHandler(new StepObserver());
         fired = null;
+        startTime = run.t;
         if (phase.inContact()) {
             // a switch may hand over a drifted state: start each contact segment well within the
             // projection thresholds (the step observer checks them only at step ends)
@@ -109,7 +137,46 @@ final class Segment {
                 integ.addEventDetector(new SwitchDetector(this, rule));
             }
         }
-        return integ.integrate(dyn, new ODEState(run.t, dyn.beginSegment(layout, run.y)), run.endTime);
+        return integ.integrate(dyn, new ODEState(run.t, dyn.beginSegment(layout, run.y)), until);
+    }
+
+    /**
+     * The smallest step the integrator may take from a time: two units in the last place, so that
+     * the step's end is a later time. A step the error control wants shorter fails the run
+     * ("minimal step size reached") instead of repeating steps that do not advance.
+     *
+     * @param t the segment's start time (s)
+     * @return the step floor (s)
+     */
+    static double minStep(double t) {
+        return 2 * Math.ulp(t);
+    }
+
+    /**
+     * Whether a segment in {@code phase} runs on the {@link SymmetricProjectionIntegrator}: when the
+     * settings ask for it and the phase is rolling or flight on a patch that stands still with a rigid
+     * contact, touching one patch (the reversible phases; sliding, compliant contacts, moving patches and
+     * several simultaneous contacts, whose layout and constraints {@link ContactManifold} does not cover,
+     * keep Dormand–Prince).
+     */
+    private boolean symmetricApplies(Phase phase) {
+        return run.fixedStep > 0 && (phase == Phase.ROLLING || phase == Phase.FLIGHT) && run.compliance == null
+            && !run.slot.moving && !run.contacts.multi();
+    }
+
+    /**
+     * The symmetric integrator of a rolling or flight segment on its compact layout; its implicit stages
+     * stop at the rounding of each component's scale (the absolute tolerance's scale: the radius for
+     * lengths, the speed scale for velocities, …).
+     */
+    private SymmetricProjectionIntegrator symmetric(Phase phase, int[] layout) {
+        double[] scale = new double[layout.length];
+        double tol = run.set.tolerance();
+        for (int i = 0; i < layout.length; i++) {
+            scale[i] = run.absTol[layout[i]] / tol;
+        }
+        return new SymmetricProjectionIntegrator(run.fixedStep, run.composition,
+            new ContactManifold(run, phase == Phase.ROLLING), scale);
     }
 
     /**
@@ -164,7 +231,7 @@ final class Segment {
                     ODEStateAndDerivative si = interpolator.getInterpolatedState(ts);
                     run.emitSample(ts, run.snapshots.fullState(si), phase, false);
                 }
-            } else if (tc < run.endTime && observed) {
+            } else if (tc < Math.min(run.endTime, run.flightClear) && observed) {
                 run.emitSample(tc, yc, phase, false);
             }
             // kinetic energy, centre and slip from the snapshot (every layout starts with the
@@ -213,7 +280,8 @@ final class Segment {
                 // a whole step (no event cut it short) whose end drifted past the thresholds: leave
                 // the integrator and start afresh from the projected state, with the step size
                 // reached (cheaper than a step-end handler, which interpolates every step)
-                if (!interpolator.isCurrentStateInterpolated() && s.drift >= 1 && tc < run.endTime) {
+                if (!symmetricSegment && !interpolator.isCurrentStateInterpolated() && s.drift >= 1
+                    && tc < run.endTime) {
                     run.restartStep = tc - interpolator.getPreviousState().getTime();
                     throw ProjectionRestart.INSTANCE;
                 }

@@ -73,6 +73,10 @@ final class StickRule extends SwitchRule {
             return max;
         }
         ContactSlot slot = multi ? run.contacts.at(position) : null;
+        if (multi && slot.moving) {
+            // the slip rate below is that of a still patch
+            return max;
+        }
         double[] n = multi ? slot.geo.normal : dyn.geo.normal;
         double[] h = multi ? slot.geo.hessian : dyn.geo.hessian;
         double[] slip = multi ? dyn.contactSlip[position] : dyn.slip;

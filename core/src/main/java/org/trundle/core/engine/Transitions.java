@@ -82,11 +82,9 @@ final class Transitions {
         ContactSlot touched = null;
         if (run.slots.length > 1) {
             java.util.List<ContactSlot> all = touchingAll(t, y, tolLen);
-            if (all.size() > 1 && all.stream().noneMatch(s -> s.moving)) {
+            if (all.size() > 1) {
                 return startSeveral(requested, all);
             }
-            // several contacts are solved on still patches only: with a moving one the first patch touched is the
-            // one contact (as with one contact at a time)
             touched = all.isEmpty() ? null : all.get(0);
         }
         if (touched != null) {
@@ -155,9 +153,9 @@ final class Transitions {
     }
 
     /**
-     * A contact start touching several patches at once (issue 12): each must stand still, the velocity must
-     * be tangential to each surface and, for a rolling start, without slip at each contact point (within the
-     * contact tolerance); then the centre is projected onto every surface, the velocity onto every contact's
+     * A contact start touching several patches at once (issue 12): the velocity must be tangential to each
+     * surface (relative to a moving one) and, for a rolling start, without slip at one contact point at least
+     * (within the contact tolerance; a contact that slips starts sliding, event slip); then the centre is projected onto every surface, the velocity onto every contact's
      * constraints, and the modes settle ({@link #settleContacts}).
      */
     private Phase startSeveral(Phase requested, java.util.List<ContactSlot> touched) {
@@ -170,7 +168,7 @@ final class Transitions {
         double tolSpeed = run.set.contactTolerance() * run.speedScale;
         for (ContactSlot s : touched) {
             s.query(t, run.centreOf(y));
-            double vn = ContactKinematics.normalPart(y, V, s.geo.normal);
+            double vn = ContactKinematics.relativeNormalSpeed(s, t, s.geo.normal, y);
             if (Math.abs(vn) > tolSpeed) {
                 throw run.reject(String.format(Locale.ROOT,
                     "start velocity has a normal component %s m/s on surface %s of patch %s (tolerance %s m/s);"
@@ -184,19 +182,25 @@ final class Transitions {
             run.contacts.add(touched.get(i), Mode.ROLLING);
         }
         projectPositionOnContacts(t, y);
+        boolean rollsSomewhere = false;
         for (ContactSlot s : touched) {
             s.query(t, run.centreOf(y));
-            double[] sl = new double[3];
-            ContactKinematics.slip(r, y, V, y, W, s.geo.normal, sl);
+            rollsSomewhere |= Vec.norm(relativeSlip(s, y)) <= tolSpeed;
+        }
+        for (ContactSlot s : touched) {
+            s.query(t, run.centreOf(y));
+            double[] sl = relativeSlip(s, y);
             double sp = Vec.norm(sl);
-            if (requested != Phase.SLIDING && sp > tolSpeed) {
+            if (requested != Phase.SLIDING && sp > tolSpeed && !rollsSomewhere) {
                 throw run.reject(String.format(Locale.ROOT,
                     "start velocity violates the no-slip condition at patch %s by %s m/s (tolerance %s m/s);"
                         + " a ball touching several patches rolls about the line through its contact points:"
                         + " build the start with Simulation.rollingStart(centre, velocity)",
                     s.id, sp, tolSpeed));
             }
-            if (requested == Phase.SLIDING && sp > run.stickEps) {
+            // a rolling start must roll on one patch at least; another whose surface moves differently under the
+            // ball (a turning race and a still one) may slip there: that contact starts sliding (event slip)
+            if ((requested == Phase.SLIDING && sp > run.stickEps) || (requested != Phase.SLIDING && sp > tolSpeed)) {
                 for (int i = 0; i < 3; i++) {
                     s.slideDir[i] = sl[i] / sp;
                 }
@@ -596,49 +600,64 @@ final class Transitions {
      * or plastic impulse per contact, solved together; the pseudo-inverse takes the squeeze between two
      * rolling contacts as zero). The geometry must be queried at the state's centre.
      *
-     * @return the impulse each contact received (N·s), per position
+     * @return the work those impulses receive from moving patches, {@code Σ J_i·u(p_i)} (J; 0 on still patches)
      */
-    double[][] projectVelocityOnContacts(double[] ys) {
+    double projectVelocityOnContacts(double[] ys) {
         ContactSet set = run.contacts;
         int count = set.count();
         java.util.List<double[]> jr = new java.util.ArrayList<>();
         java.util.List<Integer> owner = new java.util.ArrayList<>();
+        java.util.List<Double> goal = new java.util.ArrayList<>();
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
             double[] n = s.geo.normal;
+            double[] c0 = {ys[C], ys[C + 1], ys[C + 2]};
             if (s.mode == Mode.SLIDING) {
                 jr.add(new double[] {n[0], n[1], n[2], 0, 0, 0});
                 owner.add(k);
+                // the normal speed relative to the patch: n·v = n·u(c)
+                double[] uc = new double[3];
+                if (s.moving) {
+                    s.poseAt(run.t).velocityAt(c0, uc);
+                }
+                goal.add(Vec.dot(n, uc));
                 continue;
             }
+            // the contact point moves with the patch: v + r n × ω = u(p)
+            double[] up = ContactKinematics.patchVelocityAtContact(s, run.t, c0, r, n);
             for (int c = 0; c < 3; c++) {
                 double[] e = {c == 0 ? 1 : 0, c == 1 ? 1 : 0, c == 2 ? 1 : 0};
                 double[] en = new double[3];
                 Vec.cross(e, n, en);
                 jr.add(new double[] {e[0], e[1], e[2], r * en[0], r * en[1], r * en[2]});
                 owner.add(k);
+                goal.add(up[c]);
             }
         }
         double[][] rows = jr.toArray(new double[0][]);
+        double[] target = new double[rows.length];
+        for (int p = 0; p < rows.length; p++) {
+            target[p] = goal.get(p);
+        }
         double[] minv = {1 / m, 1 / m, 1 / m, 1 / inertia, 1 / inertia, 1 / inertia};
         double[] b = new double[rows.length];
         for (int p = 0; p < rows.length; p++) {
             double[] row = rows[p];
             b[p] = row[0] * ys[V] + row[1] * ys[V + 1] + row[2] * ys[V + 2]
-                + row[3] * ys[W] + row[4] * ys[W + 1] + row[5] * ys[W + 2];
+                + row[3] * ys[W] + row[4] * ys[W + 1] + row[5] * ys[W + 2] - target[p];
         }
-        double[] dnu = LeastNorm.solve(rows, minv, b);
-        for (int i = 0; i < 3; i++) {
-            ys[V + i] -= dnu[i];
-            ys[W + i] -= dnu[3 + i];
+        double[] lambda = LeastNorm.multipliers(rows, minv, b);
+        double drive = 0;
+        for (int p = 0; p < rows.length; p++) {
+            double[] row = rows[p];
+            for (int i = 0; i < 6; i++) {
+                double d = minv[i] * row[i] * lambda[p];
+                ys[(i < 3 ? V : W - 3) + i] -= d;
+            }
+            // the impulse at the contact point is −λ along the row's linear part; its work on the patch's velocity
+            drive -= lambda[p] * target[p];
         }
-        // the impulse on the ball is −M Δν: split by contact from the linear rows is not unique with a squeeze;
-        // report the total change of momentum on contact 0 (callers use the total)
-        double[][] imp = new double[count][3];
-        for (int i = 0; i < 3; i++) {
-            imp[0][i] = -m * dnu[i];
-        }
-        return imp;
+        return drive;
     }
 
     /**
@@ -664,8 +683,7 @@ final class Transitions {
             ContactSlot s = set.at(k);
             s.query(run.t, run.centreOf(y));
             if (s.mode == Mode.ROLLING) {
-                double[] sl = new double[3];
-                ContactKinematics.slip(r, y, V, y, W, s.geo.normal, sl);
+                double[] sl = relativeSlip(s, y);
                 double sp = Vec.norm(sl);
                 if (sp > run.stickEps) {
                     for (int i = 0; i < 3; i++) {
@@ -684,8 +702,9 @@ final class Transitions {
                 set.at(k).query(run.t, run.centreOf(y));
             }
             double before = run.kinetic(y);
-            projectVelocityOnContacts(y);
-            y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] += before - run.kinetic(y);
+            double drive = projectVelocityOnContacts(y);
+            y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] += before - run.kinetic(y) + drive;
+            run.impulseDrive += drive;
             if (!set.multi()) {
                 break;
             }
@@ -726,6 +745,20 @@ final class Transitions {
         }
         finishSettle();
         return released;
+    }
+
+    /** The slip of the contact point relative to a patch, {@code P((v − u(c)) − r (ω − Ω) × n)} (queried geometry). */
+    private double[] relativeSlip(ContactSlot s, double[] ys) {
+        double[] sl = new double[3];
+        if (s.moving) {
+            double[] vr = new double[3];
+            double[] wr = new double[3];
+            ContactKinematics.relative(s, run.t, ys, vr, wr);
+            ContactKinematics.slip(r, vr, 0, wr, 0, s.geo.normal, sl);
+        } else {
+            ContactKinematics.slip(r, ys, V, ys, W, s.geo.normal, sl);
+        }
+        return sl;
     }
 
     /** After a change of several contacts: one left is the single-contact engine's again. */
@@ -825,47 +858,46 @@ final class Transitions {
      * velocity into the walls already touched removed by plastic impulses there (solved together,
      * {@link #projectVelocityOnContacts}); when the rebound from the new wall is at most the settle speed the
      * new contact begins, else the ball leaves it. Then the modes settle ({@link #settleContacts}).
-     * Only on patches that stand still ({@link ImpactRule#secondContactPossible}); should it be asked with a moving
-     * patch it fails with a {@link RunFailure} naming both patches.
+     * On a moving patch the normal speed, slip and impulses are relative to it, and the impulses' work on the
+     * patch's velocity is booked as drive work.
      */
     void reach(ContactSlot j, BallState before) {
         double[] y = run.y;
         ContactSet set = run.contacts;
-        for (int k = 0; k < set.count(); k++) {
-            if (set.at(k).moving || j.moving) {
-                throw new RunFailure(String.format(Locale.ROOT,
-                    "the ball touching patch %s reached patch %s at t = %s s: several contacts at once are solved"
-                        + " only on patches that stand still (%s moves)",
-                    set.at(k).id, j.id, run.t, j.moving ? j.id : set.at(k).id));
-            }
-        }
         if (run.phase() == Phase.ROLLING && !set.multi()) {
             setDerivedVelocity();
         }
         j.query(run.t, run.centreOf(y));
         double[] n = j.geo.normal.clone();
-        double vn = ContactKinematics.normalPart(y, V, n);
+        double vn = ContactKinematics.relativeNormalSpeed(j, run.t, n, y);
         double before0 = run.kinetic(y);
+        double[] cj = {y[C], y[C + 1], y[C + 2]};
+        double[] upj = ContactKinematics.patchVelocityAtContact(j, run.t, cj, r, n);
         Vector3D impulse;
         EventKind kind;
         boolean joins;
+        double drive;
         if (-vn <= run.settleSpeed) {
             kind = EventKind.TOUCH;
             double[] jn = {-m * vn * n[0], -m * vn * n[1], -m * vn * n[2]};
             for (int i = 0; i < 3; i++) {
                 y[V + i] += jn[i] / m;
             }
+            drive = Vec.dot(jn, upj);
             impulse = new Vector3D(jn[0], jn[1], jn[2]);
             joins = true;
         } else {
             kind = EventKind.IMPACT;
-            double[] s = new double[3];
-            ContactKinematics.slip(r, y, V, y, W, n, s);
+            double[] s = relativeSlip(j, y);
             double e = j.law.restitution().orElse(0.0);
             double jnMag = -(1 + e) * m * vn;
             double f = -k * m / (1 + k);
             double[] jt = {f * s[0], f * s[1], f * s[2]};
             double[] w = {y[W], y[W + 1], y[W + 2]};
+            if (j.moving) {
+                double[] vr = new double[3];
+                ContactKinematics.relative(j, run.t, y, vr, w);
+            }
             if (!j.contextReady) {
                 run.model.access().set(j.ctx, run.ball, j.geo, 0.0, Phase.ROLLING, new double[3], w, false);
                 j.contextReady = true;
@@ -894,13 +926,15 @@ final class Transitions {
                 y[V + i] += jv[i] / m;
                 y[W + i] -= r * nxj[i] / inertia;
             }
+            drive = Vec.dot(jv, upj);
             // the walls already touched hold: no velocity into them (plastic impulses, solved together)
-            pressOnlyOutOf(y);
-            double vn1 = ContactKinematics.normalPart(y, V, n);
+            drive += pressOnlyOutOf(y);
+            double vn1 = ContactKinematics.relativeNormalSpeed(j, run.t, n, y);
             joins = vn1 <= run.settleSpeed;
             impulse = new Vector3D(jv[0], jv[1], jv[2]);
         }
-        run.impactLoss += before0 - run.kinetic(y);
+        run.impactLoss += before0 - run.kinetic(y) + drive;
+        run.impulseDrive += drive;
         if (joins) {
             set.add(j, Mode.ROLLING);
             double lossBefore = y[LOSS + LossKind.SLIDING_FRICTION.ordinal()];
@@ -916,7 +950,7 @@ final class Transitions {
     }
 
     /**
-     * After an impact from flight that left the ball in contact: any other still patch that the ball already
+     * After an impact from flight that left the ball in contact: any other patch that the ball already
      * touches (distance r within the contact tolerance, contact point on the patch) and moves into is reached
      * at once ({@link #reach}), so that a ball landing where two walls meet (the bottom of a groove) does not
      * start its contact segment inside the second wall, where no root of the impact function would be left.
@@ -929,8 +963,7 @@ final class Transitions {
         }
         double tol = run.set.contactTolerance() * r;
         for (ContactSlot s : run.slots) {
-            if (s.mode != Mode.APART || run.contacts.count() >= ContactForceSolver.MAX_CONTACTS
-                || !ImpactRule.secondContactPossible(run, s)) {
+            if (s.mode != Mode.APART || run.contacts.count() >= ContactForceSolver.MAX_CONTACTS) {
                 continue;
             }
             double[] full = run.y.clone();
@@ -955,31 +988,47 @@ final class Transitions {
      * impulse elsewhere), by the projection of {@link #projectVelocityOnContacts} restricted to their normal
      * rows: the walls the ball moves away from are left alone.
      */
-    private void pressOnlyOutOf(double[] y) {
+    private double pressOnlyOutOf(double[] y) {
         ContactSet set = run.contacts;
         int count = set.count();
         java.util.List<double[]> into = new java.util.ArrayList<>();
+        java.util.List<Double> speeds = new java.util.ArrayList<>();
+        java.util.List<double[]> points = new java.util.ArrayList<>();
+        double[] c0 = {y[C], y[C + 1], y[C + 2]};
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
             s.query(run.t, run.centreOf(y));
-            if (ContactKinematics.normalPart(y, V, s.geo.normal) < 0) {
+            double vn = ContactKinematics.relativeNormalSpeed(s, run.t, s.geo.normal, y);
+            if (vn < 0) {
                 into.add(s.geo.normal.clone());
+                speeds.add(vn);
+                points.add(ContactKinematics.patchVelocityAtContact(s, run.t, c0, r, s.geo.normal));
             }
         }
         if (into.isEmpty()) {
-            return;
+            return 0.0;
         }
-        double[] v = {y[V], y[V + 1], y[V + 2]};
         double[][] rows = into.toArray(new double[0][]);
         double[] b = new double[rows.length];
         for (int p = 0; p < rows.length; p++) {
-            b[p] = Vec.dot(rows[p], v);
+            b[p] = speeds.get(p);
         }
-        // normal impulses act through the centre: Δv = −Nᵀ (N Nᵀ)⁺ N v, the spin is unchanged
+        // normal impulses act through the centre: Δv = −Nᵀ (N Nᵀ)⁺ (N v − N u), the spin is unchanged
         double[] dv = LeastNorm.solve(rows, new double[] {1, 1, 1}, b);
         for (int i = 0; i < 3; i++) {
             y[V + i] -= dv[i];
         }
+        // the drive work of those impulses: split Δv by wall (least-norm multipliers) is not needed on still walls
+        double work = 0;
+        if (points.stream().anyMatch(u -> Vec.norm(u) > 0)) {
+            double[] lambda = LeastNorm.multipliers(rows, new double[] {1, 1, 1}, b);
+            for (int p = 0; p < rows.length; p++) {
+                for (int i = 0; i < 3; i++) {
+                    work -= m * lambda[p] * rows[p][i] * points.get(p)[i];
+                }
+            }
+        }
+        return work;
     }
 
     // ---------------------------------------------------------------- kinematics on the run state

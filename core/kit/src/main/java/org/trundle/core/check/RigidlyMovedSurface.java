@@ -1,8 +1,12 @@
 package org.trundle.core.check;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 
 /**
@@ -14,6 +18,8 @@ import org.trundle.core.Surface;
  */
 final class RigidlyMovedSurface implements Surface {
     private final Surface base;
+    private final Rotation rotation;
+    private final Vector3D translation;
     private final double[] m = new double[9];
     private final double bx;
     private final double by;
@@ -21,6 +27,8 @@ final class RigidlyMovedSurface implements Surface {
 
     RigidlyMovedSurface(Surface base, Rotation rotation, Vector3D translation) {
         this.base = base;
+        this.rotation = rotation;
+        this.translation = translation;
         double[][] a = rotation.getMatrix();
         for (int i = 0; i < 3; i++) {
             for (int j = 0; j < 3; j++) {
@@ -86,6 +94,16 @@ final class RigidlyMovedSurface implements Surface {
         out.curvature2 = g.curvature2;
         out.patchMargin = g.patchMargin;
         out.edge = g.edge;
+    }
+
+    /** The base surface's slabs, carried by the motion. */
+    @Override
+    public List<Slab> extent() {
+        List<Slab> out = new ArrayList<>();
+        for (Slab s : base.extent()) {
+            out.add(s.moved(rotation, translation));
+        }
+        return out;
     }
 
     @Override

@@ -1,6 +1,10 @@
 package org.trundle.core.check;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 
 /**
@@ -53,6 +57,16 @@ final class ScaledSurface implements Surface {
         out.curvature2 = g.curvature2 / lambda;
         out.patchMargin = lambda * g.patchMargin;
         out.edge = g.edge;
+    }
+
+    /** The base surface's slabs, scaled by {@code λ} about the origin. */
+    @Override
+    public List<Slab> extent() {
+        List<Slab> out = new ArrayList<>();
+        for (Slab s : base.extent()) {
+            out.add(new Slab(s.direction(), lambda * s.low(), lambda * s.high()));
+        }
+        return out;
     }
 
     @Override

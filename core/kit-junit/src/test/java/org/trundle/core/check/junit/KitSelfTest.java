@@ -1,4 +1,4 @@
-package org.trundle.core.check;
+package org.trundle.core.check.junit;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -10,6 +10,7 @@ import java.util.Arrays;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.trundle.core.check.*;
 import org.trundle.core.BallState;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;
@@ -17,8 +18,6 @@ import org.trundle.core.Phase;
 import org.trundle.core.RunResult;
 import org.trundle.core.Simulation;
 import org.trundle.core.Surface;
-import org.trundle.core.check.junit.KitCases;
-import org.trundle.core.check.junit.PropertyAssertions;
 
 /**
  * The kit tested on itself with a test-only surface (a horizontal floor z = 0, no edges, written
