@@ -15,4 +15,6 @@ module org.trundle.core {
 
     exports org.trundle.core;
     exports org.trundle.core.sweep;
+    // argument checks shared with the sibling library modules; not an API
+    exports org.trundle.core.internal to org.trundle.surfaces, org.trundle.contact, org.trundle.kit;
 }

@@ -1,7 +1,7 @@
 package org.trundle.contact;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Material;
 

@@ -2,7 +2,7 @@ package org.trundle.contact;
 
 import java.util.OptionalDouble;
 
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactLaw;
 
 /**

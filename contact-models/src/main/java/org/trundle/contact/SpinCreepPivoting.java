@@ -1,6 +1,6 @@
 package org.trundle.contact;
 
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactContext;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;

@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import org.trundle.core.internal.Checks;
+
 /**
  * A rigid sphere with isotropic inertia: radius {@code r} (m), mass {@code m} (kg) and inertia
  * factor {@code k = I/(m r²)} (dimensionless), so that the moment of inertia about any axis

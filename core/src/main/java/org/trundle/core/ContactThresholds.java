@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import org.trundle.core.internal.Checks;
+
 /**
  * The thresholds of the contact's switching rules, each relative to the run's scales (ball radius
  * {@code r}, speed scale {@code V = max(|v₀|, r|ω₀|, √(|g| r), 1e-3 m/s)}). Part of

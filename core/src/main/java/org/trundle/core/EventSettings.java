@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import org.trundle.core.internal.Checks;
+
 /**
  * How the solver looks for switching events (lift-off, slip onset, stick, exit, impact, rest).
  * Part of {@link SolverSettings}.

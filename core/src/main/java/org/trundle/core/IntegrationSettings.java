@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import org.trundle.core.internal.Checks;
+
 /**
  * How the solver integrates the motion: the method, the integrator's relative tolerance, the
  * threshold of the projection back onto the constraints, and the fixed step and order of the

@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import org.trundle.core.internal.Checks;
+
 /**
  * An isotropic linear-elastic material: Young's modulus {@code E} (Pa) and Poisson's ratio
  * {@code ν} (dimensionless), as a ball or a wall carries it for the Hertz contact solution.

@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import org.trundle.core.internal.Checks;
+
 /**
  * What a run records and when it stops early: the output sampling, the end at the patch exit and
  * the budget. Part of {@link SolverSettings}.

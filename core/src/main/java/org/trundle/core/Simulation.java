@@ -1,5 +1,7 @@
 package org.trundle.core;
 
+import org.trundle.core.internal.Checks;
+
 import java.util.List;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;

@@ -3,7 +3,7 @@ package org.trundle.surfaces;
 import java.util.Locale;
 
 import org.trundle.core.Box;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceDomainException;

@@ -3,7 +3,7 @@ package org.trundle.surfaces;
 import java.util.List;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.Surface;
 
 /**

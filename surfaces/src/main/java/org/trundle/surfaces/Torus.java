@@ -5,7 +5,7 @@ import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Slab;
 import org.trundle.core.Surface;

@@ -3,7 +3,7 @@ package org.trundle.core.check;
 import java.util.SplittableRandom;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 
 /**
  * Draws gravitational accelerations (m/s²): a magnitude from an {@link Interval} and a direction

@@ -10,7 +10,7 @@ import org.hipparchus.geometry.euclidean.threed.RotationConvention;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EndReason;

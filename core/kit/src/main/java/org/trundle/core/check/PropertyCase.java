@@ -3,7 +3,7 @@ package org.trundle.core.check;
 import java.util.Locale;
 
 import org.trundle.core.BallState;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.Simulation;
 
 /**

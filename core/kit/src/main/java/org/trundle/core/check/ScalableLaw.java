@@ -49,7 +49,7 @@ public final class ScalableLaw implements ContactLaw {
      * @return this law with its lengths multiplied by lambda
      */
     public ScalableLaw scaled(double lambda) {
-        return new ScalableLaw(build, factor * org.trundle.core.Checks.positive("lambda", lambda));
+        return new ScalableLaw(build, factor * org.trundle.core.internal.Checks.positive("lambda", lambda));
     }
 
     @Override

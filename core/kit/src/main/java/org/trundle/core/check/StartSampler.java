@@ -5,7 +5,7 @@ import java.util.SplittableRandom;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.BallState;
-import org.trundle.core.Checks;
+import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactGeometry;
 import org.trundle.core.Phase;
 import org.trundle.core.Simulation;

@@ -1,4 +1,4 @@
-package org.trundle.core;
+package org.trundle.core.internal;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
