@@ -8,15 +8,18 @@ import org.trundle.core.BallState;
 import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.Simulation;
+import org.trundle.core.Patch;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.Surface;
+import org.trundle.core.SurfaceMotion;
 
 /**
  * A {@link CaseSource} assembled from samplers: for case {@code i} of seed {@code s} it draws, from
  * {@link Draws#forCase(long, int)}, a ball, a surface for it, a law, a gravity vector and a start.
  * A draw whose parts do not fit together (the simulation rejects the ball, or no start is found in
  * the region) is redrawn from the same random stream, at most 20 times, so the case stays a
- * function of {@code (s, i)}.
+ * function of {@code (s, i)}. With a {@link Builder#neighbour} sampler each case is a two-patch
+ * scene: the drawn surface and a second patch drawn beside it.
  *
  * <pre>{@code
  * CaseSource cases = CaseRecipe.builder()
@@ -43,6 +46,8 @@ public final class CaseRecipe implements CaseSource {
     private final SolverSettings settings;
     /** Motion of the drawn surfaces, or null for still ones. */
     private final MotionSampler motions;
+    /** Second patch of a two-patch scene, or null for one surface. */
+    private final PatchSampler neighbour;
 
     private CaseRecipe(Builder b) {
         if (b.surfaces == null || b.laws == null || b.starts == null) {
@@ -58,6 +63,7 @@ public final class CaseRecipe implements CaseSource {
         this.duration = b.duration;
         this.settings = b.settings;
         this.motions = b.motions;
+        this.neighbour = b.neighbour;
     }
 
     /** @return a builder with default balls, gravity 9.81 m/s² in any direction, 0.1 s duration */
@@ -75,11 +81,14 @@ public final class CaseRecipe implements CaseSource {
                 Surface surface = surfaces.draw(rnd, ball);
                 ContactLaw law = laws.draw(rnd, ball);
                 Vector3D g = gravity.draw(rnd);
-                Simulation.Builder sb = Simulation.builder().ball(ball).surface(surface).law(law).gravity(g)
-                    .settings(settings);
-                if (motions != null) {
-                    // drawn only when asked for, so that recipes without motion keep their cases
-                    sb.motion(motions.draw(rnd, ball, surface));
+                Simulation.Builder sb = Simulation.builder().ball(ball).law(law).gravity(g).settings(settings);
+                // drawn only when asked for, so that recipes without motion or neighbour keep their cases
+                SurfaceMotion motion = motions == null ? SurfaceMotion.NONE : motions.draw(rnd, ball, surface);
+                if (neighbour == null) {
+                    sb.surface(surface).motion(motion);
+                } else {
+                    sb.patch(new Patch(Simulation.SINGLE_PATCH, surface, motion, null))
+                        .patch(neighbour.draw(rnd, ball, surface));
                 }
                 Simulation sim = sb.build();
                 BallState start = starts.draw(rnd, sim);
@@ -103,6 +112,7 @@ public final class CaseRecipe implements CaseSource {
         private double duration = 0.1;
         private SolverSettings settings = SolverSettings.defaults();
         private MotionSampler motions;
+        private PatchSampler neighbour;
 
         private Builder() {
         }
@@ -185,6 +195,16 @@ public final class CaseRecipe implements CaseSource {
          */
         public Builder motions(MotionSampler m) {
             this.motions = m;
+            return this;
+        }
+
+        /**
+         * @param p sampler of a second patch beside the drawn surface (none by default: one surface);
+         *     with it every case is a two-patch scene
+         * @return this builder
+         */
+        public Builder neighbour(PatchSampler p) {
+            this.neighbour = p;
             return this;
         }
 

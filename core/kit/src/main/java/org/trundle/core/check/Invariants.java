@@ -15,6 +15,7 @@ import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EndReason;
 import org.trundle.core.EventKind;
+import org.trundle.core.Patch;
 import org.trundle.core.Phase;
 import org.trundle.core.RunEvent;
 import org.trundle.core.Sample;
@@ -118,6 +119,45 @@ public final class Invariants {
             double neg = Math.max(0, -Math.min(Math.min(b.slidingFrictionLoss(), b.rollingResistanceLoss()),
                 Math.min(Math.min(b.pivotingResistanceLoss(), b.otherCoupleLoss()), b.impactLoss()))) / b.scale();
             return Verdict.measured("energy budget closes", Math.max(b.relativeResidual(), neg), bound, b.toString());
+        };
+    }
+
+    /**
+     * Determinism: two runs of the same case give bit-identical results (same inputs, same
+     * outputs: the project's rule). Worst deviation: the number of samples, events and end-state
+     * that differ between the runs (states compared bit for bit: time, centre, velocity,
+     * orientation quaternion, spin and phase; events by kind, time bits and phase after).
+     *
+     * @return the invariant (bound 0)
+     */
+    public static Invariant deterministic() {
+        return c -> {
+            Trajectory a = Trajectory.run(c.simulation(), c.start(), c.duration());
+            Trajectory b = Trajectory.run(c.simulation(), c.start(), c.duration());
+            int bad = Math.abs(a.samples.size() - b.samples.size());
+            String first = bad == 0 ? "" : "sample counts " + a.samples.size() + " vs " + b.samples.size();
+            for (int i = 0; i < Math.min(a.samples.size(), b.samples.size()); i++) {
+                if (!sameBits(a.samples.get(i).state(), b.samples.get(i).state())) {
+                    first = bad == 0 ? "sample " + i + ": " + a.samples.get(i) + " vs " + b.samples.get(i) : first;
+                    bad++;
+                }
+            }
+            boolean sameEvents = a.result.events().size() == b.result.events().size();
+            for (int i = 0; sameEvents && i < a.result.events().size(); i++) {
+                RunEvent x = a.result.events().get(i);
+                RunEvent y = b.result.events().get(i);
+                sameEvents = x.kind() == y.kind() && x.phaseAfter() == y.phaseAfter()
+                    && Double.doubleToLongBits(x.time()) == Double.doubleToLongBits(y.time());
+            }
+            if (!sameEvents) {
+                first = bad == 0 ? "events " + a.result.events() + " vs " + b.result.events() : first;
+                bad++;
+            }
+            if (!sameBits(a.result.endState(), b.result.endState())) {
+                first = bad == 0 ? "end " + a.result.endState() + " vs " + b.result.endState() : first;
+                bad++;
+            }
+            return Verdict.measured("deterministic", bad, 0, bad == 0 ? a.samples.size() + " samples" : first);
         };
     }
 
@@ -259,7 +299,8 @@ public final class Invariants {
     }
 
     /**
-     * Frame invariance: moving the surface (and its motion, if it moves), the gravity and the start
+     * Frame invariance: moving the surface (and its motion, if it moves; in a scene every patch
+     * and its motion), the gravity and the start
      * together by the rigid motion {@code x ↦ R x + b} moves the trajectory the same way (Newton–Euler and the contact
      * conditions are Euclidean-invariant: common practice). Both runs are sampled at 16 equal
      * intervals; worst deviation over the samples and the end state: the largest of
@@ -282,13 +323,7 @@ public final class Invariants {
         String name = "frame invariant";
         return c -> {
             Simulation sim = sampled(c.simulation(), c.simulation().settings().withSampleInterval(c.duration() / 16));
-            Simulation.Builder mb = sim.toBuilder()
-                .surface(new RigidlyMovedSurface(sim.surface(), rotation, translation))
-                .gravity(rotation.applyTo(sim.gravity()));
-            if (!sim.motion().stationary()) {
-                mb.motion(new RigidlyMovedMotion(sim.motion(), rotation, translation));
-            }
-            Simulation moved = mb.build();
+            Simulation moved = movedRigidly(sim, rotation, translation);
             BallState s0 = c.start();
             BallState m0 = BallState.of(s0.time(), rotation.applyTo(s0.centre()).add(translation),
                 rotation.applyTo(s0.velocity()), rotation.applyTo(s0.orientation()), rotation.applyTo(s0.spin()),
@@ -543,6 +578,42 @@ public final class Invariants {
             h += x * x;
         }
         return Math.max(1.0, c.duration() * Math.sqrt(h) * c.speedScale());
+    }
+
+    private static boolean sameBits(BallState x, BallState y) {
+        Rotation p = x.orientation();
+        Rotation q = y.orientation();
+        double[] u = {x.time(), p.getQ0(), p.getQ1(), p.getQ2(), p.getQ3()};
+        double[] w = {y.time(), q.getQ0(), q.getQ1(), q.getQ2(), q.getQ3()};
+        boolean same = x.phase() == y.phase() && x.centre().equals(y.centre()) && x.velocity().equals(y.velocity())
+            && x.spin().equals(y.spin());
+        for (int i = 0; same && i < u.length; i++) {
+            same = Double.doubleToLongBits(u[i]) == Double.doubleToLongBits(w[i]);
+        }
+        return same;
+    }
+
+    /** The simulation with every patch, its motion and the gravity moved by {@code x ↦ R x + b}. */
+    private static Simulation movedRigidly(Simulation sim, Rotation rotation, Vector3D translation) {
+        List<Patch> patches = sim.patches();
+        if (patches.size() == 1 && patches.get(0).id().equals(Simulation.SINGLE_PATCH)) {
+            Simulation.Builder mb = sim.toBuilder()
+                .surface(new RigidlyMovedSurface(sim.surface(), rotation, translation))
+                .gravity(rotation.applyTo(sim.gravity()));
+            if (!sim.motion().stationary()) {
+                mb.motion(new RigidlyMovedMotion(sim.motion(), rotation, translation));
+            }
+            return mb.build();
+        }
+        Simulation.Builder mb = Simulation.builder().ball(sim.ball()).law(sim.law()).load(sim.load())
+            .settings(sim.settings()).gravity(rotation.applyTo(sim.gravity()));
+        sim.compliance().ifPresent(mb::compliance);
+        for (Patch p : patches) {
+            mb.patch(new Patch(p.id(), new RigidlyMovedSurface(p.surface(), rotation, translation),
+                p.motion().stationary() ? p.motion() : new RigidlyMovedMotion(p.motion(), rotation, translation),
+                p.law()));
+        }
+        return mb.build();
     }
 
     private static Simulation sampled(Simulation sim, SolverSettings s) {
