@@ -65,6 +65,36 @@ class AssemblyScenarioTest {
     }
 
     /**
+     * The same groove run past its end (0.25 m long, the ball starting 0.02 m along it): both walls end together,
+     * so the ball leaves both at once when its centre is 0.25 m along, at {@code t = √(2 (0.25 − 0.02) / a)},
+     * {@code a = g sin θ / (1 + k r²/r_e²)}, {@code r_e = r sin 45°} (rolling about the chord, textbook, from
+     * memory), and the run ends there ({@code stop_at_exit}). It used to exit the first wall only and roll on the
+     * second past the groove's end. Tolerance 1e-8 relative: the integration tolerance over about 140 steps.
+     */
+    @Test
+    void grooveExampleLeavesBothWallsAtTheGroovesEnd() throws IOException {
+        Path out = dir.resolve("groove-end");
+        Cli.Result r = Cli.run("run", "../scenarios/v-groove-feeder.json", "--out", out.toString(), "--no-plot",
+            "--duration", "1.5");
+        assertEquals(0, r.code(), r.err() + r.out());
+        double g = 9.81;
+        double theta = Math.toRadians(10);
+        double ratio = 0.4 / (Math.sin(Math.toRadians(45)) * Math.sin(Math.toRadians(45)));
+        double a = g * Math.sin(theta) / (1 + ratio);
+        double tExit = Math.sqrt(2 * (0.25 - 0.02) / a);
+        JsonNode s = ScenarioFiles.JSON.readTree(out.resolve("summary.json").toFile());
+        assertEquals("exit", s.get("end_reason").asText());
+        assertEquals(tExit, s.get("end_time").asDouble(), 1e-8 * tExit);
+        java.util.Set<String> left = new java.util.TreeSet<>();
+        for (JsonNode e : s.get("events")) {
+            assertEquals("exit", e.get("kind").asText(), e.toString());
+            assertEquals(tExit, e.get("time").asDouble(), 1e-8 * tExit);
+            left.add(e.get("patch").asText());
+        }
+        assertEquals(java.util.Set.of("left", "right"), left);
+    }
+
+    /**
      * {@code v-groove-feeder.json} (invented data): an 8 mm steel ball (m = 2.1 g, k = 2/5) rolls down a 90° aluminium
      * groove on a 10° slope on both walls at once. Per wall, from the statics of the cross-section (textbook statics,
      * from memory): {@code N = m g cos θ / (2 sin(α/2))}; the friction rolling needs, along the groove, split evenly:

@@ -13,7 +13,8 @@ import org.trundle.core.Phase;
  * to it (event {@code handover}); otherwise the ball leaves every patch: the run ends there
  * ({@code stopAtExit}) or goes on in flight. Watched in contact on patches with edges. With several
  * contacts it watches the active one (the first touched): its exit ends that contact and the others go
- * on; the edges of the other touched patches are not watched (a limit of this version).
+ * on, and one that is already past its own edge (walls ending together) leaves at once as well; the edges of
+ * the other touched patches are not watched while the first one touches (a limit of this version).
  */
 final class ExitRule extends SwitchRule {
     ExitRule(Run run) {
@@ -60,6 +61,14 @@ final class ExitRule extends SwitchRule {
         if (run.contacts.multi()) {
             // one contact of several leaves its patch: the others go on (no hand-over while touching several)
             x.release(run.slot, EventKind.EXIT, edge, before);
+            // walls that end together (a groove's or two rails' ends): the contact that goes on may be past its
+            // own edge already, and an event search never sees a value that starts negative, so it leaves now
+            if (run.phase().inContact() && run.surface.hasEdges()) {
+                run.slot.query(run.t, run.centreOf(run.y));
+                if (run.slot.geo.patchMargin < 0) {
+                    return react(x, before);
+                }
+            }
             return null;
         }
         if (run.phase() == Phase.ROLLING) {
