@@ -222,6 +222,39 @@ class SeveralContactsTest {
     }
 
     /**
+     * A groove whose second wall ends before the first: the minus wall (the second contact) ends 0.10 m along the
+     * groove, the plus wall (the first) 0.20 m along. Rolling from rest on both at {@code a = g sinθ/2.6} (as
+     * above), the contact point on the minus wall ({@code c − r n}, {@code n} normal to the axis, so at the centre's
+     * axial coordinate) reaches its end at {@code t = √(2 · 0.10 / a)}: the minus contact exits there, with that
+     * wall's edge named, and the ball goes on touching the plus wall alone. Tolerance 1e-8 relative: the event
+     * search's time tolerance and the integration error over about 80 steps at tolerance 1e-11. (The second
+     * contact's edge used to go unwatched while the first touched: the ball rolled on past the minus wall's end.)
+     */
+    @Test
+    void aSecondWallThatEndsFirstIsLeftAtItsEnd() {
+        double theta = Math.toRadians(10);
+        VGroove v = groove60();
+        org.trundle.core.Surface plus = org.trundle.surfaces.Bounded.of(v.plusWall())
+            .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, -1, 0.20).build();
+        org.trundle.core.Surface minus = org.trundle.surfaces.Bounded.of(v.minusWall())
+            .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, -1, 0.10).build();
+        Simulation sim = scene(gravity(theta), new Coulomb(0.5, 0.5, 0.0), plus, minus);
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), 0.7, samples::add);
+        double a = G * Math.sin(theta) / 2.6;
+        double tEnd = Math.sqrt(2 * 0.10 / a);
+        assertTrue(!res.events().isEmpty(), res + " " + samples.get(0) + " " + samples.get(samples.size() - 1));
+        RunEvent exit = res.events().get(0);
+        assertEquals(EventKind.EXIT, exit.kind(), res.events().toString());
+        assertEquals("minus", exit.patch(), res.events().toString());
+        assertEquals("axial_to", exit.edge(), res.events().toString());
+        assertEquals(tEnd, exit.time(), 1e-8 * tEnd);
+        assertEquals(0.10, exit.before().centre().getX(), 1e-8);
+        Sample after = samples.stream().filter(s -> s.time() > tEnd + 0.01).findFirst().orElseThrow();
+        assertEquals(List.of("plus"), after.contacts(), after.toString());
+    }
+
+    /**
      * A groove wall that moves (design notes §9): the plus wall slides along the groove at {@code V} like a belt,
      * the minus wall stands still. Rolling without slip on both, the ball's centre moves at {@code V/2} plus the
      * still groove's motion (the contact points move at {@code V} and 0; the constraints differentiated are
