@@ -202,6 +202,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     double pivotNeeded;
     /** The law's set-valued pivoting couple (N·m) of the last rolling evaluation; only with {@link #pivotStick}. */
     double pivotLimit;
+    /**
+     * Whether the last evaluation set {@link #normalSpin}, {@link #pivotNeeded} and {@link #pivotLimit} for the
+     * contact that may hold its spin about the normal ({@link ContactSet#pivotSlot}).
+     */
+    boolean pivotValid;
+    /** With several contacts: per position, the law's couple about that contact's normal (N·m). */
+    private final double[] contactCoupleN = new double[ContactForceSolver.MAX_CONTACTS];
+    /** With several contacts: the change of the angular acceleration (rad/s²) made by a pivoting hold. */
+    private final double[] pivotFix = new double[3];
     /** Receives the state and results of an integrator stage evaluated at the same time as the one before. */
     interface StageObserver {
         void stage(double t, double[] compact, double[] full, double[] fullDot);
@@ -483,6 +492,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         drivePower = 0;
         lossDamp = 0;
         pressing = false;
+        pivotValid = false;
         // one method per phase keeps each small enough for the JIT to inline its callees
         if (phase != Phase.FLIGHT && contacts != null && contacts.multi()) {
             multiForces(t, y, yDot);
@@ -698,6 +708,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             normalSpin = sn;
             pivotNeeded = needed;
             pivotLimit = law.pivotStickLimit(ctx);
+            pivotValid = true;
             if (slot.pivotHeld) {
                 // held: the law's couple about the normal (single-valued parts vanish at zero spin)
                 // is replaced by the needed one, and its power with it
@@ -1206,6 +1217,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         boolean anyCouples = false;
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
+            contactCoupleN[k] = 0;
             s.query(t, c);
             readyContext(s);
             contactDistance[k] = s.geo.distance;
@@ -1262,6 +1274,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
                 for (int i = 0; i < 3; i++) {
                     tau[i] += ct[i];
                 }
+                contactCoupleN[k] = dot(ct, s.geo.normal);
                 if (s.moving) {
                     // the couple's power on the patch's spin is drive work (design notes §9)
                     drivePower += dot(ct, s.pose.spin);
@@ -1305,6 +1318,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
                 contactGrip[k] = gl;
             }
         }
+        pivotHold(set, contactNormal);
         // position 0 in the single-contact fields (samples, the ledger, the rules of the active slot)
         normalForce = contactNormal[0];
         neededTangential = contactNeeded[0];
@@ -1329,7 +1343,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[V] = a[0];
         yDot[V + 1] = a[1];
         yDot[V + 2] = a[2];
-        rotationRates(y, w[0], w[1], w[2], al[0], al[1], al[2], yDot);
+        rotationRates(y, w[0], w[1], w[2], al[0] + pivotFix[0], al[1] + pivotFix[1], al[2] + pivotFix[2], yDot);
         yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide;
         yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
         yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
@@ -1338,6 +1352,49 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
         yDot[DAMPING] = 0;
         yDot[DRIVE] = drivePower;
+    }
+
+    /**
+     * With several contacts, the exact pivoting stick of the one rolling contact whose spin about its normal is
+     * free ({@link ContactSet#pivotSlot}: every other contact slides). Its couple about its normal {@code n}
+     * enters nothing else: not its own no-slip constraint ({@code α × n} has no part along {@code n}), not a
+     * sliding contact's normal constraint ({@code n_j·(α × n_j) = 0}) nor its friction ({@code μ N_j} against
+     * the slip). So, as for one contact, {@code d(ω·n)/dt = τ·n/I + ω·(H v)} and the couple that keeps
+     * {@code ω·n} constant is {@code M = −I ω·(H v) − (τ·n − M_law)}, with {@code τ·n = I α·n} the solve's total
+     * and {@code M_law} the law's couple about {@code n}. Sets {@link #normalSpin}, {@link #pivotNeeded},
+     * {@link #pivotLimit}; while held, the law's couple about {@code n} is replaced by {@code M} (the change of
+     * the angular acceleration in {@link #pivotFix}) and its power with it in the pivoting loss.
+     */
+    private void pivotHold(ContactSet set, double[] normals) {
+        pivotFix[0] = 0;
+        pivotFix[1] = 0;
+        pivotFix[2] = 0;
+        ContactSlot s = set.pivotSlot();
+        if (s == null) {
+            return;
+        }
+        int k = set.positionOf(s);
+        double[] n = s.geo.normal;
+        double[] h = s.geo.hessian;
+        double hvx = h[0] * vel[0] + h[1] * vel[1] + h[2] * vel[2];
+        double hvy = h[3] * vel[0] + h[4] * vel[1] + h[5] * vel[2];
+        double hvz = h[6] * vel[0] + h[7] * vel[1] + h[8] * vel[2];
+        double sn = dot(w, n);
+        double lawN = contactCoupleN[k];
+        double needed = -inertia * (w[0] * hvx + w[1] * hvy + w[2] * hvz) - (inertia * dot(solver.angularAcceleration(), n) - lawN);
+        double[] spin = contactSpin[k];
+        access.setRolling(s.ctx, normals[k], spin[0], spin[1], spin[2], false);
+        normalSpin = sn;
+        pivotNeeded = needed;
+        pivotLimit = s.law.pivotStickLimit(s.ctx);
+        pivotValid = true;
+        if (s.pivotHeld) {
+            double d = (needed - lawN) / inertia;
+            pivotFix[0] = d * n[0];
+            pivotFix[1] = d * n[1];
+            pivotFix[2] = d * n[2];
+            lossPivot += (lawN - needed) * sn;
+        }
     }
 
     /**
