@@ -380,6 +380,51 @@ class SeveralContactsTest {
     }
 
     /**
+     * Rest relative to moving walls: the groove on a carriage accelerating along the groove at
+     * {@code A = g sinθ} (the slope's pull exactly): in the carriage's frame the gravity along the groove is
+     * {@code g sinθ − A = 0} (d'Alembert, as above), so a ball placed at rest in the groove stays at rest relative
+     * to it; the run ends at rest at once, and the walls carry the ball as on a level groove,
+     * {@code N = m g cosθ/(2 sin 30°)} each (statics across the groove; common practice), to 1e-12. With
+     * {@code A = 0.999 g sinθ} the ball creeps down the groove and no rest is found in 0.3 s (it used to be that
+     * no rest was ever found with several moving walls).
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {1.0, 0.999})
+    void aBallRestsInAGrooveOnACarriageThatCancelsTheSlope(double factor) {
+        double theta = Math.toRadians(10);
+        double acc = factor * G * Math.sin(theta);
+        SurfaceMotion carriage = new SurfaceMotion() {
+            @Override
+            public void at(double time, org.trundle.core.MotionState out) {
+                out.setIdentity();
+                out.offset[0] = 0.5 * acc * time * time;
+                out.velocity[0] = acc * time;
+                out.acceleration[0] = acc;
+            }
+        };
+        VGroove v = groove60();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))
+            .patch(Patch.of("minus", v.minusWall()).withMotion(carriage))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11)).build();
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), 0.3, samples::add);
+        if (factor == 1.0) {
+            assertEquals(EndReason.REST, res.endReason(), res.toString());
+            assertEquals(0.0, res.endState().time());
+            double n = M * G * Math.cos(theta) / (2 * Math.sin(Math.toRadians(30)));
+            Sample last = samples.get(samples.size() - 1);
+            assertEquals(2, last.touches().size(), last.toString());
+            for (SampleContact c : last.touches()) {
+                assertEquals(n, c.normalForce(), 1e-12 * n, c.toString());
+            }
+        } else {
+            assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        }
+    }
+
+    /**
      * Two contacts on a turning patch: a scene of two coincident turntables (the same plane, the same rotation)
      * touched at one point, so that the two contacts' constraints coincide (a system singular beyond the
      * squeeze modes, solved for the minimum-norm forces) and every term of a rotating patch enters the

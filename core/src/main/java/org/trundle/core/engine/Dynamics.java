@@ -209,6 +209,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     boolean pivotValid;
     /** With several contacts: per position, the law's couple about that contact's normal (N·m). */
     private final double[] contactCoupleN = new double[ContactForceSolver.MAX_CONTACTS];
+    /** The rest test on moving patches: the gravity in their common frame (m/s²). */
+    private final double[] restGravity = new double[3];
+    /** The rest test on moving patches: velocity field and frame acceleration of two patches at the centre. */
+    private final double[][] restFrame = new double[4][3];
     /** With several contacts: the change of the angular acceleration (rad/s²) made by a pivoting hold. */
     private final double[] pivotFix = new double[3];
     /** Receives the state and results of an integrator stage evaluated at the same time as the one before. */
@@ -1497,12 +1501,25 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * solve must give no motion ({@code |a| + r|α|} within {@code slack} times {@code |g| + |F_app|/m}), every
      * normal force positive and every contact's friction within its grip (with the same slack). The holding
      * couples of the laws are not asked (at zero spin they are not needed).
+     *
+     * <p>On moving patches rest is relative to them, and it is defined only when every touched patch moves as
+     * one rigid body at this instant ({@link #commonFrame}): in that frame, at zero relative velocity, the
+     * Coriolis force and the curvature terms vanish and the frame acts as the body force
+     * {@code −m a_F(c)}, {@code a_F(c) = D̈ + Ω̇ × q + Ω × (Ω × q)}, {@code q = c − D}, and the couple
+     * {@code −I Ω̇} (the ball turning with the frame; d'Alembert, any rigid-body dynamics text), so the test is the
+     * still one under the gravity {@code g − a_F(c)} and the torque {@code τ_app − I Ω̇}. Patches that move
+     * apart (or a moving and a still one) have no common rest: no rest.
      */
     private boolean canRestOnSeveral(double t, double slack) {
+        double[] gUse = g;
+        System.arraycopy(tApp, 0, tau, 0, 3);
         for (int k = 0; k < contacts.count(); k++) {
             if (contacts.at(k).moving) {
-                // rest relative to several patches that move apart is not defined: no rest
-                return false;
+                if (!commonFrame(t, restGravity, tau)) {
+                    return false;
+                }
+                gUse = restGravity;
+                break;
             }
         }
         zero(vel);
@@ -1515,11 +1532,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             readyContext(s);
             solver.addRolling(s.geo.normal, s.geo.hessian);
         }
-        System.arraycopy(tApp, 0, tau, 0, 3);
-        if (!solver.solve(vel, w, g, fApp, tau)) {
+        if (!solver.solve(vel, w, gUse, fApp, tau)) {
             return false;
         }
-        double scaleA = slack * (norm(g) + norm(fApp) / m) + 1e-300;
+        double scaleA = slack * (norm(gUse) + norm(fApp) / m) + 1e-300;
         double moving = norm(solver.acceleration()) + r * norm(solver.angularAcceleration());
         if (!(moving <= scaleA)) {
             return false;
@@ -1540,6 +1556,61 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             }
         }
         return true;
+    }
+
+    /**
+     * Whether every touched patch moves as one rigid body at time {@code t} at the centre {@code c}: the same
+     * velocity field value {@code u(c)}, spin {@code Ω}, spin rate {@code Ω̇} and frame acceleration
+     * {@code a_F(c)} (to 1e-12 of their scales, so two patches given the same motion pass and patches that move
+     * apart do not). If so, writes the rest test's gravity {@code g − a_F(c)} into {@code gOut} and subtracts
+     * {@code I Ω̇} from {@code tauInOut}.
+     */
+    private boolean commonFrame(double t, double[] gOut, double[] tauInOut) {
+        int count = contacts.count();
+        double[] u0 = restFrame[0];
+        double[] a0 = restFrame[1];
+        double[] uk = restFrame[2];
+        double[] ak = restFrame[3];
+        MotionState p0 = contacts.at(0).poseAt(t);
+        frameFields(p0, u0, a0);
+        double uScale = norm(u0) + norm(p0.spin) * r + 1e-300;
+        double aScale = norm(a0) + norm(g) + norm(p0.spinRate) * r + 1e-300;
+        for (int k = 1; k < count; k++) {
+            MotionState pk = contacts.at(k).poseAt(t);
+            frameFields(pk, uk, ak);
+            if (distance(u0, uk) > 1e-12 * uScale || distance(p0.spin, pk.spin) * r > 1e-12 * uScale
+                || distance(a0, ak) > 1e-12 * aScale || distance(p0.spinRate, pk.spinRate) * r > 1e-12 * aScale) {
+                return false;
+            }
+        }
+        for (int i = 0; i < 3; i++) {
+            gOut[i] = g[i] - a0[i];
+            tauInOut[i] -= inertia * p0.spinRate[i];
+        }
+        return true;
+    }
+
+    /** The velocity field {@code u(c)} and the frame acceleration {@code a_F(c)} of a patch pose at the centre. */
+    private void frameFields(MotionState ps, double[] u, double[] a) {
+        ps.velocityAt(c, u);
+        double[] om = ps.spin;
+        double[] sr = ps.spinRate;
+        double qx = c[0] - ps.offset[0];
+        double qy = c[1] - ps.offset[1];
+        double qz = c[2] - ps.offset[2];
+        double ux = om[1] * qz - om[2] * qy;
+        double uy = om[2] * qx - om[0] * qz;
+        double uz = om[0] * qy - om[1] * qx;
+        a[0] = sr[1] * qz - sr[2] * qy + om[1] * uz - om[2] * uy + ps.acceleration[0];
+        a[1] = sr[2] * qx - sr[0] * qz + om[2] * ux - om[0] * uz + ps.acceleration[1];
+        a[2] = sr[0] * qy - sr[1] * qx + om[0] * uy - om[1] * ux + ps.acceleration[2];
+    }
+
+    private static double distance(double[] a, double[] b) {
+        double x = a[0] - b[0];
+        double y = a[1] - b[1];
+        double z = a[2] - b[2];
+        return Math.sqrt(x * x + y * y + z * z);
     }
 
     /** Thrown when the evaluation budget is used up. */
