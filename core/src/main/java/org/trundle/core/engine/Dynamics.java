@@ -37,7 +37,8 @@ import org.trundle.core.Phase;
  * ({@link ContactSet#multi()}) the forces come from {@link ContactForceSolver} instead (see
  * {@code multiForces}).
  *
- * <p>Several contacts (issue 12; design notes §9): the velocity is integrated (full layout) and the
+ * <p>Several contacts (issue 12; design notes §9): the velocity is integrated (full layout; two rolling
+ * contacts on still patches derive it from the spin, {@code v = r ω × n₀}, on the compact rolling layout) and the
  * solve enforces, per rolling contact {@code i}, {@code a − r α × n_i = r ω × (H_i v)} and per sliding
  * contact {@code n_i·a = −vᵀ H_i v}, with Newton–Euler {@code m a = m g + F_app + Σ F_i},
  * {@code I α = τ − r Σ n_i × F_i}; the squeeze between two rolling contacts, which the motion cannot
@@ -1291,7 +1292,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * Several contacts at once (issue 12; design notes §9): every touching slot's geometry at the centre, the
      * forces and accelerations from {@link ContactForceSolver} (rolling contacts: full force; sliding contacts:
      * normal force, friction {@code μ_i N_i} against the slip), the laws' couples at the normal forces of a
-     * first solve without them, then the solve with them. The velocity is integrated (full layout): the
+     * first solve without them, then the solve with them. The velocity is integrated (full layout), except for
+     * two rolling contacts on still patches ({@link ContactSet#rollingPair}), where it is derived from the spin
+     * as with one contact, {@code v = r ω × n₀} (the active slot's normal; compact rolling layout): the
      * constraints are held by the solve at acceleration level and by the projection onto every contact's
      * manifold ({@link Transitions#projected}). Results per position into the {@code contact*} arrays; position
      * 0 (the active slot) also into the single-contact fields.
@@ -1299,6 +1302,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private void multiForces(double t, double[] y, double[] yDot) {
         ContactSet set = contacts;
         int count = set.count();
+        // two rolling contacts on still patches: the velocity is derived, v = r ω × n₀ (set below)
+        boolean derive = set.rollingPair();
         vel[0] = y[V];
         vel[1] = y[V + 1];
         vel[2] = y[V + 2];
@@ -1309,6 +1314,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
             s.query(t, c);
+            if (k == 0 && derive) {
+                ContactKinematics.noSlipVelocity(r, w[0], w[1], w[2], s.geo.normal, vel, 0);
+            }
             readyContext(s);
             contactDistance[k] = s.geo.distance;
             contactMargin[k] = s.geo.patchMargin;

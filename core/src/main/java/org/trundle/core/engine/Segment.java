@@ -25,6 +25,8 @@ final class Segment {
     private final SwitchRule[] rules;
     /** Integrated layout per patch and phase, built on first use. */
     private final int[][][] layouts;
+    /** Integrated layout of two rolling contacts on still patches, without and with couples, built on first use. */
+    private final int[][] pairLayouts = new int[2][];
     /** The rule whose switch stopped the segment, or null. */
     SwitchRule fired;
     /** The time the current segment started at (s). */
@@ -79,8 +81,10 @@ final class Segment {
         Dynamics dyn = run.dyn;
         dyn.phase = phase;
         int[][] perPhase = layouts[run.slot.index];
-        // several contacts integrate the full layout (the velocity is not derived from one normal)
-        int[] layout = run.contacts.multi() ? StateMapper.identity() : perPhase[phase.ordinal()];
+        // several contacts integrate the full layout (the velocity is not derived from one normal), except
+        // two rolling contacts on still patches: their velocity is derived from the spin, v = r ω × n₀
+        int[] layout = run.contacts.rollingPair() ? pairLayout()
+            : run.contacts.multi() ? StateMapper.identity() : perPhase[phase.ordinal()];
         if (layout == null) {
             // a compliant contact integrates flight with every loss (its friction, couples and damping)
             layout = run.compliant && phase == Phase.FLIGHT ? StateMapper.identity()
@@ -142,6 +146,20 @@ final class Segment {
             }
         }
         return integ.integrate(dyn, new ODEState(run.t, dyn.beginSegment(layout, run.y)), until);
+    }
+
+    /**
+     * The compact rolling layout of two rolling contacts on still patches ({@link ContactSet#rollingPair}):
+     * centre, quaternion, spin and the integrals either contact's law or the load can change; the velocity is
+     * derived ({@code v = r ω × n₀}, as with one contact).
+     */
+    private int[] pairLayout() {
+        boolean couples = run.contacts.at(0).couples || run.contacts.at(1).couples;
+        int i = couples ? 1 : 0;
+        if (pairLayouts[i] == null) {
+            pairLayouts[i] = StateMapper.layout(Phase.ROLLING, couples, run.model.load() != AppliedLoad.NONE, false);
+        }
+        return pairLayouts[i];
     }
 
     /**
