@@ -49,7 +49,11 @@ final class Segment {
         for (ContactSlot s : run.slots) {
             list.add(new ImpactRule(run, s));
         }
-        list.add(new ReleaseRule(run));
+        for (ContactSlot s : run.slots) {
+            if (s.compliance != null) {
+                list.add(new ReleaseRule(run, s));
+            }
+        }
         list.add(new PivotRule(run));
         if (run.slots.length > 1) {
             // the second and third contacts of a scene: their own release, slip and stick
@@ -83,7 +87,7 @@ final class Segment {
             : run.contacts.multi() ? StateMapper.identity() : perPhase[phase.ordinal()];
         if (layout == null) {
             // a compliant contact integrates flight with every loss (its friction, couples and damping)
-            layout = run.compliance != null ? StateMapper.identity()
+            layout = run.compliant && phase == Phase.FLIGHT ? StateMapper.identity()
                 : StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE,
                     run.slot.moving);
             perPhase[phase.ordinal()] = layout;
@@ -178,7 +182,7 @@ final class Segment {
      * keep Dormand–Prince).
      */
     private boolean symmetricApplies(Phase phase) {
-        return run.fixedStep > 0 && (phase == Phase.ROLLING || phase == Phase.FLIGHT) && run.compliance == null
+        return run.fixedStep > 0 && (phase == Phase.ROLLING || phase == Phase.FLIGHT) && !run.compliant
             && !run.slot.moving && !run.contacts.multi();
     }
 
@@ -290,7 +294,7 @@ final class Segment {
             }
             run.lastGoodT = tc;
             run.lastGoodPhase = phase;
-            if (phase == Phase.FLIGHT && run.compliance != null) {
+            if (phase == Phase.FLIGHT && run.compliant) {
                 run.trackForce(tc, yc != null ? yc : run.snapshots.fullState(cur), phase);
             }
             if (phase.inContact()) {
