@@ -229,6 +229,32 @@ class CompliantSceneTest {
     }
 
     /**
+     * A ball dropped with spin onto a compliant turntable (a plane turning about its normal at Ω, off the axis) is
+     * dragged by friction: the table does work on it, {@code ∫(F·u(p) + τ_c·Ω) dt}, and the budget (kinetic,
+     * potential and elastic energy, friction and damping losses, drive work) closes to the integration tolerance's
+     * order; the ball leaves with a velocity turned toward the table's (energy balance; design notes §9).
+     */
+    @Test
+    void aTurningCompliantTableDoesWorkAndTheBudgetCloses() {
+        Compliance c = HertzStiffness.compliance(Material.STEEL, Material.ACRYLIC, 0.7);
+        Coulomb law = new Coulomb(0.4, 0.3, 0.7);
+        Plane table = new Plane(Vector3D.ZERO, Vector3D.PLUS_K);
+        Simulation sim = Simulation.builder().ball(BALL).law(law).gravity(new Vector3D(0, 0, -9.81)).settings(TIGHT)
+            .patch(new Patch("table", table, SurfaceMotion.rotation(Vector3D.PLUS_K, Vector3D.ZERO, 20.0), null, c))
+            .build();
+        RunResult r = sim.run(BallState.flying(new Vector3D(0.05, 0, R + 0.005), new Vector3D(0, 0, -0.3),
+            new Vector3D(10, -20, 30)), 0.1);
+        System.out.printf("turning table: drive work %.6e J, friction %.6e J, damping %.6e J, residual %.2e%n",
+            r.energy().driveWork(), r.energy().slidingFrictionLoss(), r.energy().contactDampingLoss(),
+            r.energy().relativeResidual());
+        assertTrue(r.eventsOf(EventKind.IMPACT).size() >= 1, r.events().toString());
+        assertTrue(Math.abs(r.energy().driveWork()) > 1e-2 * r.energy().scale(), "the table does work");
+        // table velocity at the contact point is along +y (Ω ẑ × 0.05 x̂): friction drags the ball that way
+        assertTrue(r.endState().velocity().getY() > 0, r.endState().toString());
+        assertEquals(0, r.energy().relativeResidual(), 1e-8);
+    }
+
+    /**
      * A rigid and a compliant contact at once are refused at run time with a message naming both patches and the
      * last good state: a ball pressing a soft compliant floor slides into a rigid wall.
      */
