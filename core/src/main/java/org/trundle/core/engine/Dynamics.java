@@ -1298,9 +1298,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * normal force, friction {@code μ_i N_i} against the slip), the laws' couples at the normal forces of a
      * first solve without them, then the solve with them. The velocity is integrated (full layout), except for
      * two rolling contacts on still patches ({@link ContactSet#rollingPair}), where it is derived from the spin
-     * as with one contact, {@code v = r ω × n₀} (the active slot's normal; compact rolling layout): the
-     * constraints are held by the solve at acceleration level and by the projection onto every contact's
-     * manifold ({@link Transitions#projected}). Results per position into the {@code contact*} arrays; position
+     * as with one contact, {@code v = r ω × n₀} (the active slot's normal; compact rolling layout), and the
+     * closed form of {@link RollingPair} solves, reading the geometry in place: the constraints are held by the
+     * solve at acceleration level and by the projection onto every contact's manifold
+     * ({@link Transitions#projected}). Results per position into the {@code contact*} arrays; position
      * 0 (the active slot) also into the single-contact fields.
      */
     private void multiForces(double t, double[] y, double[] yDot) {
@@ -1504,6 +1505,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     /** Loads the solver with the touching contacts and solves with the couple {@link #tau}. */
     private void solveContacts(int count) {
         ContactForceSolver sv = solver;
+        if (contacts.rollingPair()) {
+            // the common case (groove, rails): the closed form, the geometry read in place
+            ContactSlot a = contacts.at(0);
+            ContactSlot b = contacts.at(1);
+            if (!sv.solveRollingPair(a.geo.normal, a.geo.hessian, b.geo.normal, b.geo.hessian, vel, w, g, fApp, tau)) {
+                throw cannotHold(count);
+            }
+            return;
+        }
         sv.clear();
         for (int k = 0; k < count; k++) {
             ContactSlot s = contacts.at(k);
@@ -1520,14 +1530,19 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             }
         }
         if (!sv.solve(vel, w, g, fApp, tau)) {
-            StringBuilder ids = new StringBuilder();
-            for (int k = 0; k < count; k++) {
-                ids.append(k == 0 ? "" : ", ").append(contacts.at(k).id).append(" (")
-                    .append(contacts.at(k).mode.name().toLowerCase(java.util.Locale.ROOT)).append(')');
-            }
-            throw new RunFailure("the contacts on " + ids + " cannot all hold: their constraint system is singular"
-                + " beyond the squeeze between rolling contacts");
+            throw cannotHold(count);
         }
+    }
+
+    /** The failure of a several-contact solve, naming the contacts and their modes. */
+    private RunFailure cannotHold(int count) {
+        StringBuilder ids = new StringBuilder();
+        for (int k = 0; k < count; k++) {
+            ids.append(k == 0 ? "" : ", ").append(contacts.at(k).id).append(" (")
+                .append(contacts.at(k).mode.name().toLowerCase(java.util.Locale.ROOT)).append(')');
+        }
+        return new RunFailure("the contacts on " + ids + " cannot all hold: their constraint system is singular"
+            + " beyond the squeeze between rolling contacts");
     }
 
     /** Gives a slot's law context the ball and the slot's geometry workspace, once. */
