@@ -1153,10 +1153,14 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             up[2] -= r * (om[0] * n[1] - om[1] * n[0]);
         }
         // the integrator's trial stages of a long flight step may land deep in the wall and very fast: hold
-        // the law at an approach of one radius and an approach rate of ten times the impact speed there (no
-        // accepted state comes near either; without the hold such a trial stage could overflow)
+        // the law at an approach of one radius and its damping term at an approach rate of ten times the impact
+        // speed there (without the hold such a trial stage could overflow). The rate hold can bind in accepted
+        // states too: a contact that began grazing (a small v₀, so a large Hunt–Crossley c = χ/v₀) and is then
+        // pressed fast, as a ball rattling between two compliant walls does; the damping power is booked with
+        // the true rate, (F_n − K δ^{3/2}) δ̇, so that the budget closes either way
         delta = Math.min(delta, r);
-        double rate = Math.min(-dot(rv, n), 10 * s.touchSpeed);
+        double trueRate = -dot(rv, n);
+        double rate = Math.min(trueRate, 10 * s.touchSpeed);
         Compliance comp = s.compliance;
         double kh = comp.stiffness(r, sg.curvature1, sg.curvature2);
         double elastic = kh * delta * Math.sqrt(delta);
@@ -1206,7 +1210,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         }
         compliantNormal[s.index] = fn;
         lossSlide += visc * sp * sp;
-        lossDamp += (fn - elastic) * rate;
+        lossDamp += (fn - elastic) * trueRate;
     }
 
     /**
