@@ -60,6 +60,19 @@ class SeveralContactsTest {
         return new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, Math.toRadians(60));
     }
 
+    /** A carriage translating along x from rest at the constant acceleration {@code acc} (m/s²). */
+    private static SurfaceMotion carriage(double acc) {
+        return new SurfaceMotion() {
+            @Override
+            public void at(double time, org.trundle.core.MotionState out) {
+                out.setIdentity();
+                out.offset[0] = 0.5 * acc * time * time;
+                out.velocity[0] = acc * time;
+                out.acceleration[0] = acc;
+            }
+        };
+    }
+
     /** Samples with two contacts, in time order. */
     private static List<Sample> twoContactSamples(List<Sample> all) {
         List<Sample> out = new ArrayList<>();
@@ -354,15 +367,7 @@ class SeveralContactsTest {
     void aGrooveOnAnAcceleratingCarriage() {
         double theta = Math.toRadians(10);
         double acc = 0.8;
-        SurfaceMotion carriage = new SurfaceMotion() {
-            @Override
-            public void at(double time, org.trundle.core.MotionState out) {
-                out.setIdentity();
-                out.offset[0] = 0.5 * acc * time * time;
-                out.velocity[0] = acc * time;
-                out.acceleration[0] = acc;
-            }
-        };
+        SurfaceMotion carriage = carriage(acc);
         VGroove v = groove60();
         Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
             .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))
@@ -393,15 +398,7 @@ class SeveralContactsTest {
     void aBallRestsInAGrooveOnACarriageThatCancelsTheSlope(double factor) {
         double theta = Math.toRadians(10);
         double acc = factor * G * Math.sin(theta);
-        SurfaceMotion carriage = new SurfaceMotion() {
-            @Override
-            public void at(double time, org.trundle.core.MotionState out) {
-                out.setIdentity();
-                out.offset[0] = 0.5 * acc * time * time;
-                out.velocity[0] = acc * time;
-                out.acceleration[0] = acc;
-            }
-        };
+        SurfaceMotion carriage = carriage(acc);
         VGroove v = groove60();
         Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
             .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))
