@@ -14,6 +14,7 @@ import org.apache.hadoop.conf.Configuration;
 import org.apache.hadoop.fs.FileStatus;
 import org.apache.hadoop.fs.FileSystem;
 import org.apache.hadoop.fs.Path;
+import org.apache.spark.SparkContext;
 import org.apache.spark.TaskContext;
 import org.apache.spark.api.java.function.MapPartitionsFunction;
 import org.apache.spark.sql.Column;
@@ -57,6 +58,10 @@ import org.trundle.scenario.SweepRow;
  * local file system and HDFS; not on object stores, where the rename is a copy). A failed or
  * cancelled job deletes the partial folder when it can; if the driver is killed it stays, named
  * {@code .partial-}; so a folder named {@code <out>} is always complete.
+ *
+ * <p><b>Stage names.</b> The jobs of each step carry a readable call site ({@link #STAGE_ROWS},
+ * {@link #STAGE_CSV}, {@link #STAGE_COUNTS}, {@link #STAGE_MAP}) as their name in Spark's status
+ * and user interface; the caller's call site is restored afterwards.
  */
 public final class SparkSweep {
     /** Largest sweep whose regime map gets one marker per run. */
@@ -85,6 +90,18 @@ public final class SparkSweep {
         int bySize = (int) ((n + (long) POINTS_PER_PARTITION - 1) / POINTS_PER_PARTITION);
         return Math.max(1, Math.min(Math.max(byCores, bySize), Math.max(n, 1)));
     }
+
+    /** Name of the Spark jobs and stages that run the points and write the Parquet rows. */
+    public static final String STAGE_ROWS = "trundle sweep: runs to Parquet";
+    /** Name of the Spark jobs and stages that write the CSV in index order (range partitioning, sort). */
+    public static final String STAGE_CSV = "trundle sweep: CSV in index order";
+    /** Name of the Spark jobs and stages that count the outcomes. */
+    public static final String STAGE_COUNTS = "trundle sweep: outcome counts";
+    /** Name of the Spark jobs and stages that aggregate the regime map's markers. */
+    public static final String STAGE_MAP = "trundle sweep: regime map";
+
+    private static final String CALL_SITE_SHORT = "callSite.short";
+    private static final String CALL_SITE_LONG = "callSite.long";
 
     private SparkSweep() {
     }
@@ -215,6 +232,21 @@ public final class SparkSweep {
 
     private static Map<String, Long> write(SparkSession spark, SweepJob job, Path folder, int partitions,
         FileSystem fs) throws IOException {
+        SparkContext sc = spark.sparkContext();
+        String shortSite = sc.getLocalProperty(CALL_SITE_SHORT);
+        String longSite = sc.getLocalProperty(CALL_SITE_LONG);
+        try {
+            return stages(spark, job, folder, partitions, fs);
+        } finally {
+            sc.setLocalProperty(CALL_SITE_SHORT, shortSite);
+            sc.setLocalProperty(CALL_SITE_LONG, longSite);
+        }
+    }
+
+    private static Map<String, Long> stages(SparkSession spark, SweepJob job, Path folder, int partitions,
+        FileSystem fs) throws IOException {
+        SparkContext sc = spark.sparkContext();
+        sc.setCallSite(STAGE_ROWS);
         String parquet = new Path(folder, "rows.parquet").toString();
         rows(spark, job, partitions).write().parquet(parquet);
         Dataset<Row> rows = spark.read().schema(schema(job.names())).parquet(parquet);
@@ -247,6 +279,7 @@ public final class SparkSweep {
             };
         };
         Path csv = new Path(folder, "sweep-csv");
+        sc.setCallSite(STAGE_CSV);
         rows.repartitionByRange(parts, rows.col("index")).sortWithinPartitions("index")
             .mapPartitions(toCsv, Encoders.STRING()).write().text(csv.toString());
         for (FileStatus f : fs.listStatus(csv)) {
@@ -255,12 +288,14 @@ public final class SparkSweep {
                 fs.rename(f.getPath(), new Path(csv, name.substring(0, name.length() - 4) + ".csv"));
             }
         }
+        sc.setCallSite(STAGE_COUNTS);
         Map<String, Long> counts = new LinkedHashMap<>();
         for (Row r : rows.groupBy("outcome").count().orderBy("outcome").collectAsList()) {
             counts.put(r.getString(0), r.getLong(1));
         }
         List<String> names = job.names();
         if (names.size() <= 2) {
+            sc.setCallSite(STAGE_MAP);
             RegimeMap map = new RegimeMap(names, job.labels());
             Column x = rows.col(quote(names.get(0)));
             Column y = names.size() > 1 ? rows.col(quote(names.get(1))) : rows.col("end_time");
