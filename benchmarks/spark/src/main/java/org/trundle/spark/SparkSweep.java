@@ -28,6 +28,7 @@ import org.apache.spark.sql.types.DataType;
 import org.apache.spark.sql.types.DataTypes;
 import org.apache.spark.sql.types.StructField;
 import org.apache.spark.sql.types.StructType;
+import org.apache.spark.storage.StorageLevel;
 import org.trundle.core.sweep.ParameterSpace;
 import org.trundle.report.RegimeMap;
 import org.trundle.scenario.ScenarioException;
@@ -48,10 +49,15 @@ import org.trundle.scenario.SweepRow;
  * <p><b>Outputs</b>, under the output folder: {@code rows.parquet/} (the rows, one file per
  * partition), {@code sweep-csv/} (the same rows as {@link SweepRow#csv()} lines, part files in index
  * order, the header at the top of the first: concatenated, they are the local {@code sweep.csv} byte
- * for byte) and {@code regime-map.png} (for one or two parameters), computed from the Parquet
- * rows. The driver holds only aggregates: the outcome counts and, for the regime map, one
- * marker per run up to {@value #EXACT_MAP} runs, else one per outcome and cell of a
- * {@value #CELLS}×{@value #CELLS} lattice over the parameter ranges.
+ * for byte) and {@code regime-map.png} (for one or two parameters). The computed rows are kept on the
+ * executors' local disks ({@code persist(DISK_ONLY)}, dropped at the end) while the Parquet files and
+ * then the CSV are written from them, partition by partition: each partition is a contiguous index
+ * range in order, so the CSV needs no shuffle or sort, and each point runs once (a lost executor's
+ * partitions are recomputed, with the same rows). The outcome counts and the regime map are Spark
+ * aggregations over the Parquet rows. The driver holds only aggregates: the outcome counts and, for
+ * the regime map, one marker per run up to {@value #EXACT_MAP} runs, else one per outcome and cell of
+ * a {@value #CELLS}×{@value #CELLS} lattice over the parameter ranges (a {@code groupBy} on the
+ * cells), streamed to it a partition at a time.
  *
  * <p><b>Completeness.</b> Everything is written into a sibling folder
  * {@code <out>.partial-<id>} which is renamed to {@code <out>} in one step at the end (atomic on a
@@ -69,17 +75,17 @@ public final class SparkSweep {
     /** Cells per axis of the regime-map lattice of larger sweeps. */
     public static final int CELLS = 250;
     /**
-     * Most points per partition when the partition count is not given: the sort that puts each
-     * partition's CSV lines in index order holds one partition's rows, so bounding the partition's
-     * size keeps a task's memory independent of the sweep's size.
+     * Most points per partition when the partition count is not given: a task's output files, its
+     * share of the rows kept on disk and the work redone when it is retried stay bounded however large
+     * the sweep (a task streams its rows and never holds its partition in memory).
      */
     public static final int POINTS_PER_PARTITION = 20_000;
 
     /**
      * The default partition count: {@code max(4 p, ⌈n / }{@value #POINTS_PER_PARTITION}{@code ⌉)} with
      * {@code p} Spark's default parallelism (the cluster's cores), at most one per point. Four per core
-     * keep cores busy at the end when some points are slow; the size bound keeps each task's memory flat
-     * however large the sweep.
+     * keep cores busy at the end when some points are slow; the size bound keeps each task's files and
+     * retries bounded however large the sweep.
      *
      * @param spark the session
      * @param n number of points
@@ -248,46 +254,15 @@ public final class SparkSweep {
         SparkContext sc = spark.sparkContext();
         sc.setCallSite(STAGE_ROWS);
         String parquet = new Path(folder, "rows.parquet").toString();
-        rows(spark, job, partitions).write().parquet(parquet);
-        Dataset<Row> rows = spark.read().schema(schema(job.names())).parquet(parquet);
-        int parts = Math.min(partitions, Math.max(job.size(), 1));
-        int np = job.names().size();
-        String header = SweepRow.header(job.names());
-        MapPartitionsFunction<Row, String> toCsv = it -> {
-            boolean first = TaskContext.getPartitionId() == 0;
-            return new Iterator<>() {
-                private boolean headerDue = first;
-
-                @Override
-                public boolean hasNext() {
-                    return headerDue || it.hasNext();
-                }
-
-                @Override
-                public String next() {
-                    if (headerDue) {
-                        headerDue = false;
-                        return header;
-                    }
-                    Row r = it.next();
-                    Object[] v = new Object[r.length()];
-                    for (int c = 0; c < v.length; c++) {
-                        v[c] = r.get(c);
-                    }
-                    return SweepRow.csv(v, np);
-                }
-            };
-        };
-        Path csv = new Path(folder, "sweep-csv");
-        sc.setCallSite(STAGE_CSV);
-        rows.repartitionByRange(parts, rows.col("index")).sortWithinPartitions("index")
-            .mapPartitions(toCsv, Encoders.STRING()).write().text(csv.toString());
-        for (FileStatus f : fs.listStatus(csv)) {
-            String name = f.getPath().getName();
-            if (name.startsWith("part-") && name.endsWith(".txt")) {
-                fs.rename(f.getPath(), new Path(csv, name.substring(0, name.length() - 4) + ".csv"));
-            }
+        Dataset<Row> computed = rows(spark, job, partitions).persist(StorageLevel.DISK_ONLY());
+        try {
+            computed.write().parquet(parquet);
+            sc.setCallSite(STAGE_CSV);
+            writeCsv(computed, job, new Path(folder, "sweep-csv"), fs);
+        } finally {
+            computed.unpersist(false);
         }
+        Dataset<Row> rows = spark.read().schema(schema(job.names())).parquet(parquet);
         sc.setCallSite(STAGE_COUNTS);
         Map<String, Long> counts = new LinkedHashMap<>();
         for (Row r : rows.groupBy("outcome").count().orderBy("outcome").collectAsList()) {
@@ -319,6 +294,47 @@ public final class SparkSweep {
             }
         }
         return counts;
+    }
+
+    /**
+     * Writes the rows as CSV lines, one part file per partition; the rows' partitions are contiguous index
+     * ranges in order, so the part files are in index order with no shuffle or sort.
+     */
+    private static void writeCsv(Dataset<Row> rows, SweepJob job, Path csv, FileSystem fs) throws IOException {
+        int np = job.names().size();
+        String header = SweepRow.header(job.names());
+        MapPartitionsFunction<Row, String> toCsv = it -> {
+            boolean first = TaskContext.getPartitionId() == 0;
+            return new Iterator<>() {
+                private boolean headerDue = first;
+
+                @Override
+                public boolean hasNext() {
+                    return headerDue || it.hasNext();
+                }
+
+                @Override
+                public String next() {
+                    if (headerDue) {
+                        headerDue = false;
+                        return header;
+                    }
+                    Row r = it.next();
+                    Object[] v = new Object[r.length()];
+                    for (int c = 0; c < v.length; c++) {
+                        v[c] = r.get(c);
+                    }
+                    return SweepRow.csv(v, np);
+                }
+            };
+        };
+        rows.mapPartitions(toCsv, Encoders.STRING()).write().text(csv.toString());
+        for (FileStatus f : fs.listStatus(csv)) {
+            String name = f.getPath().getName();
+            if (name.startsWith("part-") && name.endsWith(".txt")) {
+                fs.rename(f.getPath(), new Path(csv, name.substring(0, name.length() - 4) + ".csv"));
+            }
+        }
     }
 
     /** One point per outcome and lattice cell (at the cell's centre), ordered by its first run. */
