@@ -1,8 +1,10 @@
 package org.trundle.core;
 
 /**
- * One piece of a scene: a surface patch with an id, an optional rigid motion and an optional contact
- * law (the run's law when absent). A run's scene is a list of patches; the ball touches one at a
+ * One piece of a scene: a surface patch with an id, an optional rigid motion, an optional contact
+ * law (the run's law when absent) and an optional compliant contact ({@link Compliance}: Hertz law with
+ * Hunt–Crossley damping; the run's compliance, {@code Simulation.Builder#compliance}, when absent, and
+ * rigid when neither is given). A run's scene is a list of patches; the ball touches one at a
  * time and is handed over from one to a neighbour that continues the surface where the contact point
  * crosses an edge (a tube and its rounded mouth, a funnel and its spout, two tubes end to end).
  *
@@ -12,8 +14,9 @@ package org.trundle.core;
  * @param surface the surface at its rest pose
  * @param motion its rigid motion ({@link SurfaceMotion#NONE} for a still patch)
  * @param law its contact law, or null for the run's
+ * @param compliance its compliant contact, or null for the run's (rigid when the run has none either)
  */
-public record Patch(String id, Surface surface, SurfaceMotion motion, ContactLaw law) {
+public record Patch(String id, Surface surface, SurfaceMotion motion, ContactLaw law, Compliance compliance) {
 
     /** Checks the parts. */
     public Patch {
@@ -27,6 +30,18 @@ public record Patch(String id, Surface surface, SurfaceMotion motion, ContactLaw
         if (motion == null) {
             motion = SurfaceMotion.NONE;
         }
+    }
+
+    /**
+     * A patch with the run's compliance (rigid when the run has none).
+     *
+     * @param id the id
+     * @param surface the surface at its rest pose
+     * @param motion its rigid motion (null: still)
+     * @param law its contact law, or null for the run's
+     */
+    public Patch(String id, Surface surface, SurfaceMotion motion, ContactLaw law) {
+        this(id, surface, motion, law, null);
     }
 
     /**
@@ -45,7 +60,7 @@ public record Patch(String id, Surface surface, SurfaceMotion motion, ContactLaw
      * @return this patch moving by m
      */
     public Patch withMotion(SurfaceMotion m) {
-        return new Patch(id, surface, m, law);
+        return new Patch(id, surface, m, law, compliance);
     }
 
     /**
@@ -53,6 +68,14 @@ public record Patch(String id, Surface surface, SurfaceMotion motion, ContactLaw
      * @return this patch with law l
      */
     public Patch withLaw(ContactLaw l) {
-        return new Patch(id, surface, motion, l);
+        return new Patch(id, surface, motion, l, compliance);
+    }
+
+    /**
+     * @param c a compliant contact for this patch (null: the run's)
+     * @return this patch with compliance c
+     */
+    public Patch withCompliance(Compliance c) {
+        return new Patch(id, surface, motion, law, c);
     }
 }

@@ -52,7 +52,7 @@ public final class Simulation {
     private final Vector3D gravity;
     private final AppliedLoad load;
     private final SolverSettings settings;
-    /** The patch's compliant contact, or null for the rigid contact. */
+    /** The run's compliant contact (of every patch without its own), or null. */
     private final Compliance compliance;
     /** The immutable problem handed to the engine. */
     private final Model model;
@@ -93,16 +93,6 @@ public final class Simulation {
         this.load = b.load == null ? AppliedLoad.NONE : b.load;
         this.settings = b.settings == null ? SolverSettings.defaults() : b.settings;
         this.compliance = b.compliance;
-        if (compliance != null) {
-            if (patches.size() > 1) {
-                throw new IllegalArgumentException("a compliant contact needs a scene of one patch, got "
-                    + patches.size() + " patches");
-            }
-            if (!motion.stationary()) {
-                throw new IllegalArgumentException("a compliant patch must not move: patch " + patches.get(0).id()
-                    + " has a motion and a compliant contact");
-            }
-        }
         for (Patch p : patches) {
             double kmax = p.surface().maxConcaveCurvature();
             // NaN: unknown in advance, checked during the run; +∞: no ball fits (Surface#maxConcaveCurvature)
@@ -121,9 +111,10 @@ public final class Simulation {
                     throw new IllegalArgumentException("restitution must lie in [0, 1], got " + e);
                 }
             });
-            resolved.add(p.withLaw(l));
+            Patch withLaw = p.withLaw(l);
+            resolved.add(p.compliance() != null || compliance == null ? withLaw : withLaw.withCompliance(compliance));
         }
-        this.model = new Model(ball, resolved, law, gravity, load, settings, compliance, ContextAccessor.INSTANCE);
+        this.model = new Model(ball, resolved, law, gravity, load, settings, ContextAccessor.INSTANCE);
     }
 
     /** @return the immutable model the engine runs (internal use: {@code RightHandSide}) */
@@ -175,7 +166,10 @@ public final class Simulation {
         return motion;
     }
 
-    /** @return the patch's compliant contact, or empty for the rigid contact */
+    /**
+     * @return the run's compliant contact ({@link Builder#compliance}: every patch without its own
+     *     {@link Patch#compliance()} is compliant with it), or empty when the run gives none
+     */
     public java.util.Optional<Compliance> compliance() {
         return java.util.Optional.ofNullable(compliance);
     }
@@ -475,11 +469,20 @@ public final class Simulation {
         }
 
         /**
-         * Makes the patch's contact compliant: instead of the rigid constraints, the ball moves as in flight
-         * under gravity, applied loads and the compliant contact's force ({@link Compliance}: Hertz law with
-         * Hunt–Crossley damping; the law gives the friction, regularised below the settle speed, and its
-         * couples). The contact starts and ends with {@code impact} and {@code lift_off} events; the phase
-         * stays {@code flight}; samples report the contact force while the ball presses the wall.
+         * Makes the contact compliant on every patch that gives no compliance of its own
+         * ({@link Patch#withCompliance}; for a simulation of one {@link #surface}, that patch): instead of the
+         * rigid constraints, the ball moves as in flight under gravity, applied loads and the force of every
+         * compliant patch it presses ({@link Compliance}: Hertz law with Hunt–Crossley damping; each patch's
+         * law gives the friction, regularised below the settle speed, and its couples), summed. Each compliant
+         * contact starts with its own {@code impact} event (its damping set from the normal speed relative to
+         * the patch then) and ends with its own {@code lift_off} event; the phase stays {@code flight}; samples
+         * report one contact per patch pressed. A moving compliant patch acts relative to its motion (approach,
+         * slip and the law's spin relative to the patch) and the power it puts in is booked as drive work.
+         *
+         * <p>A scene may mix compliant and rigid patches, but the ball may not touch both kinds at once: a run
+         * in which the ball reaches a rigid patch while it presses a compliant one (or the other way round)
+         * stops with a {@code SimulationException} naming both patches (a rigid contact phase has no room for
+         * a compliant force yet).
          *
          * @param c the compliant contact, or null for the rigid contact (the default)
          * @return this builder

@@ -1,6 +1,8 @@
 package org.trundle.core;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -83,19 +85,28 @@ class ComplianceTest {
         assertEquals(0.0, Compliance.of(1e9, 0.5).force(1e9, -1e-6, 1, 1));
     }
 
-    /** A compliant contact belongs to one still patch: a moving patch or a scene of two is refused by name. */
+    /**
+     * Compliance per patch: the run's compliance goes to every patch without its own, a patch's own wins, and a
+     * moving compliant patch is accepted (its contact acts relative to the motion).
+     */
     @Test
-    void aCompliantPatchMustNotMoveAndStandAlone() {
-        Simulation.Builder moving = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain").noGravity()
-            .compliance(Compliance.of(1e9, 0.5)).surface(new FloorForTests(1.0))
-            .motion(SurfaceMotion.translation(new Vector3D(0.1, 0, 0)));
-        IllegalArgumentException m = assertThrows(IllegalArgumentException.class, moving::build);
-        assertTrue(m.getMessage().contains("must not move"), m.getMessage());
-        Simulation.Builder two = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain").noGravity()
-            .compliance(Compliance.of(1e9, 0.5)).patch(Patch.of("a", new FloorForTests(1.0)))
-            .patch(Patch.of("b", new FloorForTests(1.0)));
-        IllegalArgumentException s = assertThrows(IllegalArgumentException.class, two::build);
-        assertTrue(s.getMessage().contains("one patch, got 2 patches"), s.getMessage());
+    void eachPatchTakesItsOwnComplianceOrTheRuns() {
+        Compliance run = Compliance.of(1e9, 0.5);
+        Compliance own = Compliance.of(2e9, 0.8);
+        Simulation sim = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain").noGravity()
+            .compliance(run).patch(Patch.of("a", new FloorForTests(1.0)))
+            .patch(Patch.of("b", new FloorForTests(1.0)).withCompliance(own)).build();
+        assertSame(run, sim.model().patches().get(0).compliance());
+        assertSame(own, sim.model().patches().get(1).compliance());
+        Simulation mixed = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain").noGravity()
+            .patch(Patch.of("rigid", new FloorForTests(1.0)))
+            .patch(Patch.of("soft", new FloorForTests(1.0)).withCompliance(own)).build();
+        assertNull(mixed.model().patches().get(0).compliance());
+        assertTrue(mixed.model().compliant());
+        Simulation moving = Simulation.builder().ball(Ball.solid(0.005, 0.004)).law(() -> "plain").noGravity()
+            .compliance(run).surface(new FloorForTests(1.0))
+            .motion(SurfaceMotion.translation(new Vector3D(0.1, 0, 0))).build();
+        assertSame(run, moving.model().patches().get(0).compliance());
     }
 
     /** Stops when the approach returns to zero. */

@@ -25,8 +25,8 @@ import org.trundle.surfaces.VGroove;
  * A run with two contacts at once against the same run with one (issue 12's cost target: a V-groove run at
  * most twice a plane run of the same length and tolerance). A solid ball (r = 10 mm, m = 30 g, Coulomb
  * μ = 0.5) rolls from rest for 0.5 s down a 10° slope: in a 60° V-groove (two plane walls, the
- * several-contact solve on the full layout) and on a plane (the single-contact closed form on the rolling
- * layout), at the default tolerance. Throughput in runs per second; the setup refuses to measure unless the
+ * closed form of two rolling contacts on the compact rolling layout) and on a plane (the single-contact closed
+ * form on the rolling layout), at the default tolerance. Throughput in runs per second; the setup refuses to measure unless the
  * groove run keeps both contacts rolling to the end and the plane run rolls to the end.
  */
 @BenchmarkMode(Mode.Throughput)

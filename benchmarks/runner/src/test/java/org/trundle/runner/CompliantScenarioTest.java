@@ -4,7 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
@@ -68,5 +70,63 @@ class CompliantScenarioTest {
         Cli.Result r2 = Cli.run("run", Cli.write(dir, "b.json", low).toString(), "--out", dir.resolve("b").toString());
         assertEquals(2, r2.code(), r2.out() + r2.err());
         assertTrue(r2.err().contains("contact.compliant needs contact.restitution of at least 0.1"), r2.err());
+    }
+
+    /**
+     * {@code compliant-v-groove-liner.json} (invented data): the ball dropped down the bisector of a compliant 90°
+     * groove meets both walls when it has fallen 20 mm, at {@code sqrt(2h/g)} (free fall; common practice), and
+     * leaves both at one instant; the walls carry equal loads on every row of {@code contacts.csv} that has both
+     * (symmetry); the budget closes with friction and damping counted. With frictionless walls the rebound is the
+     * restitution 0.6 ({@link org.trundle.core.Compliance}: exact without gravity; gravity's impulse over the contact
+     * time {@code t_c} changes it by at most {@code g t_c / v}).
+     */
+    @Test
+    void linerGrooveExampleMeetsBothWallsAtOnce() throws IOException {
+        Path out = dir.resolve("liner");
+        Cli.Result r = Cli.run("run", "../scenarios/compliant-v-groove-liner.json", "--out", out.toString(), "--no-plot");
+        assertEquals(0, r.code(), r.err());
+        JsonNode s = ScenarioFiles.JSON.readTree(out.resolve("summary.json").toFile());
+        JsonNode ev = s.get("events");
+        assertEquals("impact", ev.get(0).get("kind").asText());
+        assertEquals("impact", ev.get(1).get("kind").asText());
+        assertEquals("liner.left", ev.get(0).get("patch").asText());
+        assertEquals("liner.right", ev.get(1).get("patch").asText());
+        assertEquals(ev.get(0).get("time").asDouble(), ev.get(1).get("time").asDouble());
+        // the impact events fire at a normal gap of 1e-9 r, some 1e-11 s before the touch
+        assertEquals(Math.sqrt(2 * 0.02 / 9.81), ev.get(0).get("time").asDouble(), 1e-9);
+        assertEquals("lift_off", ev.get(2).get("kind").asText());
+        assertEquals("lift_off", ev.get(3).get("kind").asText());
+        assertEquals(ev.get(2).get("time").asDouble(), ev.get(3).get("time").asDouble());
+        assertTrue(s.get("energy").get("relative_residual").asDouble() < 1e-6);
+        assertTrue(s.get("energy").get("contact_damping_loss").asDouble() > 0);
+        assertTrue(s.get("energy").get("friction_loss").asDouble() > 0);
+        java.util.Map<String, double[]> byTime = new java.util.HashMap<>();
+        int both = 0;
+        List<String> rows = Files.readAllLines(out.resolve("contacts.csv"));
+        for (String line : rows.subList(1, rows.size())) {
+            String[] f = line.split(",");
+            double[] pair = byTime.computeIfAbsent(f[0], k -> new double[] {Double.NaN, Double.NaN});
+            pair[f[1].equals("liner.left") ? 0 : 1] = Double.parseDouble(f[3]);
+        }
+        for (double[] pair : byTime.values()) {
+            if (!Double.isNaN(pair[0]) && !Double.isNaN(pair[1])) {
+                both++;
+                assertEquals(pair[0], pair[1], 1e-9 * Math.max(pair[0], 1e-9));
+            }
+        }
+        assertTrue(both > 20, "rows with both walls: " + both);
+
+        String frictionless = Files.readString(Path.of("../scenarios/compliant-v-groove-liner.json"))
+            .replace("\"static_friction\": 0.3, \"kinetic_friction\": 0.25, \"restitution\": 0.6,",
+                "\"static_friction\": 0, \"kinetic_friction\": 0, \"restitution\": 0.6,");
+        Path out2 = dir.resolve("frictionless");
+        Cli.Result r2 = Cli.run("run", Cli.write(dir, "frictionless.json", frictionless).toString(), "--out",
+            out2.toString(), "--no-plot");
+        assertEquals(0, r2.code(), r2.err());
+        JsonNode e2 = ScenarioFiles.JSON.readTree(out2.resolve("summary.json").toFile()).get("events");
+        double vIn = -e2.get(0).get("velocity").get(2).asDouble();
+        double vOut = e2.get(2).get("velocity").get(2).asDouble();
+        double tc = e2.get(2).get("time").asDouble() - e2.get(0).get("time").asDouble();
+        assertEquals(0.6, vOut / vIn, 9.81 * tc / vIn);
     }
 }

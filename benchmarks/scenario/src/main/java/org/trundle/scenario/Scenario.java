@@ -75,13 +75,19 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         Optional<Material[]> materials = wallLoadMaterials(root);
         List<Patch> patches = SceneFactory.patches(root, materials);
         Section contactSection = root.section("contact");
+        // patches that take the scenario's contact (before spin creep gives them laws of their own)
+        java.util.Set<String> takeScenarioContact = new java.util.HashSet<>();
+        patches.stream().filter(p -> p.law() == null).forEach(p -> takeScenarioContact.add(p.id()));
         if (root.has("surfaces") && contactSection.bool("spin_creep", false)) {
             // spin creep needs each wall's material: the scenario's contact becomes each patch's own law
             patches = spinCreepPerPatch(root, contactSection.without("compliant"), patches);
             materials = sceneMaterials(root).map(m -> new Material[] {m.getKey(), m.getValue().values().iterator().next()});
         }
         ContactLaw law = ContactFactory.create(contactSection.without("compliant"), materials);
-        Compliance compliance = compliance(root, contactSection, law);
+        Compliance compliance = root.has("surfaces") ? null : compliance(root, contactSection, law);
+        if (root.has("surfaces") && contactSection.bool("compliant", false)) {
+            patches = compliantScene(root, law, patches, takeScenarioContact);
+        }
         Vector3D gravity = root.vector("gravity", "m/s^2", DEFAULT_GRAVITY);
         StartSpec startSpec = StartSpec.parse(root.section("start"));
         Section run = root.section("run");
@@ -211,9 +217,9 @@ public record Scenario(JsonNode document, String description, Simulation simulat
     }
 
     /**
-     * {@code contact.compliant: true} makes the contact a compliant Hertz contact with Hunt–Crossley damping
-     * ({@link HertzStiffness#compliance}) from {@code ball.material}, {@code surface.material} and
-     * {@code contact.restitution} (at least 0.1).
+     * {@code contact.compliant: true} with the one {@code surface} makes its contact a compliant Hertz contact with
+     * Hunt–Crossley damping ({@link HertzStiffness#compliance}) from {@code ball.material}, {@code surface.material}
+     * and {@code contact.restitution} (at least 0.1); the surface may move. (In a scene see {@code compliantScene}.)
      *
      * @return the compliance, or null for the rigid contact
      */
@@ -223,12 +229,38 @@ public record Scenario(JsonNode document, String description, Simulation simulat
         }
         Material[] m = wallLoadMaterials(root).orElseThrow(() -> new ScenarioException(
             "contact.compliant needs ball.material and surface.material (the Hertz stiffness comes from them)"));
+        return compliance("contact.compliant", m[0], m[1], law);
+    }
+
+    /**
+     * {@code contact.compliant: true} in a scene: every patch that takes the scenario's {@code contact} (no
+     * {@code contact} of its own) is compliant, from {@code ball.material} and its entry's {@code material}; a patch
+     * with its own {@code contact} is compliant when that says so.
+     */
+    private static List<Patch> compliantScene(Section root, ContactLaw law, List<Patch> patches,
+                                              java.util.Set<String> takeScenarioContact) {
+        return withWallMaterials(root, "contact.compliant = true", patches, p -> takeScenarioContact.contains(p.id()),
+            (p, m) -> p.withCompliance(compliance("contact.compliant", m[0], m[1], law)));
+    }
+
+    /**
+     * A compliant Hertz contact with Hunt–Crossley damping from the two materials and the law's restitution.
+     *
+     * @param where the key, for messages
+     * @param ball the ball's material
+     * @param wall the wall's material
+     * @param law the contact law (its restitution, at least {@link Compliance#MIN_RESTITUTION})
+     * @return the compliance
+     */
+    static Compliance compliance(String where, Material ball, Material wall, ContactLaw law) {
         double e = law.restitution().orElse(0.0);
         if (!(e >= Compliance.MIN_RESTITUTION)) {
-            throw new ScenarioException("contact.compliant needs contact.restitution of at least "
+            String restitution = where.endsWith(".compliant")
+                ? where.substring(0, where.length() - ".compliant".length()) + ".restitution" : "contact.restitution";
+            throw new ScenarioException(where + " needs " + restitution + " of at least "
                 + Compliance.MIN_RESTITUTION + " (Hunt-Crossley damping), got " + e);
         }
-        return HertzStiffness.compliance(m[0], m[1], e);
+        return HertzStiffness.compliance(ball, wall, e);
     }
 
     /**
@@ -260,21 +292,36 @@ public record Scenario(JsonNode document, String description, Simulation simulat
      * patch, where one is missing).
      */
     private static List<Patch> spinCreepPerPatch(Section root, Section contact, List<Patch> patches) {
+        return withWallMaterials(root, "contact.spin_creep = true", patches, p -> p.law() == null,
+            (p, m) -> p.withLaw(ContactFactory.create(contact, Optional.of(m))));
+    }
+
+    /**
+     * Remakes the patches a scenario-wide key applies to from the ball's and the patch's material
+     * ({@code {ball, wall}}); each such patch needs its entry's {@code material}.
+     *
+     * @param what the key and value, for the message
+     * @param applies which patches the key applies to
+     * @param make the patch remade from the pair of materials
+     */
+    private static List<Patch> withWallMaterials(Section root, String what, List<Patch> patches,
+                                                 java.util.function.Predicate<Patch> applies,
+                                                 java.util.function.BiFunction<Patch, Material[], Patch> make) {
         Map<String, Material> walls = sceneMaterials(root).map(Map.Entry::getValue).orElse(Map.of());
         Material ballMaterial = root.section("ball").has("material")
             ? material(root.section("ball").section("material")) : null;
         List<Patch> out = new java.util.ArrayList<>();
         for (Patch p : patches) {
-            if (p.law() != null) {
+            if (!applies.test(p)) {
                 out.add(p);
                 continue;
             }
             Material wall = walls.get(p.id());
             if (ballMaterial == null || wall == null) {
-                throw new ScenarioException("contact.spin_creep = true in a scene needs ball.material and the material"
+                throw new ScenarioException(what + " in a scene needs ball.material and the material"
                     + " of every patch without a contact of its own; patch \"" + p.id() + "\" has none");
             }
-            out.add(p.withLaw(ContactFactory.create(contact, Optional.of(new Material[] {ballMaterial, wall}))));
+            out.add(make.apply(p, new Material[] {ballMaterial, wall}));
         }
         return out;
     }

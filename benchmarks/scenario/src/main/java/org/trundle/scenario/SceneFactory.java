@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
+import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.Material;
 import org.trundle.core.Patch;
@@ -19,7 +20,9 @@ import org.trundle.core.SurfaceMotion;
  * (a one-patch scene with id {@code "surface"}). Each entry is a surface section
  * ({@link SurfaceFactory}) with, besides its type's keys, {@code id} (required in a list: letters,
  * digits, {@code _}, {@code -}, {@code .}), an optional {@code motion} and an optional {@code contact}
- * (the patch's own law, {@link ContactFactory}; default the scenario's {@code contact}).
+ * (the patch's own law, {@link ContactFactory}; default the scenario's {@code contact}); its
+ * {@code contact.compliant: true} makes the patch a compliant Hertz contact from {@code ball.material} and the
+ * entry's {@code material}.
  *
  * <p>A section whose {@code type} is an assembly ({@code v_groove}, {@code rails}, {@code bearing_races};
  * {@link AssemblyFactory}) gives several patches: for the single {@code surface} named by their parts
@@ -110,12 +113,14 @@ final class SceneFactory {
             out.add(patch(id == null ? Scenario.PATCH_ID : id, s, materials));
             return;
         }
-        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact"), materials) : null;
+        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact").without("compliant"), materials)
+            : null;
+        Compliance compliance = s.has("contact") ? compliance(s, law, materials) : null;
         double ballRadius = root.section("ball").positive("radius", "m");
         List<String> pids = ids(id, s);
         List<AssemblyFactory.Part> parts = AssemblyFactory.expand(s.without("id").without("contact"), ballRadius);
         for (int i = 0; i < parts.size(); i++) {
-            out.add(new Patch(pids.get(i), parts.get(i).surface(), parts.get(i).motion(), law));
+            out.add(new Patch(pids.get(i), parts.get(i).surface(), parts.get(i).motion(), law, compliance));
         }
     }
 
@@ -143,9 +148,28 @@ final class SceneFactory {
 
     private static Patch patch(String id, Section s, Optional<Material[]> materials) {
         SurfaceMotion motion = s.has("motion") ? motion(s.section("motion")) : SurfaceMotion.NONE;
-        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact"), materials) : null;
+        ContactLaw law = s.has("contact") ? ContactFactory.create(s.section("contact").without("compliant"), materials)
+            : null;
+        Compliance compliance = s.has("contact") ? compliance(s, law, materials) : null;
         Surface surface = SurfaceFactory.create(s.without("id").without("motion").without("contact"));
-        return new Patch(id, surface, motion, law);
+        return new Patch(id, surface, motion, law, compliance);
+    }
+
+    /**
+     * An entry's own {@code contact.compliant: true}: the patch (every part of an assembly) is a compliant Hertz
+     * contact with Hunt–Crossley damping from {@code ball.material}, the entry's {@code material} and the entry's
+     * {@code contact.restitution} (at least 0.1).
+     *
+     * @return the compliance, or null for a rigid patch
+     */
+    private static Compliance compliance(Section entry, ContactLaw law, Optional<Material[]> materials) {
+        Section contact = entry.section("contact");
+        if (!contact.bool("compliant", false)) {
+            return null;
+        }
+        Material[] m = materials.orElseThrow(() -> new ScenarioException(contact.where("compliant")
+            + " needs ball.material and this entry's material (the Hertz stiffness comes from them)"));
+        return Scenario.compliance(contact.where("compliant"), m[0], m[1], law);
     }
 
     /**

@@ -54,6 +54,12 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
  * up to 9 unknowns, so the system lives in a {@link DMatrixRMaj} of the largest size, allocated once, with a
  * reused LU solver; every contact occupies three rows (a sliding contact's two spare rows are identity rows).
  *
+ * <p><b>Two rolling contacts on still patches</b> (a groove, two rails: the common case) are solved in closed
+ * form by {@link RollingPair} — the motion is a rotation about the chord through both contact points, so one
+ * scalar equation and a few cross products give the same forces as the system below, squeeze rule included
+ * (the unit tests compare the two on seeded random geometry) — unless their normals are nearly parallel or
+ * antipodal. Every other case (a sliding contact, a moving patch, three contacts) takes the general system.
+ *
  * <p>A single contact does not come here: the engine keeps the closed form of §3 for it (the fast path);
  * the unit tests check that this solver agrees with that closed form.
  *
@@ -68,6 +74,8 @@ final class ContactForceSolver {
     private final double r;
     private final double m;
     private final double inertia;
+    /** The closed form of two rolling contacts on still patches (the common case: groove, rails). */
+    private final RollingPair pair;
 
     // inputs per contact
     private int count;
@@ -122,6 +130,7 @@ final class ContactForceSolver {
         this.r = radius;
         this.m = mass;
         this.inertia = inertiaFactor * mass * radius * radius;
+        this.pair = new RollingPair(radius, mass, inertia);
     }
 
     /** Forgets the contacts of the last solve. */
@@ -216,6 +225,27 @@ final class ContactForceSolver {
      * @return false when the system is singular beyond the squeeze modes (contacts that cannot all hold)
      */
     boolean solve(double[] v, double[] w, double[] g, double[] fApp, double[] tau) {
+        if (count == 2 && rolling[0] && rolling[1] && !given[0] && !given[1]
+            && pair.solve(normal[0], hessian[0], normal[1], hessian[1], v, w, g, fApp, tau, acc, angAcc, force[0],
+                force[1])) {
+            return summarise();
+        }
+        return solveGeneral(v, w, g, fApp, tau);
+    }
+
+    /**
+     * Solves by the general linear system, whatever the contacts (the closed form of {@link RollingPair} is
+     * not tried): what {@link #solve} does for every case but two rolling contacts on still patches; the tests
+     * compare the two.
+     *
+     * @param v centre velocity (m/s)
+     * @param w spin (rad/s)
+     * @param g gravitational acceleration (m/s²)
+     * @param fApp applied force (N)
+     * @param tau applied torque plus the laws' contact couples (N·m)
+     * @return false when the system is singular beyond the squeeze modes
+     */
+    boolean solveGeneral(double[] v, double[] w, double[] g, double[] fApp, double[] tau) {
         int n = 3 * count;
         double invM = 1.0 / m;
         double invI = 1.0 / inertia;
@@ -306,17 +336,26 @@ final class ContactForceSolver {
                     f[k] = nf * gLin[3 * i][k];
                 }
             }
+            Vec.cross(ni, f, tmp);
+            for (int k = 0; k < 3; k++) {
+                acc[k] += f[k] * invM;
+                angAcc[k] -= r * tmp[k] * invI;
+            }
+        }
+        return summarise();
+    }
+
+    /** Each contact's normal and tangential force from its force; false when the accelerations are not finite. */
+    private boolean summarise() {
+        for (int i = 0; i < count; i++) {
+            double[] f = force[i];
+            double[] ni = normal[i];
             double fn = Vec.dot(f, ni);
             normalForce[i] = fn;
             double tx = f[0] - fn * ni[0];
             double ty = f[1] - fn * ni[1];
             double tz = f[2] - fn * ni[2];
             tangentialForce[i] = Math.sqrt(tx * tx + ty * ty + tz * tz);
-            Vec.cross(ni, f, tmp);
-            for (int k = 0; k < 3; k++) {
-                acc[k] += f[k] * invM;
-                angAcc[k] -= r * tmp[k] * invI;
-            }
         }
         for (int k = 0; k < 3; k++) {
             if (!Double.isFinite(acc[k]) || !Double.isFinite(angAcc[k])) {

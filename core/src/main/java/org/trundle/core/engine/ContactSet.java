@@ -67,6 +67,18 @@ final class ContactSet {
         return extraCount > 0;
     }
 
+    /**
+     * Whether the ball rolls on exactly two patches that both stand still (a groove, two rails): the case
+     * {@link RollingPair} solves in closed form, where the velocity is derived from the spin as with one
+     * contact ({@code v = r ω × n} with the active slot's normal) and the segment integrates the compact
+     * rolling layout.
+     *
+     * @return whether two still patches are touched, both rolling
+     */
+    boolean rollingPair() {
+        return extraCount == 1 && summary == Phase.ROLLING && !active.moving && !extra[0].moving;
+    }
+
     /** @return the number of patches touched now (0 in flight) */
     int count() {
         return active.mode == Mode.APART ? 0 : 1 + extraCount;

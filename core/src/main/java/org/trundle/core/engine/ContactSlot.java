@@ -52,6 +52,15 @@ final class ContactSlot {
     private double poseTime = Double.NaN;
     /** Rolling, sliding or apart. */
     Mode mode = Mode.APART;
+    /** The patch's compliant contact, or null for a rigid one. */
+    final org.trundle.core.Compliance compliance;
+    /**
+     * Compliant patch: whether a contact is under way (begun by an impact event or pressed at the start, until
+     * the approach falls through zero); only then does its force act. The phase stays flight meanwhile.
+     */
+    boolean pressing;
+    /** Compliant patch: the normal speed relative to the patch (m/s) at which this contact began (sets its damping). */
+    double touchSpeed = 1.0;
     /** Whether the law context holds the ball and this slot's geometry workspace. */
     boolean contextReady;
     /**
@@ -75,6 +84,7 @@ final class ContactSlot {
         this.motion = patch.motion();
         this.moving = !motion.stationary();
         this.law = patch.law();
+        this.compliance = patch.compliance();
         this.couples = law.addsCouples();
         this.pivotStick = couples && law.hasPivotStick() && !moving;
         this.geo.scratch = surface.newScratch();

@@ -37,7 +37,8 @@ import org.trundle.core.Phase;
  * ({@link ContactSet#multi()}) the forces come from {@link ContactForceSolver} instead (see
  * {@code multiForces}).
  *
- * <p>Several contacts (issue 12; design notes §9): the velocity is integrated (full layout) and the
+ * <p>Several contacts (issue 12; design notes §9): the velocity is integrated (full layout; two rolling
+ * contacts on still patches derive it from the spin, {@code v = r ω × n₀}, on the compact rolling layout) and the
  * solve enforces, per rolling contact {@code i}, {@code a − r α × n_i = r ω × (H_i v)} and per sliding
  * contact {@code n_i·a = −vᵀ H_i v}, with Newton–Euler {@code m a = m g + F_app + Σ F_i},
  * {@code I α = τ − r Σ n_i × F_i}; the squeeze between two rolling contacts, which the motion cannot
@@ -87,14 +88,23 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private boolean moving;
     private ContactLaw law;
     private final AppliedLoad load;
-    /** The patch's compliant contact, or null for the rigid contact. */
-    private final Compliance compliance;
-    /** Normal speed (m/s) at which the current compliant contact began (sets its damping). */
-    double touchSpeed = 1.0;
+    /** The scene's compliant patches' slots (empty for a rigid scene). */
+    private ContactSlot[] compliantSlots;
     /** Slip speed (m/s) below which a compliant contact's friction is viscous (regularised Coulomb). */
     double compliantSlipSpeed = 1e-3;
     /** Whether the last flight evaluation found the ball pressing a compliant patch. */
     boolean pressing;
+    /** Per slot index: whether the last flight evaluation found the ball pressing that compliant patch. */
+    final boolean[] compliantOn;
+    /** Per slot index: the compliant contact's normal force (N) of the last flight evaluation. */
+    final double[] compliantNormal;
+    /** Per slot index: the compliant contact's friction force on the ball (N) of the last flight evaluation. */
+    final double[][] compliantFriction;
+    /** Per slot index: the compliant contact's slip velocity (m/s) relative to the patch. */
+    private final double[][] compliantSlip;
+    /** The compliant contact reported as the sample's first (the active slot if pressed, else the first pressed). */
+    ContactSlot compliantPrimary;
+    private final double[] patchVelocityAtPoint = new double[3];
     /** Damping power (W) of the last compliant evaluation. */
     private double lossDamp;
 
@@ -237,15 +247,21 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         this(model, new ContactSlot(0, model.patches().get(0)));
         this.phase = phase;
         this.stickEps = stickSpeed;
+        // outside a run no impact event begins the contact: a compliant patch's force acts wherever it is pressed
+        slot.pressing = slot.compliance != null;
     }
 
     Dynamics(Model model, ContactSlot slot) {
-        this(model.ball(), slot, model.gravity().toArray(), model.load(), model.access(), model.compliance());
+        this(model.ball(), slot, model.gravity().toArray(), model.load(), model.access(), model.patches().size());
     }
 
     private Dynamics(Ball ball, ContactSlot slot, double[] gravity, AppliedLoad load, ContextAccess access,
-                     Compliance compliance) {
-        this.compliance = compliance;
+                     int patchCount) {
+        this.compliantSlots = slot.compliance != null ? new ContactSlot[] {slot} : new ContactSlot[0];
+        this.compliantOn = new boolean[patchCount];
+        this.compliantNormal = new double[patchCount];
+        this.compliantFriction = new double[patchCount][3];
+        this.compliantSlip = new double[patchCount][3];
         this.ball = ball;
         this.r = ball.radius();
         this.m = ball.mass();
@@ -272,6 +288,21 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      */
     void setContacts(ContactSet set) {
         this.contacts = set;
+    }
+
+    /**
+     * Takes the run's slots: the compliant ones among them act in flight while {@link ContactSlot#pressing}.
+     *
+     * @param all every slot of the run, in scene order
+     */
+    void setSlots(ContactSlot[] all) {
+        java.util.List<ContactSlot> out = new java.util.ArrayList<>();
+        for (ContactSlot s : all) {
+            if (s.compliance != null) {
+                out.add(s);
+            }
+        }
+        this.compliantSlots = out.toArray(new ContactSlot[0]);
     }
 
     /** @return whether the last evaluations see several contacts (the velocity is then integrated) */
@@ -529,7 +560,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double ix = tau[0];
         double iy = tau[1];
         double iz = tau[2];
-        if (phase != Phase.FLIGHT || pressing) {
+        if (phase != Phase.FLIGHT) {
+            // (a compliant contact's force adds its own couple about the centre in compliantForces)
             double[] n = geo.normal;
             double nx = n[0];
             double ny = n[1];
@@ -1047,63 +1079,134 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         neededTangential = 0;
         grip = Double.NaN;
         slipSpeed = 0;
-        if (compliance != null) {
+        if (compliantSlots.length > 0) {
             compliantForces(t);
         }
     }
 
     /**
-     * The force of a compliant contact in flight ({@link Compliance}): with the approach
-     * {@code δ = r − d > 0} on the patch, the normal force {@code F_n = K δ^{3/2}(1 + χ δ̇/v₀)} (clamped at
-     * zero; {@code K} from the wall's principal curvatures at the foot point, {@code δ̇ = −n·v}, {@code v₀} the
-     * normal speed at which this contact began), the law's friction {@code f(F_n)} against the slip of the
-     * contact point {@code s = P(v − r ω × n)}, regularised below the slip speed {@code ε_c}:
-     * {@code F_t = −f s / max(|s|, ε_c)} (viscous below {@code ε_c}, Coulomb above), and the law's couples. The
-     * forces act at {@code c − r n} (the approach, a few micrometres, is neglected in the lever arm). The
-     * damping power {@code (F_n − K δ^{3/2}) δ̇} is booked as contact damping; the elastic part is stored in
-     * the contact and counted in the energy ({@link Model#energy}).
+     * The forces of the compliant patches the ball presses, in flight ({@link Compliance}), summed. For each
+     * compliant patch whose contact is under way ({@link ContactSlot#pressing}) with the approach
+     * {@code δ = r − d > 0} and the closest point on the patch: the normal force
+     * {@code F_n = K δ^{3/2}(1 + χ δ̇/v₀)} (clamped at zero; {@code K} from the wall's principal curvatures at the
+     * foot point, {@code δ̇ = −n·(v − u(c))} relative to the patch, {@code v₀} the relative normal speed at which this
+     * contact began), the patch law's friction {@code f(F_n)} against the slip of the contact point relative to the
+     * patch, {@code s = P((v − u(c)) − r (ω − Ω) × n)}, regularised below the slip speed {@code ε_c}:
+     * {@code F_t = −f s / max(|s|, ε_c)} (viscous below {@code ε_c}, Coulomb above), and the law's couples on the
+     * relative spin. Each force acts at {@code c − r n_i} (couple {@code −r n_i × F_i}; the approach, a few
+     * micrometres, is neglected in the lever arm). The damping power {@code (F_n − K δ^{3/2}) δ̇} is booked as
+     * contact damping; the elastic part is stored in the contact and counted in the energy ({@link Model#energy}).
+     * A moving patch ({@code u}, {@code Ω} its velocity field and spin) puts in the power
+     * {@code F·u(p) + τ_c·Ω}, {@code u(p) = u(c) − r Ω × n}, booked as drive work, so that the budget closes.
      */
     private void compliantForces(double t) {
-        slot.query(t, c);
-        double delta = r - geo.distance;
-        if (!(delta > 0) || geo.patchMargin < 0) {
+        compliantPrimary = null;
+        for (ContactSlot s : compliantSlots) {
+            compliantOn[s.index] = false;
+            compliantNormal[s.index] = 0;
+            if (s.pressing) {
+                compliantContact(t, s);
+            }
+        }
+        ContactSlot p = compliantPrimary;
+        if (p != null) {
+            int i = p.index;
+            normalForce = compliantNormal[i];
+            System.arraycopy(compliantFriction[i], 0, friction, 0, 3);
+            System.arraycopy(compliantSlip[i], 0, slip, 0, 3);
+            slipSpeed = norm(slip);
+            neededTangential = norm(friction);
+        }
+    }
+
+    /** One compliant contact's force and couple, added to {@link #force} and {@link #tau}; see {@link #compliantForces}. */
+    private void compliantContact(double t, ContactSlot s) {
+        s.query(t, c);
+        ContactGeometry sg = s.geo;
+        double delta = r - sg.distance;
+        if (!(delta > 0) || sg.patchMargin < 0) {
             return;
         }
         pressing = true;
-        double[] n = geo.normal;
+        compliantOn[s.index] = true;
+        if (compliantPrimary == null || s == slot) {
+            compliantPrimary = s;
+        }
+        double[] n = sg.normal;
+        double[] rv = vel;
+        double[] rw = w;
+        double[] om = null;
+        if (s.moving) {
+            MotionState ps = s.poseAt(t);
+            om = ps.spin;
+            double[] up = patchVelocityAtPoint;
+            ps.velocityAt(c, up);
+            rv = relVel;
+            rw = relSpin;
+            for (int i = 0; i < 3; i++) {
+                rv[i] = vel[i] - up[i];
+                rw[i] = w[i] - om[i];
+            }
+            // u(p) = u(c) − r Ω × n
+            up[0] -= r * (om[1] * n[2] - om[2] * n[1]);
+            up[1] -= r * (om[2] * n[0] - om[0] * n[2]);
+            up[2] -= r * (om[0] * n[1] - om[1] * n[0]);
+        }
         // the integrator's trial stages of a long flight step may land deep in the wall and very fast: hold
         // the law at an approach of one radius and an approach rate of ten times the impact speed there (no
         // accepted state comes near either; without the hold such a trial stage could overflow)
         delta = Math.min(delta, r);
-        double rate = Math.min(-dot(vel, n), 10 * touchSpeed);
-        double kh = compliance.stiffness(r, geo.curvature1, geo.curvature2);
+        double rate = Math.min(-dot(rv, n), 10 * s.touchSpeed);
+        Compliance comp = s.compliance;
+        double kh = comp.stiffness(r, sg.curvature1, sg.curvature2);
         double elastic = kh * delta * Math.sqrt(delta);
-        double fn = compliance.force(kh, delta, rate, touchSpeed);
-        ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
-        double sp = norm(slip);
-        access.set(ctx, ball, geo, fn, Phase.SLIDING, slip, w, false);
-        double f = fn > 0 ? law.slidingFriction(ctx) : 0.0;
-        double visc = f / Math.max(sp, compliantSlipSpeed);
-        for (int i = 0; i < 3; i++) {
-            friction[i] = -visc * slip[i];
-            force[i] = fn * n[i] + friction[i];
+        double fn = comp.force(kh, delta, rate, s.touchSpeed);
+        double[] sl = compliantSlip[s.index];
+        ContactKinematics.slip(r, rv, 0, rw, 0, n, sl);
+        double sp = norm(sl);
+        access.set(s.ctx, ball, sg, fn, Phase.SLIDING, sl, rw, false);
+        double f = fn > 0 ? s.law.slidingFriction(s.ctx) : 0.0;
+        if (!(f >= 0 && f < Double.POSITIVE_INFINITY)) {
+            throw badBound("sliding friction", f, "N");
         }
-        if (couples && fn > 0) {
-            law.addCouples(ctx);
-            double[] ct = access.torque(ctx);
+        double visc = f / Math.max(sp, compliantSlipSpeed);
+        double[] fr = compliantFriction[s.index];
+        double fx = 0;
+        double fy = 0;
+        double fz = 0;
+        for (int i = 0; i < 3; i++) {
+            fr[i] = -visc * sl[i];
+        }
+        fx = fn * n[0] + fr[0];
+        fy = fn * n[1] + fr[1];
+        fz = fn * n[2] + fr[2];
+        force[0] += fx;
+        force[1] += fy;
+        force[2] += fz;
+        tau[0] -= r * (n[1] * fz - n[2] * fy);
+        tau[1] -= r * (n[2] * fx - n[0] * fz);
+        tau[2] -= r * (n[0] * fy - n[1] * fx);
+        if (s.couples && fn > 0) {
+            s.law.addCouples(s.ctx);
+            double[] ct = access.torque(s.ctx);
             for (int i = 0; i < 3; i++) {
                 tau[i] += ct[i];
             }
-            double[] lr = access.lossRate(ctx);
-            lossRoll = lr[LossKind.ROLLING_RESISTANCE.ordinal()];
-            lossPivot = lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
-            lossOther = lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+            double[] lr = access.lossRate(s.ctx);
+            lossRoll += lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+            lossPivot += lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            lossOther += lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+            if (om != null) {
+                drivePower += ct[0] * om[0] + ct[1] * om[1] + ct[2] * om[2];
+            }
         }
-        normalForce = fn;
-        neededTangential = visc * sp;
-        slipSpeed = sp;
-        lossSlide = visc * sp * sp;
-        lossDamp = (fn - elastic) * rate;
+        if (om != null) {
+            double[] up = patchVelocityAtPoint;
+            drivePower += fx * up[0] + fy * up[1] + fz * up[2];
+        }
+        compliantNormal[s.index] = fn;
+        lossSlide += visc * sp * sp;
+        lossDamp += (fn - elastic) * rate;
     }
 
     /**
@@ -1189,7 +1292,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * Several contacts at once (issue 12; design notes §9): every touching slot's geometry at the centre, the
      * forces and accelerations from {@link ContactForceSolver} (rolling contacts: full force; sliding contacts:
      * normal force, friction {@code μ_i N_i} against the slip), the laws' couples at the normal forces of a
-     * first solve without them, then the solve with them. The velocity is integrated (full layout): the
+     * first solve without them, then the solve with them. The velocity is integrated (full layout), except for
+     * two rolling contacts on still patches ({@link ContactSet#rollingPair}), where it is derived from the spin
+     * as with one contact, {@code v = r ω × n₀} (the active slot's normal; compact rolling layout): the
      * constraints are held by the solve at acceleration level and by the projection onto every contact's
      * manifold ({@link Transitions#projected}). Results per position into the {@code contact*} arrays; position
      * 0 (the active slot) also into the single-contact fields.
@@ -1197,6 +1302,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private void multiForces(double t, double[] y, double[] yDot) {
         ContactSet set = contacts;
         int count = set.count();
+        // two rolling contacts on still patches: the velocity is derived, v = r ω × n₀ (set below)
+        boolean derive = set.rollingPair();
         vel[0] = y[V];
         vel[1] = y[V + 1];
         vel[2] = y[V + 2];
@@ -1207,6 +1314,9 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
             s.query(t, c);
+            if (k == 0 && derive) {
+                ContactKinematics.noSlipVelocity(r, w[0], w[1], w[2], s.geo.normal, vel, 0);
+            }
             readyContext(s);
             contactDistance[k] = s.geo.distance;
             contactMargin[k] = s.geo.patchMargin;

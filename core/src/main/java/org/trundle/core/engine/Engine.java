@@ -260,7 +260,7 @@ public final class Engine {
      */
     private double flightClear() {
         Run run = this.run;
-        if (run.phase() != Phase.FLIGHT || run.touching || run.model.load() != AppliedLoad.NONE) {
+        if (run.phase() != Phase.FLIGHT || run.pressingAny() || run.model.load() != AppliedLoad.NONE) {
             return Double.POSITIVE_INFINITY;
         }
         for (ContactSlot s : run.slots) {
@@ -301,7 +301,10 @@ public final class Engine {
         run.restSpeed = run.set.restSpeedFraction() * run.speedScale;
         run.dyn.stickEps = run.stickEps;
         run.dyn.compliantSlipSpeed = run.settleSpeed;
-        run.dyn.touchSpeed = run.settleSpeed;
+        for (ContactSlot slot : run.slots) {
+            slot.touchSpeed = run.settleSpeed;
+            slot.pressing = false;
+        }
         for (ContactSlot slot : run.slots) {
             run.model.access().setSpins(slot.ctx, run.set.smoothingSpinFraction() * run.speedScale / r,
                 run.stickEps / r);

@@ -1,7 +1,5 @@
 package org.trundle.core.engine;
 
-import static org.trundle.core.engine.StateMapper.V;
-
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.trundle.core.BallState;
@@ -16,9 +14,12 @@ import org.trundle.core.SurfaceDomainException;
  * {@code d − r} (m), falls to zero while the ball approaches, on the patch (a ball that left a tube through its end does not hit the wall's
  * continuation). The function is offset by a slack of {@code 1e-9 r} so that it is strictly
  * positive when a flight starts on the surface; the reaction rewinds to {@code d = r} and applies
- * the impact impulses (design notes §6). With a compliant contact the event only marks the start of the
- * contact (no rewind, no impulse): it records the normal speed that sets the contact's damping, and the
- * rule rests until {@link ReleaseRule} sees the ball leave.
+ * the impact impulses (design notes §6). On a compliant patch the event only marks the start of that
+ * patch's contact (no rewind, no impulse): it records the normal speed relative to the patch that sets the
+ * contact's damping, and the rule rests until the patch's {@link ReleaseRule} sees the ball leave; the other
+ * patches' rules go on watching (a ball dropped into a compliant groove presses both walls). A ball may not
+ * touch a rigid and a compliant patch at once: reaching one kind while in contact with the other stops the run
+ * with a message naming both patches.
  */
 final class ImpactRule extends SwitchRule {
     /** The patch this rule watches (one impact rule per patch of the scene). */
@@ -41,11 +42,12 @@ final class ImpactRule extends SwitchRule {
     boolean watches(Phase phase) {
         if (phase == Phase.FLIGHT) {
             inContact = false;
-            return !run.touching;
+            return !slot.pressing;
         }
-        // in contact on a rigid scene: a patch not touched yet may be reached (a second or third contact)
+        // in contact: a patch not touched yet may be reached (a second or third contact; a compliant one stops
+        // the run in react)
         inContact = true;
-        return phase.inContact() && run.compliance == null && slot.mode == Mode.APART
+        return phase.inContact() && slot.mode == Mode.APART
             && run.contacts.count() < ContactForceSolver.MAX_CONTACTS;
     }
 
@@ -100,8 +102,12 @@ final class ImpactRule extends SwitchRule {
             // the ball keeps its contacts; the new one is added at the instant found (no rewind)
             return;
         }
+        if (slot.compliance == null && run.pressingAny()) {
+            // refused in react: keep the state as it is
+            return;
+        }
         run.activate(slot);
-        if (run.compliance == null) {
+        if (slot.compliance == null) {
             x.rewindToContact();
         }
     }
@@ -109,22 +115,67 @@ final class ImpactRule extends SwitchRule {
     @Override
     EndReason react(Transitions x, BallState before) {
         if (inContact) {
+            if (slot.compliance != null) {
+                throw new RunFailure(mixMessage(run.t, run.slot.id, "touches rigid", slot.id, "reaches compliant"));
+            }
             x.reach(slot, before);
             return null;
         }
-        if (run.compliance != null) {
-            // a compliant contact begins: its damping is set from the normal speed now
-            slot.query(run.t, run.centreOf(run.y));
-            double vn = -ContactKinematics.normalPart(run.y, V, slot.geo.normal);
-            run.dyn.touchSpeed = Math.max(vn, run.settleSpeed);
-            run.touching = true;
-            run.log(EventKind.IMPACT, before, null, Vector3D.ZERO);
+        if (slot.compliance != null) {
+            // a compliant contact begins on this patch: its damping is set from the normal speed relative to it now
+            begin(slot, before);
+            // another compliant patch met at the same instant (a ball dropped down a groove's bisector meets both
+            // walls at once): its impact function is not positive at the next segment's start, where no fall
+            // through zero would be left to find, so its contact begins now too
+            for (ContactSlot other : run.slots) {
+                if (other == slot || other.compliance == null || other.pressing) {
+                    continue;
+                }
+                try {
+                    other.query(run.t, run.centreOf(run.y));
+                } catch (SurfaceDomainException e) {
+                    continue;
+                }
+                if (other.geo.distance - run.r + run.impactSlack <= 0 && other.geo.patchMargin >= 0) {
+                    begin(other, before);
+                }
+            }
             return null;
+        }
+        for (ContactSlot other : run.slots) {
+            if (other.pressing) {
+                throw new RunFailure(mixMessage(run.t, other.id, "presses compliant", slot.id, "reaches rigid"));
+            }
         }
         Vector3D j = x.impact();
         run.log(EventKind.IMPACT, before, null, j);
         // a ball landing where two still walls meet touches the second one at once
         x.reachPressed(before);
         return null;
+    }
+
+    /** Begins a compliant contact on a patch (queried at the run's state): damping from the relative normal speed. */
+    private void begin(ContactSlot s, BallState before) {
+        s.query(run.t, run.centreOf(run.y));
+        double vn = -ContactKinematics.relativeNormalSpeed(s, run.t, s.geo.normal, run.y);
+        s.touchSpeed = Math.max(vn, run.settleSpeed);
+        s.pressing = true;
+        run.logOn(s.id, EventKind.IMPACT, before, null, Vector3D.ZERO, null, null);
+    }
+
+    /**
+     * The message of a run stopped because the ball would touch a rigid and a compliant patch at once.
+     *
+     * @param t the time (s)
+     * @param first the patch in contact
+     * @param firstVerb how the ball touches it
+     * @param second the patch reached
+     * @param secondVerb how the ball reaches it
+     * @return the message
+     */
+    static String mixMessage(double t, String first, String firstVerb, String second, String secondVerb) {
+        return String.format(java.util.Locale.ROOT,
+            "at t = %s s the ball %s patch %s and %s patch %s: a rigid and a compliant contact at once are not"
+                + " supported (make both patches compliant, or both rigid)", t, firstVerb, first, secondVerb, second);
     }
 }

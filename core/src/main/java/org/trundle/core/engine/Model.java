@@ -24,35 +24,59 @@ import org.trundle.core.SolverSettings;
  * @param gravity gravitational acceleration (m/s²)
  * @param load the applied load
  * @param settings solver settings
- * @param compliance the compliant contact of a one-patch scene that stands still, or null for the rigid contact
  * @param access write access to contact contexts
  */
 public record Model(Ball ball, List<Patch> patches, ContactLaw law, Vector3D gravity, AppliedLoad load,
-                    SolverSettings settings, Compliance compliance, ContextAccess access) {
+                    SolverSettings settings, ContextAccess access) {
 
     /** Copies the list. */
     public Model {
         patches = List.copyOf(patches);
     }
 
+    /** @return whether any patch of the scene has a compliant contact */
+    public boolean compliant() {
+        for (Patch p : patches) {
+            if (p.compliance() != null) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /**
-     * Mechanical energy {@code ½ m|v|² + ½ I|ω|² − m g·c} (J), potential zero at the origin, plus with a
-     * compliant contact the elastic energy stored in it, {@code (2/5) K δ^{5/2}}.
+     * Mechanical energy {@code ½ m|v|² + ½ I|ω|² − m g·c} (J), potential zero at the origin, plus the elastic
+     * energy stored in every compliant patch the ball presses (approach {@code δ = r − d > 0}, contact point on the
+     * patch, where the patch is at the state's time), {@code Σ (2/5) K_i δ_i^{5/2}}.
      *
      * @param s a state
      * @return the energy (J)
      */
     public double energy(BallState s) {
         double e = s.kineticEnergy(ball) - ball.mass() * gravity.dotProduct(s.centre());
-        if (compliance != null) {
+        for (Patch p : patches) {
+            Compliance c = p.compliance();
+            if (c == null) {
+                continue;
+            }
             ContactGeometry g = new ContactGeometry();
-            // a compliant contact belongs to a scene of one patch that stands still (checked by Simulation)
-            org.trundle.core.Surface surface = patches.get(0).surface();
+            org.trundle.core.Surface surface = p.surface();
             g.scratch = surface.newScratch();
-            surface.query(s.time(), s.centre().toArray(), g);
+            try {
+                if (p.motion().stationary()) {
+                    surface.query(s.time(), s.centre().toArray(), g);
+                } else {
+                    org.trundle.core.MotionState pose = new org.trundle.core.MotionState();
+                    p.motion().at(s.time(), pose);
+                    pose.query(surface, s.time(), s.centre().toArray(), g);
+                }
+            } catch (org.trundle.core.SurfaceDomainException ex) {
+                // no closest point: the ball is nowhere near this patch's wall
+                continue;
+            }
             double delta = ball.radius() - g.distance;
             if (delta > 0 && g.patchMargin >= 0) {
-                e += Compliance.elasticEnergy(compliance.stiffness(ball.radius(), g.curvature1, g.curvature2), delta);
+                e += Compliance.elasticEnergy(c.stiffness(ball.radius(), g.curvature1, g.curvature2), delta);
             }
         }
         return e;

@@ -7,35 +7,56 @@ import org.trundle.core.EventKind;
 import org.trundle.core.Phase;
 
 /**
- * The end of a compliant contact: the approach {@code r − d} (m) falls through zero as the ball leaves the
- * wall (the normal force has reached zero with it). Watched in flight while a compliant contact that began
- * with an impact event lasts; the reaction logs a {@code lift_off} event and lets {@link ImpactRule} watch
- * for the next contact.
+ * The end of a compliant contact on one patch: the approach {@code r − d} (m) on that patch falls through zero
+ * as the ball leaves the wall (the normal force has reached zero with it). One rule per compliant patch, watched
+ * in flight while that patch's contact, begun with an impact event (or pressed at the start), lasts; the reaction
+ * logs a {@code lift_off} event on the patch and lets its {@link ImpactRule} watch for the next contact.
  */
 final class ReleaseRule extends SwitchRule {
-    ReleaseRule(Run run) {
+    /** The compliant patch this rule watches. */
+    private final ContactSlot slot;
+
+    ReleaseRule(Run run, ContactSlot slot) {
         super(run);
+        this.slot = slot;
     }
 
     @Override
     String label() {
-        return "release";
+        return "release from " + slot.id;
     }
 
     @Override
     boolean watches(Phase phase) {
-        return phase == Phase.FLIGHT && run.compliance != null && run.touching;
+        return phase == Phase.FLIGHT && slot.pressing;
     }
 
+    /** The patch's own distance in the snapshot (exact within two radii, so always while pressed). */
     @Override
     double value(Snapshot s) {
-        return run.r - s.distance;
+        return run.r - s.slotDistance[slot.index];
     }
 
     @Override
     EndReason react(Transitions x, BallState before) {
-        run.touching = false;
-        run.log(EventKind.LIFT_OFF, before, null, Vector3D.ZERO);
+        slot.pressing = false;
+        run.logOn(slot.id, EventKind.LIFT_OFF, before, null, Vector3D.ZERO, null, null);
+        // another compliant patch left at the same instant (a groove's two walls after a drop down its bisector):
+        // its release function is not positive at the next segment's start, so it is released now too
+        for (ContactSlot other : run.slots) {
+            if (other == slot || !other.pressing) {
+                continue;
+            }
+            try {
+                other.query(run.t, run.centreOf(run.y));
+            } catch (org.trundle.core.SurfaceDomainException e) {
+                continue;
+            }
+            if (run.r - other.geo.distance <= 0) {
+                other.pressing = false;
+                run.logOn(other.id, EventKind.LIFT_OFF, before, null, Vector3D.ZERO, null, null);
+            }
+        }
         return null;
     }
 }

@@ -12,7 +12,6 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
-import org.trundle.core.Compliance;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EventKind;
 import org.trundle.core.Integrator;
@@ -51,10 +50,8 @@ final class Run {
     ContactLaw law;
     final Dynamics dyn;
     final Snapshots snapshots;
-    /** The patch's compliant contact, or null for the rigid contact. */
-    final Compliance compliance;
-    /** With a compliant contact: whether the ball is in a contact that began with an impact event. */
-    boolean touching;
+    /** Whether any patch of the scene is compliant (flight then integrates the full layout). */
+    final boolean compliant;
     private final double[] centreWork = new double[3];
 
     // scales of the run (set at the start)
@@ -137,7 +134,8 @@ final class Run {
         this.law = slot.law;
         this.dyn = new Dynamics(model, slot);
         this.dyn.setContacts(contacts);
-        this.compliance = model.compliance();
+        this.dyn.setSlots(slots);
+        this.compliant = model.compliant();
         this.restitution = law.restitution().orElse(0.0);
         this.snapshots = new Snapshots(this);
         this.dyn.stageObserver = snapshots::stageAtStepEnd;
@@ -288,12 +286,17 @@ final class Run {
     }
 
     void trackForce(double ts, double[] ys, Phase p) {
-        if (p.inContact() || compliance != null) {
+        if (p.inContact() || compliant) {
             Phase keep = dyn.phase;
             dyn.phase = p;
             dyn.evaluate(ts, ys);
             dyn.phase = keep;
             maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
+            if (p == Phase.FLIGHT) {
+                for (double f : dyn.compliantNormal) {
+                    maxNormalForce = Math.max(maxNormalForce, f);
+                }
+            }
             if (dyn.multi()) {
                 for (int k = 1; k < contacts.count(); k++) {
                     maxNormalForce = Math.max(maxNormalForce, dyn.contactNormal[k]);
@@ -323,6 +326,10 @@ final class Run {
         Vector3D cp = null;
         Vector3D onBall = null;
         boolean touching = p != Phase.FLIGHT || dyn.pressing;
+        if (p == Phase.FLIGHT && dyn.pressing) {
+            observer.sample(compliantSample(s, ys, isEvent));
+            return;
+        }
         if (touching) {
             double[] n = dyn.geo.normal;
             cp = new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]);
@@ -353,6 +360,49 @@ final class Run {
                 new Vector3D(n[0], n[1], n[2])));
         }
         observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent, ids, touches));
+    }
+
+    /**
+     * The sample of a flight state pressing compliant patches (after the evaluation): one contact per patch pressed,
+     * scene order, the active one (or the first) as the sample's own contact.
+     */
+    private Sample compliantSample(BallState s, double[] ys, boolean isEvent) {
+        java.util.List<SampleContact> touches = new java.util.ArrayList<>();
+        java.util.List<String> ids = new java.util.ArrayList<>();
+        ContactSlot primary = dyn.compliantPrimary;
+        SampleContact first = null;
+        for (ContactSlot sk : slots) {
+            if (!dyn.compliantOn[sk.index]) {
+                continue;
+            }
+            double[] n = sk.geo.normal;
+            double[] f = dyn.compliantFriction[sk.index];
+            SampleContact one = new SampleContact(sk.id, Phase.FLIGHT, dyn.compliantNormal[sk.index],
+                new Vector3D(f[0], f[1], f[2]), new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]),
+                new Vector3D(n[0], n[1], n[2]));
+            if (sk == primary) {
+                first = one;
+            } else {
+                touches.add(one);
+                ids.add(sk.id);
+            }
+        }
+        touches.add(0, first);
+        ids.add(0, primary.id);
+        double[] n = primary.geo.normal;
+        Vector3D onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
+        return new Sample(s, first.normalForce(), first.frictionForce(), first.contactPoint(), onBall, isEvent, List.copyOf(ids),
+            List.copyOf(touches));
+    }
+
+    /** @return whether a compliant contact is under way on any patch */
+    boolean pressingAny() {
+        for (ContactSlot s : slots) {
+            if (s.pressing) {
+                return true;
+            }
+        }
+        return false;
     }
 
     void log(EventKind kind, BallState before, BallState after, Vector3D impulse) {

@@ -25,6 +25,8 @@ final class Segment {
     private final SwitchRule[] rules;
     /** Integrated layout per patch and phase, built on first use. */
     private final int[][][] layouts;
+    /** Integrated layout of two rolling contacts on still patches, without and with couples, built on first use. */
+    private final int[][] pairLayouts = new int[2][];
     /** The rule whose switch stopped the segment, or null. */
     SwitchRule fired;
     /** The time the current segment started at (s). */
@@ -47,7 +49,11 @@ final class Segment {
         for (ContactSlot s : run.slots) {
             list.add(new ImpactRule(run, s));
         }
-        list.add(new ReleaseRule(run));
+        for (ContactSlot s : run.slots) {
+            if (s.compliance != null) {
+                list.add(new ReleaseRule(run, s));
+            }
+        }
         list.add(new PivotRule(run));
         if (run.slots.length > 1) {
             // the second and third contacts of a scene: their own release, slip and stick
@@ -75,11 +81,13 @@ final class Segment {
         Dynamics dyn = run.dyn;
         dyn.phase = phase;
         int[][] perPhase = layouts[run.slot.index];
-        // several contacts integrate the full layout (the velocity is not derived from one normal)
-        int[] layout = run.contacts.multi() ? StateMapper.identity() : perPhase[phase.ordinal()];
+        // several contacts integrate the full layout (the velocity is not derived from one normal), except
+        // two rolling contacts on still patches: their velocity is derived from the spin, v = r ω × n₀
+        int[] layout = run.contacts.rollingPair() ? pairLayout()
+            : run.contacts.multi() ? StateMapper.identity() : perPhase[phase.ordinal()];
         if (layout == null) {
             // a compliant contact integrates flight with every loss (its friction, couples and damping)
-            layout = run.compliance != null ? StateMapper.identity()
+            layout = run.compliant && phase == Phase.FLIGHT ? StateMapper.identity()
                 : StateMapper.layout(phase, run.slot.couples, run.model.load() != AppliedLoad.NONE,
                     run.slot.moving);
             perPhase[phase.ordinal()] = layout;
@@ -141,6 +149,20 @@ final class Segment {
     }
 
     /**
+     * The compact rolling layout of two rolling contacts on still patches ({@link ContactSet#rollingPair}):
+     * centre, quaternion, spin and the integrals either contact's law or the load can change; the velocity is
+     * derived ({@code v = r ω × n₀}, as with one contact).
+     */
+    private int[] pairLayout() {
+        boolean couples = run.contacts.at(0).couples || run.contacts.at(1).couples;
+        int i = couples ? 1 : 0;
+        if (pairLayouts[i] == null) {
+            pairLayouts[i] = StateMapper.layout(Phase.ROLLING, couples, run.model.load() != AppliedLoad.NONE, false);
+        }
+        return pairLayouts[i];
+    }
+
+    /**
      * The smallest step the integrator may take from a time: two units in the last place, so that
      * the step's end is a later time. A step the error control wants shorter fails the run
      * ("minimal step size reached") instead of repeating steps that do not advance.
@@ -160,7 +182,7 @@ final class Segment {
      * keep Dormand–Prince).
      */
     private boolean symmetricApplies(Phase phase) {
-        return run.fixedStep > 0 && (phase == Phase.ROLLING || phase == Phase.FLIGHT) && run.compliance == null
+        return run.fixedStep > 0 && (phase == Phase.ROLLING || phase == Phase.FLIGHT) && !run.compliant
             && !run.slot.moving && !run.contacts.multi();
     }
 
@@ -272,7 +294,7 @@ final class Segment {
             }
             run.lastGoodT = tc;
             run.lastGoodPhase = phase;
-            if (phase == Phase.FLIGHT && run.compliance != null) {
+            if (phase == Phase.FLIGHT && run.compliant) {
                 run.trackForce(tc, yc != null ? yc : run.snapshots.fullState(cur), phase);
             }
             if (phase.inContact()) {

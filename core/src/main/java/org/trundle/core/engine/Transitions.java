@@ -53,19 +53,48 @@ final class Transitions {
         double t = run.t;
         double[] y = run.y;
         double tolLen = run.set.contactTolerance() * r;
-        if (run.compliance != null) {
-            // a compliant contact (a one-patch scene that stands still) is a force in flight: any start
-            // integrates as flight; a start pressing the wall is a contact already under way (its damping
-            // set from the settle speed)
-            run.slot.query(t, run.centreOf(y));
-            double gap = dyn.geo.distance - r;
-            if (gap < -tolLen) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
-                    run.surface.name(), dyn.geo.distance, r));
+        boolean rigidStart = requested != Phase.FLIGHT;
+        String pressed = null;
+        if (run.compliant) {
+            // a compliant patch's contact is a force in flight: a start pressing one is a contact already under
+            // way (its damping set from the settle speed); a start touching no rigid patch integrates as flight
+            rigidStart = false;
+            for (ContactSlot s : run.slots) {
+                if (s.compliance == null) {
+                    try {
+                        s.query(t, run.centreOf(y));
+                    } catch (org.trundle.core.SurfaceDomainException e) {
+                        continue;
+                    }
+                    rigidStart |= requested != Phase.FLIGHT && Math.abs(s.geo.distance - r) <= tolLen
+                        && s.geo.patchMargin >= 0;
+                    continue;
+                }
+                double d;
+                try {
+                    s.query(t, run.centreOf(y));
+                    d = s.geo.distance;
+                } catch (org.trundle.core.SurfaceDomainException e) {
+                    continue;
+                }
+                double gap = d - r;
+                if (gap < -tolLen) {
+                    throw run.reject(String.format(Locale.ROOT,
+                        "start centre penetrates surface %s: distance %s m is below the ball radius %s m",
+                        s.surface.name(), d, r));
+                }
+                s.pressing = gap < 0 && s.geo.patchMargin >= 0;
+                if (s.pressing && pressed == null) {
+                    pressed = s.id;
+                }
             }
-            run.touching = gap < 0 && dyn.geo.patchMargin >= 0;
-            return Phase.FLIGHT;
+            if (rigidStart && pressed != null) {
+                throw run.reject(String.format(Locale.ROOT, "start touches a rigid patch and presses compliant patch %s:"
+                    + " a rigid and a compliant contact at once are not supported", pressed));
+            }
+        }
+        if (!rigidStart && run.compliant) {
+            requested = Phase.FLIGHT;
         }
         if (requested == Phase.FLIGHT) {
             // a flight start needs no closest point: only a bound that shows no patch is penetrated
@@ -82,6 +111,7 @@ final class Transitions {
         ContactSlot touched = null;
         if (run.slots.length > 1) {
             java.util.List<ContactSlot> all = touchingAll(t, y, tolLen);
+            all.removeIf(s -> s.compliance != null);
             if (all.size() > 1) {
                 return startSeveral(requested, all);
             }
@@ -958,7 +988,7 @@ final class Transitions {
      * @param before the state before the impact (for the events)
      */
     void reachPressed(BallState before) {
-        if (run.slots.length < 2 || !run.phase().inContact() || run.compliance != null) {
+        if (run.slots.length < 2 || !run.phase().inContact()) {
             return;
         }
         double tol = run.set.contactTolerance() * r;
@@ -978,6 +1008,10 @@ final class Transitions {
             }
             if (s.geo.distance - r <= tol && s.geo.patchMargin >= 0
                 && ContactKinematics.normalPart(full, V, s.geo.normal) <= 0) {
+                if (s.compliance != null) {
+                    throw new RunFailure(ImpactRule.mixMessage(run.t, run.slot.id, "touches rigid", s.id,
+                        "reaches compliant"));
+                }
                 reach(s, before);
             }
         }

@@ -7,6 +7,7 @@ import java.util.SplittableRandom;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
@@ -226,6 +227,116 @@ class ContactForceSolverTest {
         assertEquals(M * G / 2, s.force(1)[2], 1e-12 * M * G);
         assertEquals(0, s.normalForce(0), 1e-12 * M * G);
         assertEquals(0, s.normalForce(1), 1e-12 * M * G);
+    }
+
+    /**
+     * The closed form of two rolling contacts on still patches ({@link RollingPair}, what {@code solve} takes)
+     * against the general linear system ({@code solveGeneral}: EJML LU with the squeeze rows) on seeded random
+     * geometry: normals 10° to 170° apart, random symmetric distance Hessians (|H| up to 100 1/m, i.e.
+     * curvature radii down to about the ball's), random spin, gravity, applied force and couple; in half the
+     * cases the state is on the constraint manifold ({@code ω} along the chord, {@code v = r ω × n₁}), in the
+     * other half it is not (random {@code v}, {@code ω}: the general solver's answer off the manifold is
+     * reproduced too). Forces, accelerations, normal and tangential forces agree to 1e-12 of their scale: both
+     * are exact up to rounding (the worst force difference of the 200 cases is 2e-14 of the scale, the LU's
+     * rounding), so 1e-12 leaves a margin of fifty while any wrong term shows at order one (dropping the
+     * off-manifold term ρ fails every second case).
+     */
+    @ParameterizedTest(name = "seed {0}")
+    @MethodSource("seeds")
+    void twoRollingContactsClosedFormMatchesTheGeneralSolve(long seed) {
+        SplittableRandom rnd = new SplittableRandom(seed);
+        double k = 0.2 + 0.47 * rnd.nextDouble();
+        double[] n1 = unitVector(rnd);
+        double[] side = unitVector(rnd);
+        double[] perp = new double[3];
+        Vec.cross(n1, side, perp);
+        Vec.scale(perp, 1.0 / Vec.norm(perp));
+        double angle = Math.toRadians(10 + 160 * rnd.nextDouble());
+        double[] n2 = new double[3];
+        for (int i = 0; i < 3; i++) {
+            n2[i] = Math.cos(angle) * n1[i] + Math.sin(angle) * perp[i];
+        }
+        double[] h1 = symmetric(rnd, 100);
+        double[] h2 = symmetric(rnd, 100);
+        double[] w;
+        double[] v = new double[3];
+        if (seed % 2 == 0) {
+            double[] chord = {n1[0] - n2[0], n1[1] - n2[1], n1[2] - n2[2]};
+            double spin = 40 * rnd.nextDouble() - 20;
+            Vec.scale(chord, spin / Vec.norm(chord));
+            w = chord;
+            ContactKinematics.noSlipVelocity(R, w[0], w[1], w[2], n1, v, 0);
+        } else {
+            w = new double[] {rnd.nextDouble() * 40 - 20, rnd.nextDouble() * 40 - 20, rnd.nextDouble() * 40 - 20};
+            v = new double[] {rnd.nextDouble() - 0.5, rnd.nextDouble() - 0.5, rnd.nextDouble() - 0.5};
+        }
+        double[] g = {rnd.nextDouble() * 4 - 2, rnd.nextDouble() * 4 - 2, -G};
+        double[] fApp = {0.2 * rnd.nextDouble() - 0.1, 0.2 * rnd.nextDouble() - 0.1, 0.2 * rnd.nextDouble() - 0.1};
+        double[] tau = {1e-3 * rnd.nextDouble(), -2e-3 * rnd.nextDouble(), 1e-3 * (rnd.nextDouble() - 0.5)};
+        ContactForceSolver closed = new ContactForceSolver(R, M, k);
+        ContactForceSolver general = new ContactForceSolver(R, M, k);
+        for (ContactForceSolver s : new ContactForceSolver[] {closed, general}) {
+            s.addRolling(n1, h1);
+            s.addRolling(n2, h2);
+        }
+        assertTrue(closed.solve(v, w, g, fApp, tau));
+        assertTrue(general.solveGeneral(v, w, g, fApp, tau));
+        double fScale = Math.max(Math.max(Vec.norm(general.force(0)), Vec.norm(general.force(1))), M * G);
+        for (int i = 0; i < 2; i++) {
+            for (int c = 0; c < 3; c++) {
+                assertEquals(general.force(i)[c], closed.force(i)[c], 1e-12 * fScale, "force " + i + " component " + c);
+            }
+            assertEquals(general.normalForce(i), closed.normalForce(i), 1e-12 * fScale, "normal force " + i);
+            assertEquals(general.tangentialForce(i), closed.tangentialForce(i), 1e-12 * fScale, "tangential " + i);
+        }
+        double aScale = Vec.norm(general.acceleration()) + R * Vec.norm(general.angularAcceleration()) + G;
+        for (int c = 0; c < 3; c++) {
+            assertEquals(general.acceleration()[c], closed.acceleration()[c], 1e-12 * aScale, "a " + c);
+            assertEquals(general.angularAcceleration()[c], closed.angularAcceleration()[c], 1e-12 * aScale / R,
+                "alpha " + c);
+        }
+    }
+
+    static java.util.stream.LongStream seeds() {
+        return java.util.stream.LongStream.rangeClosed(1, 200);
+    }
+
+    /** Nearly parallel and antipodal normals are left to the general solver (same answer as it). */
+    @ParameterizedTest
+    @ValueSource(doubles = {1.0, 179.0})
+    void degenerateNormalsFallBackToTheGeneralSolve(double degrees) {
+        double a = Math.toRadians(degrees);
+        double[] n1 = {0, 0, 1};
+        double[] n2 = {0, Math.sin(a), Math.cos(a)};
+        double[] h = new double[9];
+        double[] acc = new double[3];
+        double[] f = new double[3];
+        assertTrue(!new RollingPair(R, M, 0.4 * M * R * R).solve(n1, h, n2, h, new double[3], new double[3],
+            gravity(0.1), new double[3], new double[3], acc, acc.clone(), f, f.clone()));
+        ContactForceSolver closed = new ContactForceSolver(R, M, 0.4);
+        ContactForceSolver general = new ContactForceSolver(R, M, 0.4);
+        for (ContactForceSolver s : new ContactForceSolver[] {closed, general}) {
+            s.addRolling(n1, h);
+            s.addRolling(n2, h);
+        }
+        assertEquals(general.solveGeneral(new double[3], new double[3], gravity(0.1), new double[3], new double[3]),
+            closed.solve(new double[3], new double[3], gravity(0.1), new double[3], new double[3]));
+        for (int i = 0; i < 2; i++) {
+            for (int c = 0; c < 3; c++) {
+                assertEquals(general.force(i)[c], closed.force(i)[c], 0.0);
+            }
+        }
+    }
+
+    private static double[] symmetric(SplittableRandom rnd, double size) {
+        double[] h = new double[9];
+        for (int i = 0; i < 3; i++) {
+            for (int j = i; j < 3; j++) {
+                h[3 * i + j] = size * (rnd.nextDouble() - 0.5);
+                h[3 * j + i] = h[3 * i + j];
+            }
+        }
+        return h;
     }
 
     private static ContactForceSolver vGroove(double k, double gamma) {

@@ -611,7 +611,7 @@ public final class Invariants {
         for (Patch p : patches) {
             mb.patch(new Patch(p.id(), new RigidlyMovedSurface(p.surface(), rotation, translation),
                 p.motion().stationary() ? p.motion() : new RigidlyMovedMotion(p.motion(), rotation, translation),
-                p.law()));
+                p.law(), p.compliance()));
         }
         return mb.build();
     }
