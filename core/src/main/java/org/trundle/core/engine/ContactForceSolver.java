@@ -209,7 +209,7 @@ final class ContactForceSolver {
         return count++;
     }
 
-    /** @return the number of contacts of the current solve */
+    /** @return the number of contacts added for the current solve (0 after {@link #solveRollingPair}) */
     int count() {
         return count;
     }
@@ -230,6 +230,38 @@ final class ContactForceSolver {
                 force[1])) {
             return summarise();
         }
+        return solveGeneral(v, w, g, fApp, tau);
+    }
+
+    /**
+     * Solves two rolling contacts on patches that stand still, reading their geometry in place (nothing is
+     * copied): the closed form of {@link RollingPair}, or the general system when the normals are nearly
+     * parallel or antipodal. Replaces the contacts of the last solve; the results are read as after
+     * {@link #solve}.
+     *
+     * @param n1 unit normal of contact 0, toward the ball
+     * @param h1 distance Hessian of contact 0 at the centre (1/m)
+     * @param n2 unit normal of contact 1
+     * @param h2 distance Hessian of contact 1
+     * @param v centre velocity (m/s)
+     * @param w spin (rad/s)
+     * @param g gravitational acceleration (m/s²)
+     * @param fApp applied force (N)
+     * @param tau applied torque plus the laws' contact couples (N·m)
+     * @return false when the accelerations are not finite (or the general system is singular)
+     */
+    boolean solveRollingPair(double[] n1, double[] h1, double[] n2, double[] h2, double[] v, double[] w,
+                             double[] g, double[] fApp, double[] tau) {
+        if (pair.solve(n1, h1, n2, h2, v, w, g, fApp, tau, acc, angAcc, force[0], force[1])) {
+            // no contact is stored: a later solve starts from clear() and adds its own
+            count = 0;
+            summarise(0, n1);
+            summarise(1, n2);
+            return finite();
+        }
+        clear();
+        addRolling(n1, h1);
+        addRolling(n2, h2);
         return solveGeneral(v, w, g, fApp, tau);
     }
 
@@ -348,15 +380,24 @@ final class ContactForceSolver {
     /** Each contact's normal and tangential force from its force; false when the accelerations are not finite. */
     private boolean summarise() {
         for (int i = 0; i < count; i++) {
-            double[] f = force[i];
-            double[] ni = normal[i];
-            double fn = Vec.dot(f, ni);
-            normalForce[i] = fn;
-            double tx = f[0] - fn * ni[0];
-            double ty = f[1] - fn * ni[1];
-            double tz = f[2] - fn * ni[2];
-            tangentialForce[i] = Math.sqrt(tx * tx + ty * ty + tz * tz);
+            summarise(i, normal[i]);
         }
+        return finite();
+    }
+
+    /** Contact i's normal and tangential force from its force and its normal. */
+    private void summarise(int i, double[] ni) {
+        double[] f = force[i];
+        double fn = Vec.dot(f, ni);
+        normalForce[i] = fn;
+        double tx = f[0] - fn * ni[0];
+        double ty = f[1] - fn * ni[1];
+        double tz = f[2] - fn * ni[2];
+        tangentialForce[i] = Math.sqrt(tx * tx + ty * ty + tz * tz);
+    }
+
+    /** @return whether the accelerations of the last solve are finite */
+    private boolean finite() {
         for (int k = 0; k < 3; k++) {
             if (!Double.isFinite(acc[k]) || !Double.isFinite(angAcc[k])) {
                 return false;

@@ -1153,10 +1153,14 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             up[2] -= r * (om[0] * n[1] - om[1] * n[0]);
         }
         // the integrator's trial stages of a long flight step may land deep in the wall and very fast: hold
-        // the law at an approach of one radius and an approach rate of ten times the impact speed there (no
-        // accepted state comes near either; without the hold such a trial stage could overflow)
+        // the law at an approach of one radius and its damping term at an approach rate of ten times the impact
+        // speed there (without the hold such a trial stage could overflow). The rate hold can bind in accepted
+        // states too: a contact that began grazing (a small v₀, so a large Hunt–Crossley c = χ/v₀) and is then
+        // pressed fast, as a ball rattling between two compliant walls does; the damping power is booked with
+        // the true rate, (F_n − K δ^{3/2}) δ̇, so that the budget closes either way
         delta = Math.min(delta, r);
-        double rate = Math.min(-dot(rv, n), 10 * s.touchSpeed);
+        double trueRate = -dot(rv, n);
+        double rate = Math.min(trueRate, 10 * s.touchSpeed);
         Compliance comp = s.compliance;
         double kh = comp.stiffness(r, sg.curvature1, sg.curvature2);
         double elastic = kh * delta * Math.sqrt(delta);
@@ -1206,7 +1210,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         }
         compliantNormal[s.index] = fn;
         lossSlide += visc * sp * sp;
-        lossDamp += (fn - elastic) * rate;
+        lossDamp += (fn - elastic) * trueRate;
     }
 
     /**
@@ -1294,9 +1298,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * normal force, friction {@code μ_i N_i} against the slip), the laws' couples at the normal forces of a
      * first solve without them, then the solve with them. The velocity is integrated (full layout), except for
      * two rolling contacts on still patches ({@link ContactSet#rollingPair}), where it is derived from the spin
-     * as with one contact, {@code v = r ω × n₀} (the active slot's normal; compact rolling layout): the
-     * constraints are held by the solve at acceleration level and by the projection onto every contact's
-     * manifold ({@link Transitions#projected}). Results per position into the {@code contact*} arrays; position
+     * as with one contact, {@code v = r ω × n₀} (the active slot's normal; compact rolling layout), and the
+     * closed form of {@link RollingPair} solves, reading the geometry in place: the constraints are held by the
+     * solve at acceleration level and by the projection onto every contact's manifold
+     * ({@link Transitions#projected}). Results per position into the {@code contact*} arrays; position
      * 0 (the active slot) also into the single-contact fields.
      */
     private void multiForces(double t, double[] y, double[] yDot) {
@@ -1500,6 +1505,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     /** Loads the solver with the touching contacts and solves with the couple {@link #tau}. */
     private void solveContacts(int count) {
         ContactForceSolver sv = solver;
+        if (contacts.rollingPair()) {
+            // the common case (groove, rails): the closed form, the geometry read in place
+            ContactSlot a = contacts.at(0);
+            ContactSlot b = contacts.at(1);
+            if (!sv.solveRollingPair(a.geo.normal, a.geo.hessian, b.geo.normal, b.geo.hessian, vel, w, g, fApp, tau)) {
+                throw cannotHold(count);
+            }
+            return;
+        }
         sv.clear();
         for (int k = 0; k < count; k++) {
             ContactSlot s = contacts.at(k);
@@ -1516,14 +1530,19 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             }
         }
         if (!sv.solve(vel, w, g, fApp, tau)) {
-            StringBuilder ids = new StringBuilder();
-            for (int k = 0; k < count; k++) {
-                ids.append(k == 0 ? "" : ", ").append(contacts.at(k).id).append(" (")
-                    .append(contacts.at(k).mode.name().toLowerCase(java.util.Locale.ROOT)).append(')');
-            }
-            throw new RunFailure("the contacts on " + ids + " cannot all hold: their constraint system is singular"
-                + " beyond the squeeze between rolling contacts");
+            throw cannotHold(count);
         }
+    }
+
+    /** The failure of a several-contact solve, naming the contacts and their modes. */
+    private RunFailure cannotHold(int count) {
+        StringBuilder ids = new StringBuilder();
+        for (int k = 0; k < count; k++) {
+            ids.append(k == 0 ? "" : ", ").append(contacts.at(k).id).append(" (")
+                .append(contacts.at(k).mode.name().toLowerCase(java.util.Locale.ROOT)).append(')');
+        }
+        return new RunFailure("the contacts on " + ids + " cannot all hold: their constraint system is singular"
+            + " beyond the squeeze between rolling contacts");
     }
 
     /** Gives a slot's law context the ball and the slot's geometry workspace, once. */

@@ -69,6 +69,8 @@ final class RollingPair {
     private final double inertia;
     private final double invR;
     private final double invM;
+    /** m r² (kg·m²). */
+    private final double mrr;
 
     /**
      * @param radius ball radius r (m)
@@ -81,6 +83,7 @@ final class RollingPair {
         this.inertia = inertia;
         this.invR = 1.0 / radius;
         this.invM = 1.0 / mass;
+        this.mrr = mass * radius * radius;
     }
 
     /**
@@ -114,12 +117,10 @@ final class RollingPair {
         if (!(ee >= 4 * DEGENERATE && mm >= DEGENERATE)) {
             return false;
         }
-        double el = Math.sqrt(ee);
-        double invEl = 1.0 / el;
-        double invEe = invEl * invEl;
-        double ux = ex * invEl;
-        double uy = ey * invEl;
-        double uz = ez * invEl;
+        // three independent reciprocals (no square root: every ê is written as e/|e| and the |e| cancel)
+        double invEe = 1.0 / ee;
+        double invMm = 1.0 / mm;
+        double invJ = 1.0 / (inertia + mrr * mm);
         double vx = v[0];
         double vy = v[1];
         double vz = v[2];
@@ -139,11 +140,11 @@ final class RollingPair {
         double b2x = r * (wy * p2z - wz * p2y);
         double b2y = r * (wz * p2x - wx * p2z);
         double b2z = r * (wx * p2y - wy * p2x);
-        // ρ = ê·(β₁ − β₂); Δ = β₂ − β₁ + ê ρ (the consistent difference)
-        double rho = ux * (b1x - b2x) + uy * (b1y - b2y) + uz * (b1z - b2z);
-        double dx = b2x - b1x + ux * rho;
-        double dy = b2y - b1y + uy * rho;
-        double dz = b2z - b1z + uz * rho;
+        // ρ' = ρ/|e| = e·(β₁ − β₂)/|e|²; Δ = β₂ − β₁ + ê ρ = β₂ − β₁ + e ρ' (the consistent difference)
+        double rho = (ex * (b1x - b2x) + ey * (b1y - b2y) + ez * (b1z - b2z)) * invEe;
+        double dx = b2x - b1x + ex * rho;
+        double dy = b2y - b1y + ey * rho;
+        double dz = b2z - b1z + ez * rho;
         // α⊥ = e × Δ / (r |e|²)
         double inv = invEe * invR;
         double ax = (ey * dz - ez * dy) * inv;
@@ -153,21 +154,23 @@ final class RollingPair {
         double a0x = 0.5 * (b1x + b2x) + r * (ay * mz - az * my);
         double a0y = 0.5 * (b1y + b2y) + r * (az * mx - ax * mz);
         double a0z = 0.5 * (b1z + b2z) + r * (ax * my - ay * mx);
-        // u = ê × n̄
-        double qx = uy * mz - uz * my;
-        double qy = uz * mx - ux * mz;
-        double qz = ux * my - uy * mx;
+        // e × n̄ = |e| u
+        double qx = ey * mz - ez * my;
+        double qy = ez * mx - ex * mz;
+        double qz = ex * my - ey * mx;
         double gx = g[0] + fApp[0] * invM;
         double gy = g[1] + fApp[1] * invM;
         double gz = g[2] + fApp[2] * invM;
-        double s = (ux * tau[0] + uy * tau[1] + uz * tau[2]
-            + m * r * (qx * (gx - a0x) + qy * (gy - a0y) + qz * (gz - a0z))) / (inertia + m * r * r * mm);
-        double alx = ax + s * ux;
-        double aly = ay + s * uy;
-        double alz = az + s * uz;
-        double acx = a0x + r * s * qx;
-        double acy = a0y + r * s * qy;
-        double acz = a0z + r * s * qz;
+        // σ = s/|e|: α = α⊥ + σ e, a = a₀ + r σ (e × n̄)
+        double sigma = (ex * tau[0] + ey * tau[1] + ez * tau[2]
+            + m * r * (qx * (gx - a0x) + qy * (gy - a0y) + qz * (gz - a0z))) * invEe * invJ;
+        double alx = ax + sigma * ex;
+        double aly = ay + sigma * ey;
+        double alz = az + sigma * ez;
+        double rs = r * sigma;
+        double acx = a0x + rs * qx;
+        double acy = a0y + rs * qy;
+        double acz = a0z + rs * qz;
         // total contact force F and moment T about the centre
         double fx = m * (acx - gx);
         double fy = m * (acy - gy);
@@ -175,14 +178,14 @@ final class RollingPair {
         double tx = inertia * alx - tau[0];
         double ty = inertia * aly - tau[1];
         double tz = inertia * alz - tau[2];
-        // b = −T/r − n̄ × F; d = (b × e)/|e|² + t ê
+        // b = −T/r − n̄ × F; d = (b × e)/|e|² + t ê, t ê = (m ρ' + n̄·F) e / (4 |n̄|²)
         double bx = -tx * invR - (my * fz - mz * fy);
         double by = -ty * invR - (mz * fx - mx * fz);
         double bz = -tz * invR - (mx * fy - my * fx);
-        double t = (m * rho + el * (mx * fx + my * fy + mz * fz)) / (4 * mm);
-        double ix = (by * ez - bz * ey) * invEe + t * ux;
-        double iy = (bz * ex - bx * ez) * invEe + t * uy;
-        double iz = (bx * ey - by * ex) * invEe + t * uz;
+        double t = (m * rho + mx * fx + my * fy + mz * fz) * 0.25 * invMm;
+        double ix = (by * ez - bz * ey) * invEe + t * ex;
+        double iy = (bz * ex - bx * ez) * invEe + t * ey;
+        double iz = (bx * ey - by * ex) * invEe + t * ez;
         f1[0] = 0.5 * fx + ix;
         f1[1] = 0.5 * fy + iy;
         f1[2] = 0.5 * fz + iz;
@@ -196,5 +199,88 @@ final class RollingPair {
         angAcc[1] = aly;
         angAcc[2] = alz;
         return true;
+    }
+
+    /**
+     * The velocity projection onto two rolling contacts on still patches, in closed form: the allowed motions
+     * are the rotations about the chord, {@code ψ = (r e × n₁, e)} ({@code v = r ω × n₁ = r ω × n₂} for
+     * {@code ω} along {@code e = n₁ − n₂}), so the projection orthogonal in the kinetic-energy metric
+     * {@code M = diag(m 1, I 1)} is
+     * <pre>
+     *   (v, ω) ← ψ κ,     κ = (m r (e × n₁)·v + I e·ω) / (m r² |e × n₁|² + I |e|²)
+     * </pre>
+     * — the same as the general {@code ν − M⁻¹Jᵀ(J M⁻¹ Jᵀ)⁺ J ν} of the six stacked no-slip rows (whose null
+     * space is spanned by {@code ψ}), without the pseudo-inverse (common practice: the M-orthogonal projection
+     * onto a one-dimensional subspace).
+     *
+     * @param r ball radius (m)
+     * @param m ball mass (kg)
+     * @param inertia moment of inertia (kg·m²)
+     * @param n1 unit normal of contact 1
+     * @param n2 unit normal of contact 2
+     * @param y full-layout state whose velocity and spin are replaced
+     * @return false, with {@code y} untouched, when the normals are nearly parallel or antipodal
+     */
+    static boolean projectVelocity(double r, double m, double inertia, double[] n1, double[] n2, double[] y) {
+        double ex = n1[0] - n2[0];
+        double ey = n1[1] - n2[1];
+        double ez = n1[2] - n2[2];
+        if (!nondegenerate(n1, n2)) {
+            return false;
+        }
+        // e × n₁
+        double qx = ey * n1[2] - ez * n1[1];
+        double qy = ez * n1[0] - ex * n1[2];
+        double qz = ex * n1[1] - ey * n1[0];
+        int v = StateMapper.V;
+        int w = StateMapper.W;
+        double kappa = (m * r * (qx * y[v] + qy * y[v + 1] + qz * y[v + 2]) + inertia * (ex * y[w] + ey * y[w + 1] + ez * y[w + 2]))
+            / (m * r * r * (qx * qx + qy * qy + qz * qz) + inertia * (ex * ex + ey * ey + ez * ez));
+        y[v] = r * qx * kappa;
+        y[v + 1] = r * qy * kappa;
+        y[v + 2] = r * qz * kappa;
+        y[w] = ex * kappa;
+        y[w + 1] = ey * kappa;
+        y[w + 2] = ez * kappa;
+        return true;
+    }
+
+    /**
+     * One Gauss–Newton step of the centre onto two surfaces, {@code d_i(c) = r}: the least-norm step
+     * {@code Δc = Nᵀ (N Nᵀ)⁻¹ (r − d)} with the rows {@code n₁, n₂}, the 2×2 inverse written out,
+     * {@code Δc = λ₁ n₁ + λ₂ n₂}, {@code λ₁ = (ρ₁ − c ρ₂)/(1 − c²)}, {@code λ₂ = (ρ₂ − c ρ₁)/(1 − c²)},
+     * {@code c = n₁·n₂} (the general projection's pseudo-inverse is this inverse when the normals are apart).
+     *
+     * @param n1 unit normal of surface 1
+     * @param res1 its residual {@code r − d₁} (m)
+     * @param n2 unit normal of surface 2
+     * @param res2 its residual {@code r − d₂} (m)
+     * @param y full-layout state whose centre moves
+     * @return false, with {@code y} untouched, when the normals are nearly parallel or antipodal
+     */
+    static boolean stepPosition(double[] n1, double res1, double[] n2, double res2, double[] y) {
+        if (!nondegenerate(n1, n2)) {
+            return false;
+        }
+        double cc = n1[0] * n2[0] + n1[1] * n2[1] + n1[2] * n2[2];
+        double det = 1.0 / (1 - cc * cc);
+        double l1 = (res1 - cc * res2) * det;
+        double l2 = (res2 - cc * res1) * det;
+        int c = StateMapper.C;
+        y[c] += l1 * n1[0] + l2 * n2[0];
+        y[c + 1] += l1 * n1[1] + l2 * n2[1];
+        y[c + 2] += l1 * n1[2] + l2 * n2[2];
+        return true;
+    }
+
+    /** Whether two normals are far enough from parallel and from antipodal for the closed forms ({@link #DEGENERATE}). */
+    private static boolean nondegenerate(double[] n1, double[] n2) {
+        double ex = n1[0] - n2[0];
+        double ey = n1[1] - n2[1];
+        double ez = n1[2] - n2[2];
+        double mx = n1[0] + n2[0];
+        double my = n1[1] + n2[1];
+        double mz = n1[2] + n2[2];
+        return ex * ex + ey * ey + ez * ez >= 4 * DEGENERATE && mx * mx + my * my + mz * mz >= 4 * DEGENERATE;
     }
 }

@@ -599,6 +599,9 @@ final class Transitions {
     void projectPositionOnContacts(double ts, double[] ys) {
         ContactSet set = run.contacts;
         int count = set.count();
+        if (count == 2 && projectPositionOnTwo(ts, ys)) {
+            return;
+        }
         double[][] rows = new double[count][];
         double[] res = new double[count];
         double[] unit = {1, 1, 1};
@@ -622,6 +625,29 @@ final class Transitions {
     }
 
     /**
+     * {@link #projectPositionOnContacts} for two contacts in closed form ({@link RollingPair#stepPosition}), no
+     * allocation; false (nothing moved) when their normals are nearly parallel or antipodal.
+     */
+    private boolean projectPositionOnTwo(double ts, double[] ys) {
+        ContactSlot a = run.contacts.at(0);
+        ContactSlot b = run.contacts.at(1);
+        for (int iter = 0; iter < 6; iter++) {
+            a.query(ts, run.centreOf(ys));
+            b.query(ts, run.centreOf(ys));
+            double ra = r - a.geo.distance;
+            double rb = r - b.geo.distance;
+            if (Math.max(Math.abs(ra), Math.abs(rb)) <= 1e-15 * r) {
+                return true;
+            }
+            if (!RollingPair.stepPosition(a.geo.normal, ra, b.geo.normal, rb, ys)) {
+                // the general iteration goes on from here
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
      * The velocity projection onto the constraints of every contact, orthogonal in the kinetic-energy metric
      * ({@code M = diag(m 1, I 1)}): with {@code J} the stacked constraint rows (a rolling contact: its
      * contact-point velocity {@code v + r n_i × ω}, three rows; a sliding contact: its normal speed
@@ -634,6 +660,11 @@ final class Transitions {
      */
     double projectVelocityOnContacts(double[] ys) {
         ContactSet set = run.contacts;
+        if (set.rollingPair() && RollingPair.projectVelocity(r, m, inertia, set.at(0).geo.normal,
+            set.at(1).geo.normal, ys)) {
+            // two rolling contacts on still patches: the closed form, no work from the patches
+            return 0.0;
+        }
         int count = set.count();
         java.util.List<double[]> jr = new java.util.ArrayList<>();
         java.util.List<Integer> owner = new java.util.ArrayList<>();

@@ -246,16 +246,9 @@ class ContactForceSolverTest {
     void twoRollingContactsClosedFormMatchesTheGeneralSolve(long seed) {
         SplittableRandom rnd = new SplittableRandom(seed);
         double k = 0.2 + 0.47 * rnd.nextDouble();
-        double[] n1 = unitVector(rnd);
-        double[] side = unitVector(rnd);
-        double[] perp = new double[3];
-        Vec.cross(n1, side, perp);
-        Vec.scale(perp, 1.0 / Vec.norm(perp));
-        double angle = Math.toRadians(10 + 160 * rnd.nextDouble());
-        double[] n2 = new double[3];
-        for (int i = 0; i < 3; i++) {
-            n2[i] = Math.cos(angle) * n1[i] + Math.sin(angle) * perp[i];
-        }
+        double[][] normals = RollingPairTest.normals(rnd);
+        double[] n1 = normals[0];
+        double[] n2 = normals[1];
         double[] h1 = symmetric(rnd, 100);
         double[] h2 = symmetric(rnd, 100);
         double[] w;
