@@ -61,6 +61,14 @@ final class ContactSlot {
     boolean pressing;
     /** Compliant patch: the normal speed relative to the patch (m/s) at which this contact began (sets its damping). */
     double touchSpeed = 1.0;
+    /**
+     * Compliant patch: the wall curvatures (1/m) of the last stiffness asked and that stiffness (N/m^{3/2}), so that a
+     * patch of constant curvature asks its {@code Compliance.Stiffness} once (a stiffness shared by patches of
+     * different curvatures would otherwise solve the Hertz problem again on every evaluation).
+     */
+    double stiffnessCurvature1 = Double.NaN;
+    double stiffnessCurvature2 = Double.NaN;
+    double stiffness;
     /** Whether the law context holds the ball and this slot's geometry workspace. */
     boolean contextReady;
     /**

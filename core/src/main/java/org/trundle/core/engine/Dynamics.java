@@ -1162,7 +1162,16 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double trueRate = -dot(rv, n);
         double rate = Math.min(trueRate, 10 * s.touchSpeed);
         Compliance comp = s.compliance;
-        double kh = comp.stiffness(r, sg.curvature1, sg.curvature2);
+        double kh;
+        if (sg.curvature1 == s.stiffnessCurvature1 && sg.curvature2 == s.stiffnessCurvature2) {
+            kh = s.stiffness;
+        } else {
+            // a stiffness is a function of the ball radius and the wall's curvatures only (Compliance.Stiffness)
+            kh = comp.stiffness(r, sg.curvature1, sg.curvature2);
+            s.stiffnessCurvature1 = sg.curvature1;
+            s.stiffnessCurvature2 = sg.curvature2;
+            s.stiffness = kh;
+        }
         double elastic = kh * delta * Math.sqrt(delta);
         double fn = comp.force(kh, delta, rate, s.touchSpeed);
         double[] sl = compliantSlip[s.index];
