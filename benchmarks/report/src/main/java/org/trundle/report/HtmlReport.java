@@ -19,6 +19,8 @@ import org.trundle.core.Phase;
 import org.trundle.core.PhaseSpan;
 import org.trundle.core.RunEvent;
 import org.trundle.core.RunResult;
+import org.trundle.core.Patch;
+import org.trundle.core.Simulation;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 
@@ -57,6 +59,24 @@ public final class HtmlReport {
      */
     public static void writeRun(Path file, String title, String outcome, RunRecorder rec, RunResult result,
                                 Surface surface, Vector3D up, double ballRadius) throws IOException {
+        writeRun(file, title, outcome, rec, result, List.of(Patch.of(Simulation.SINGLE_PATCH, surface)), up, ballRadius);
+    }
+
+    /**
+     * Writes a scene's run report: every patch is drawn (a moving one at its pose at the first sample).
+     *
+     * @param file the HTML file to write
+     * @param title the title (scenario headline)
+     * @param outcome the outcome line
+     * @param rec the recorded run
+     * @param result the result, or null when the run failed
+     * @param patches the scene's patches
+     * @param up unit up direction
+     * @param ballRadius ball radius (m)
+     * @throws IOException when the file cannot be written
+     */
+    public static void writeRun(Path file, String title, String outcome, RunRecorder rec, RunResult result,
+                                List<Patch> patches, Vector3D up, double ballRadius) throws IOException {
         ObjectNode data = JSON.createObjectNode();
         data.put("kind", "run");
         data.put("title", title);
@@ -66,7 +86,7 @@ public final class HtmlReport {
         data.set("palette", palette());
         SampleDigest d = rec.digest();
         data.set("samples", samples(d));
-        PatchMeshes pm = PatchMeshes.of(surface, d, ballRadius, PatchMeshes.VIEW_RESOLUTION);
+        PatchMeshes pm = PatchMeshes.of(patches, d, ballRadius, PatchMeshes.VIEW_RESOLUTION);
         ObjectNode mesh = data.putObject("mesh");
         floats(mesh.putArray("vertices"), pm.mesh().vertices());
         ArrayNode tri = mesh.putArray("triangles");
@@ -94,7 +114,7 @@ public final class HtmlReport {
             o.put("detail", detail);
         }
         data.put("events_left_out", Math.max(0, events.size() - MAX_EVENTS));
-        data.set("summary", summary(result, rec, surface, pm));
+        data.set("summary", summary(result, rec, patches, pm));
         data.set("energy", energy(result == null ? null : result.energy()));
         write(file, title, data);
     }
@@ -200,9 +220,17 @@ public final class HtmlReport {
         }
     }
 
-    private static ArrayNode summary(RunResult r, RunRecorder rec, Surface surface, PatchMeshes pm) {
+    private static ArrayNode summary(RunResult r, RunRecorder rec, List<Patch> patches, PatchMeshes pm) {
         ArrayNode rows = JSON.createArrayNode();
-        row(rows, "surface", surface.name());
+        if (patches.size() == 1) {
+            row(rows, "surface", patches.get(0).surface().name());
+        } else {
+            StringBuilder b = new StringBuilder();
+            for (Patch p : patches) {
+                b.append(b.length() == 0 ? "" : ", ").append(p.id()).append(" (").append(p.surface().name()).append(')');
+            }
+            row(rows, "patches", b.toString());
+        }
         if (r != null) {
             row(rows, "end", r.endReason().name().toLowerCase(Locale.ROOT) + (r.message() == null || r.message().isEmpty()
                 ? "" : ": " + r.message()));

@@ -17,6 +17,8 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.EventKind;
 import org.trundle.core.Phase;
 import org.trundle.core.RunEvent;
+import org.trundle.core.Patch;
+import org.trundle.core.Simulation;
 import org.trundle.core.Surface;
 
 /**
@@ -80,6 +82,22 @@ public final class RunPlot {
      */
     public static void write(Path file, String[] title, RunRecorder rec, Surface surface, Vector3D up, double ballRadius)
         throws IOException {
+        write(file, title, rec, List.of(Patch.of(Simulation.SINGLE_PATCH, surface)), up, ballRadius);
+    }
+
+    /**
+     * The same for a scene: every patch is drawn (a moving one at its pose at the first sample).
+     *
+     * @param file PNG to write
+     * @param title title lines (scenario description; outcome)
+     * @param rec the recorded run
+     * @param patches the scene's patches (drawn from their meshes)
+     * @param up unit up direction (opposite to gravity)
+     * @param ballRadius ball radius (m), for the box around the path
+     * @throws IOException when the file cannot be written
+     */
+    public static void write(Path file, String[] title, RunRecorder rec, List<Patch> patches, Vector3D up,
+                             double ballRadius) throws IOException {
         SampleDigest d = rec.digest();
         List<RunEvent> events = rec.events();
         int top = 16 + 24 * title.length + 28;
@@ -105,8 +123,9 @@ public final class RunPlot {
             forcePanel(g, 2 * W / 3, top, d, t0, t1);
         }
         boolean wall = rec.coordinateTitles() != null && PhasePlot.range(d, SampleDigest.Column.U, false) != null;
-        PatchMeshes mesh = PatchMeshes.of(surface, d, ballRadius, PatchMeshes.PICTURE_RESOLUTION);
-        String note = mesh.note() != null ? mesh.note() : mesh.mesh().triangleCount() + " mesh triangles of " + surface.name();
+        PatchMeshes mesh = PatchMeshes.of(patches, d, ballRadius, PatchMeshes.PICTURE_RESOLUTION);
+        String note = mesh.note() != null ? mesh.note()
+            : mesh.mesh().triangleCount() + " mesh triangles of " + patches.get(0).surface().name();
         new SceneView(up).draw(g, 8, top + ROW1 + 4, wall ? 3 * W / 5 - 12 : W - 16, ROW2 - 8,
             "Path of the centre on the surface (3-D view)", mesh.mesh(), d, events, clip(note, 110));
         if (wall) {

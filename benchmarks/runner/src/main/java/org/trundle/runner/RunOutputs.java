@@ -143,9 +143,9 @@ final class RunOutputs {
         ScenarioFiles.JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         if (plot) {
             awaitQuietly(plotPreparation);
-            RunPlot.write(dir.resolve("run.png"), title, rec, sim.surface(), up, sim.ball().radius());
+            RunPlot.write(dir.resolve("run.png"), title, rec, sim.patches(), up, sim.ball().radius());
         }
-        HtmlReport.writeRun(dir.resolve("report.html"), title[0], title[1], rec, result, sim.surface(), up,
+        HtmlReport.writeRun(dir.resolve("report.html"), title[0], title[1], rec, result, sim.patches(), up,
             sim.ball().radius());
         return new Report(result, failure, rec, plot);
     }

@@ -222,6 +222,99 @@ class SeveralContactsTest {
     }
 
     /**
+     * A groove whose second wall ends before the first: the minus wall (the second contact) ends 0.10 m along the
+     * groove, the plus wall (the first) 0.20 m along. Rolling from rest on both at {@code a = g sinθ/2.6} (as
+     * above), the contact point on the minus wall ({@code c − r n}, {@code n} normal to the axis, so at the centre's
+     * axial coordinate) reaches its end at {@code t = √(2 · 0.10 / a)}: the minus contact exits there, with that
+     * wall's edge named, and the ball goes on touching the plus wall alone. Tolerance 1e-8 relative: the event
+     * search's time tolerance and the integration error over about 80 steps at tolerance 1e-11. (The second
+     * contact's edge used to go unwatched while the first touched: the ball rolled on past the minus wall's end.)
+     */
+    @Test
+    void aSecondWallThatEndsFirstIsLeftAtItsEnd() {
+        double theta = Math.toRadians(10);
+        VGroove v = groove60();
+        org.trundle.core.Surface plus = org.trundle.surfaces.Bounded.of(v.plusWall())
+            .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, -1, 0.20).build();
+        org.trundle.core.Surface minus = org.trundle.surfaces.Bounded.of(v.minusWall())
+            .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, -1, 0.10).build();
+        Simulation sim = scene(gravity(theta), new Coulomb(0.5, 0.5, 0.0), plus, minus);
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), 0.7, samples::add);
+        double a = G * Math.sin(theta) / 2.6;
+        double tEnd = Math.sqrt(2 * 0.10 / a);
+        assertTrue(!res.events().isEmpty(), res + " " + samples.get(0) + " " + samples.get(samples.size() - 1));
+        RunEvent exit = res.events().get(0);
+        assertEquals(EventKind.EXIT, exit.kind(), res.events().toString());
+        assertEquals("minus", exit.patch(), res.events().toString());
+        assertEquals("axial_to", exit.edge(), res.events().toString());
+        assertEquals(tEnd, exit.time(), 1e-8 * tEnd);
+        assertEquals(0.10, exit.before().centre().getX(), 1e-8);
+        Sample after = samples.stream().filter(s -> s.time() > tEnd + 0.01).findFirst().orElseThrow();
+        assertEquals(List.of("plus"), after.contacts(), after.toString());
+    }
+
+    /**
+     * The exact pivoting stick with two contacts: a ball rolls on a floor (no slip, Coulomb pivoting couple
+     * {@code δ_p F_n}) along a frictionless side wall it is pressed against (sliding there, a force through the
+     * centre, no moment about the floor's normal), spinning about the vertical at {@code ω₀}. The Coulomb couple
+     * brings the spin down linearly, {@code ω_z(t) = ω₀ + (δ_p N_f/(k m r²)) t} for {@code ω₀ < 0}
+     * ({@code N_f = m g_z}, the floor carrying the weight's normal part; Coulomb pivoting friction, from memory:
+     * e.g. Leine and Glocker, Eur. J. Mech. A 22 (2003), the spin about the normal of a disk or ball on a plane),
+     * to zero at {@code t* = k r² |ω₀|/(δ_p g_z)}, where the hold is taken ({@code pivot_stick} on the floor: no
+     * moment about the normal is needed, within the couple) and the spin stays zero (it used to creep towards zero
+     * in the regularised couple's band with several contacts). Along the wall the ball rolls at
+     * {@code a = g_x/(1 + k)}. Tolerances: 1e-9 relative on the linear decay and the acceleration (integration
+     * tolerance 1e-11); the stick fires at the edge of the smoothing band {@code |ω_z| = ω_b}, at
+     * {@code t* − ω_b k r²/(δ_p g_z)}, to 1e-8 (the event search's tolerance); after it the spin is zero to
+     * rounding (1e-12 rad/s).
+     */
+    @Test
+    void theExactPivotingStickHoldsWithASecondContact() {
+        double dp = 2e-4;
+        double w0 = -20;
+        Vector3D g = new Vector3D(1.2, 1.5, -9.6);
+        org.trundle.core.Surface floor = new org.trundle.surfaces.Plane(Vector3D.ZERO, Vector3D.PLUS_K);
+        org.trundle.core.Surface wall = new org.trundle.surfaces.Plane(new Vector3D(0, R, 0), Vector3D.MINUS_J);
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("floor", floor).withLaw(new org.trundle.contact.PureRolling()
+                .and(new org.trundle.contact.PivotingResistance(dp))))
+            .patch(Patch.of("wall", wall).withLaw(new Coulomb(0, 0, 0)))
+            .law(new Coulomb(0, 0, 0)).gravity(g)
+            .settings(SolverSettings.defaults().withTolerance(1e-11).withSampleInterval(0.01)).build();
+        List<Sample> samples = new ArrayList<>();
+        double v0 = 0.05;
+        // rolling on the floor with the spin w0 about its normal (a rolling start would roll on the wall as well)
+        BallState start = BallState.of(0, new Vector3D(0, 0, R), new Vector3D(v0, 0, 0),
+            org.hipparchus.geometry.euclidean.threed.Rotation.IDENTITY, new Vector3D(0, v0 / R, w0), Phase.ROLLING);
+        RunResult res = sim.run(start, 0.8, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        double rate = dp * -g.getZ() / (K * R * R);
+        double tStar = -w0 / rate;
+        RunEvent stick = res.events().stream().filter(e -> e.kind() == EventKind.PIVOT_STICK).findFirst()
+            .orElseThrow(() -> new AssertionError(res.events().toString()));
+        assertEquals("floor", stick.patch());
+        // the trigger: the edge of the smoothing band, ω_b = 1e-3 V / r with the speed scale
+        // V = max(|v₀|, r|ω₀|, √(|g| r)) (ContactThresholds' documented defaults)
+        double speedScale = Math.max(Math.max(v0, R * Math.hypot(v0 / R, w0)), Math.sqrt(g.getNorm() * R));
+        double band = 1e-3 * speedScale / R;
+        double tBand = tStar - band / rate;
+        assertEquals(tBand, stick.time(), 1e-8 * tStar, stick + " vs " + tStar);
+        double a = g.getX() / (1 + K);
+        for (Sample s : samples) {
+            double wz = s.state().spin().getZ();
+            if (s.time() < stick.time()) {
+                assertEquals(w0 + rate * s.time(), wz, 1e-9 * -w0, "t = " + s.time());
+            } else {
+                assertEquals(0.0, wz, 1e-12, "t = " + s.time());
+            }
+            assertEquals(v0 + a * s.time(), s.state().velocity().getX(), 1e-9 * (v0 + a * 0.8), "t = " + s.time());
+            assertEquals(List.of("floor", "wall"), s.contacts());
+        }
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
      * A groove wall that moves (design notes §9): the plus wall slides along the groove at {@code V} like a belt,
      * the minus wall stands still. Rolling without slip on both, the ball's centre moves at {@code V/2} plus the
      * still groove's motion (the contact points move at {@code V} and 0; the constraints differentiated are
@@ -284,6 +377,51 @@ class SeveralContactsTest {
         assertEquals(a * t, res.endState().velocity().getX(), 1e-9 * a * t);
         assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
         assertTrue(res.energy().driveWork() != 0);
+    }
+
+    /**
+     * Rest relative to moving walls: the groove on a carriage accelerating along the groove at
+     * {@code A = g sinθ} (the slope's pull exactly): in the carriage's frame the gravity along the groove is
+     * {@code g sinθ − A = 0} (d'Alembert, as above), so a ball placed at rest in the groove stays at rest relative
+     * to it; the run ends at rest at once, and the walls carry the ball as on a level groove,
+     * {@code N = m g cosθ/(2 sin 30°)} each (statics across the groove; common practice), to 1e-12. With
+     * {@code A = 0.999 g sinθ} the ball creeps down the groove and no rest is found in 0.3 s (it used to be that
+     * no rest was ever found with several moving walls).
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {1.0, 0.999})
+    void aBallRestsInAGrooveOnACarriageThatCancelsTheSlope(double factor) {
+        double theta = Math.toRadians(10);
+        double acc = factor * G * Math.sin(theta);
+        SurfaceMotion carriage = new SurfaceMotion() {
+            @Override
+            public void at(double time, org.trundle.core.MotionState out) {
+                out.setIdentity();
+                out.offset[0] = 0.5 * acc * time * time;
+                out.velocity[0] = acc * time;
+                out.acceleration[0] = acc;
+            }
+        };
+        VGroove v = groove60();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))
+            .patch(Patch.of("minus", v.minusWall()).withMotion(carriage))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11)).build();
+        List<Sample> samples = new ArrayList<>();
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), 0.3, samples::add);
+        if (factor == 1.0) {
+            assertEquals(EndReason.REST, res.endReason(), res.toString());
+            assertEquals(0.0, res.endState().time());
+            double n = M * G * Math.cos(theta) / (2 * Math.sin(Math.toRadians(30)));
+            Sample last = samples.get(samples.size() - 1);
+            assertEquals(2, last.touches().size(), last.toString());
+            for (SampleContact c : last.touches()) {
+                assertEquals(n, c.normalForce(), 1e-12 * n, c.toString());
+            }
+        } else {
+            assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        }
     }
 
     /**

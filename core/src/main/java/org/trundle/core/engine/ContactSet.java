@@ -123,8 +123,8 @@ final class ContactSet {
         }
         extra[extraCount++] = s;
         s.mode = mode;
-        // the exact pivoting stick is a single-contact sub-mode
-        active.pivotHeld = false;
+        // a pivoting hold is taken again for the new set of contacts (Transitions#pivotCheck)
+        dropPivotHolds();
         summary = summarise();
         generation++;
     }
@@ -161,9 +161,46 @@ final class ContactSet {
      * @param mode rolling or sliding
      */
     void setMode(ContactSlot s, Mode mode) {
+        if (s.mode != mode) {
+            // which contact may hold its spin about the normal depends on the modes (pivotSlot)
+            dropPivotHolds();
+        }
         s.mode = mode;
         summary = summarise();
         generation++;
+    }
+
+    /**
+     * The contact whose spin about its normal is free and may be held by the exact pivoting stick
+     * ({@link PivotRule}): with one contact, the active one while it rolls; with several, the only rolling
+     * one while every other slides (two rolling contacts on still patches fix the spin: it is along the chord,
+     * so {@code ω·n_i} is zero only at rest); in both cases only on a still patch whose law has the stick
+     * ({@link ContactSlot#pivotStick}).
+     *
+     * @return that slot, or null
+     */
+    ContactSlot pivotSlot() {
+        if (active.mode == Mode.APART || rest) {
+            return null;
+        }
+        ContactSlot rolling = null;
+        for (int k = 0; k <= extraCount; k++) {
+            ContactSlot s = at(k);
+            if (s.mode == Mode.ROLLING) {
+                if (rolling != null) {
+                    return null;
+                }
+                rolling = s;
+            }
+        }
+        return rolling != null && rolling.pivotStick ? rolling : null;
+    }
+
+    /** Ends every pivoting hold (the contacts or their modes changed). */
+    private void dropPivotHolds() {
+        for (ContactSlot s : slots) {
+            s.pivotHeld = false;
+        }
     }
 
     /** @return the number of slots */

@@ -212,6 +212,19 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     double pivotNeeded;
     /** The law's set-valued pivoting couple (N·m) of the last rolling evaluation; only with {@link #pivotStick}. */
     double pivotLimit;
+    /**
+     * Whether the last evaluation set {@link #normalSpin}, {@link #pivotNeeded} and {@link #pivotLimit} for the
+     * contact that may hold its spin about the normal ({@link ContactSet#pivotSlot}).
+     */
+    boolean pivotValid;
+    /** With several contacts: per position, the law's couple about that contact's normal (N·m). */
+    private final double[] contactCoupleN = new double[ContactForceSolver.MAX_CONTACTS];
+    /** The rest test on moving patches: the gravity in their common frame (m/s²). */
+    private final double[] restGravity = new double[3];
+    /** The rest test on moving patches: velocity field and frame acceleration of two patches at the centre. */
+    private final double[][] restFrame = new double[4][3];
+    /** With several contacts: the change of the angular acceleration (rad/s²) made by a pivoting hold. */
+    private final double[] pivotFix = new double[3];
     /** Receives the state and results of an integrator stage evaluated at the same time as the one before. */
     interface StageObserver {
         void stage(double t, double[] compact, double[] full, double[] fullDot);
@@ -514,6 +527,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         drivePower = 0;
         lossDamp = 0;
         pressing = false;
+        pivotValid = false;
         // one method per phase keeps each small enough for the JIT to inline its callees
         if (phase != Phase.FLIGHT && contacts != null && contacts.multi()) {
             multiForces(t, y, yDot);
@@ -730,6 +744,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             normalSpin = sn;
             pivotNeeded = needed;
             pivotLimit = law.pivotStickLimit(ctx);
+            pivotValid = true;
             if (slot.pivotHeld) {
                 // held: the law's couple about the normal (single-valued parts vanish at zero spin)
                 // is replaced by the needed one, and its power with it
@@ -1327,6 +1342,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         boolean anyCouples = false;
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
+            contactCoupleN[k] = 0;
             s.query(t, c);
             if (k == 0 && derive) {
                 ContactKinematics.noSlipVelocity(r, w[0], w[1], w[2], s.geo.normal, vel, 0);
@@ -1386,6 +1402,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
                 for (int i = 0; i < 3; i++) {
                     tau[i] += ct[i];
                 }
+                contactCoupleN[k] = dot(ct, s.geo.normal);
                 if (s.moving) {
                     // the couple's power on the patch's spin is drive work (design notes §9)
                     drivePower += dot(ct, s.pose.spin);
@@ -1429,6 +1446,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
                 contactGrip[k] = gl;
             }
         }
+        pivotHold(set, contactNormal);
         // position 0 in the single-contact fields (samples, the ledger, the rules of the active slot)
         normalForce = contactNormal[0];
         neededTangential = contactNeeded[0];
@@ -1453,7 +1471,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[V] = a[0];
         yDot[V + 1] = a[1];
         yDot[V + 2] = a[2];
-        rotationRates(y, w[0], w[1], w[2], al[0], al[1], al[2], yDot);
+        rotationRates(y, w[0], w[1], w[2], al[0] + pivotFix[0], al[1] + pivotFix[1], al[2] + pivotFix[2], yDot);
         yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide;
         yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
         yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
@@ -1462,6 +1480,49 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
         yDot[DAMPING] = 0;
         yDot[DRIVE] = drivePower;
+    }
+
+    /**
+     * With several contacts, the exact pivoting stick of the one rolling contact whose spin about its normal is
+     * free ({@link ContactSet#pivotSlot}: every other contact slides). Its couple about its normal {@code n}
+     * enters nothing else: not its own no-slip constraint ({@code α × n} has no part along {@code n}), not a
+     * sliding contact's normal constraint ({@code n_j·(α × n_j) = 0}) nor its friction ({@code μ N_j} against
+     * the slip). So, as for one contact, {@code d(ω·n)/dt = τ·n/I + ω·(H v)} and the couple that keeps
+     * {@code ω·n} constant is {@code M = −I ω·(H v) − (τ·n − M_law)}, with {@code τ·n = I α·n} the solve's total
+     * and {@code M_law} the law's couple about {@code n}. Sets {@link #normalSpin}, {@link #pivotNeeded},
+     * {@link #pivotLimit}; while held, the law's couple about {@code n} is replaced by {@code M} (the change of
+     * the angular acceleration in {@link #pivotFix}) and its power with it in the pivoting loss.
+     */
+    private void pivotHold(ContactSet set, double[] normals) {
+        pivotFix[0] = 0;
+        pivotFix[1] = 0;
+        pivotFix[2] = 0;
+        ContactSlot s = set.pivotSlot();
+        if (s == null) {
+            return;
+        }
+        int k = set.positionOf(s);
+        double[] n = s.geo.normal;
+        double[] h = s.geo.hessian;
+        double hvx = h[0] * vel[0] + h[1] * vel[1] + h[2] * vel[2];
+        double hvy = h[3] * vel[0] + h[4] * vel[1] + h[5] * vel[2];
+        double hvz = h[6] * vel[0] + h[7] * vel[1] + h[8] * vel[2];
+        double sn = dot(w, n);
+        double lawN = contactCoupleN[k];
+        double needed = -inertia * (w[0] * hvx + w[1] * hvy + w[2] * hvz) - (inertia * dot(solver.angularAcceleration(), n) - lawN);
+        double[] spin = contactSpin[k];
+        access.setRolling(s.ctx, normals[k], spin[0], spin[1], spin[2], false);
+        normalSpin = sn;
+        pivotNeeded = needed;
+        pivotLimit = s.law.pivotStickLimit(s.ctx);
+        pivotValid = true;
+        if (s.pivotHeld) {
+            double d = (needed - lawN) / inertia;
+            pivotFix[0] = d * n[0];
+            pivotFix[1] = d * n[1];
+            pivotFix[2] = d * n[2];
+            lossPivot += (lawN - needed) * sn;
+        }
     }
 
     /**
@@ -1578,12 +1639,25 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * solve must give no motion ({@code |a| + r|α|} within {@code slack} times {@code |g| + |F_app|/m}), every
      * normal force positive and every contact's friction within its grip (with the same slack). The holding
      * couples of the laws are not asked (at zero spin they are not needed).
+     *
+     * <p>On moving patches rest is relative to them, and it is defined only when every touched patch moves as
+     * one rigid body at this instant ({@link #commonFrame}): in that frame, at zero relative velocity, the
+     * Coriolis force and the curvature terms vanish and the frame acts as the body force
+     * {@code −m a_F(c)}, {@code a_F(c) = D̈ + Ω̇ × q + Ω × (Ω × q)}, {@code q = c − D}, and the couple
+     * {@code −I Ω̇} (the ball turning with the frame; d'Alembert, any rigid-body dynamics text), so the test is the
+     * still one under the gravity {@code g − a_F(c)} and the torque {@code τ_app − I Ω̇}. Patches that move
+     * apart (or a moving and a still one) have no common rest: no rest.
      */
     private boolean canRestOnSeveral(double t, double slack) {
+        double[] gUse = g;
+        System.arraycopy(tApp, 0, tau, 0, 3);
         for (int k = 0; k < contacts.count(); k++) {
             if (contacts.at(k).moving) {
-                // rest relative to several patches that move apart is not defined: no rest
-                return false;
+                if (!commonFrame(t, restGravity, tau)) {
+                    return false;
+                }
+                gUse = restGravity;
+                break;
             }
         }
         zero(vel);
@@ -1596,11 +1670,10 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             readyContext(s);
             solver.addRolling(s.geo.normal, s.geo.hessian);
         }
-        System.arraycopy(tApp, 0, tau, 0, 3);
-        if (!solver.solve(vel, w, g, fApp, tau)) {
+        if (!solver.solve(vel, w, gUse, fApp, tau)) {
             return false;
         }
-        double scaleA = slack * (norm(g) + norm(fApp) / m) + 1e-300;
+        double scaleA = slack * (norm(gUse) + norm(fApp) / m) + 1e-300;
         double moving = norm(solver.acceleration()) + r * norm(solver.angularAcceleration());
         if (!(moving <= scaleA)) {
             return false;
@@ -1621,6 +1694,61 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             }
         }
         return true;
+    }
+
+    /**
+     * Whether every touched patch moves as one rigid body at time {@code t} at the centre {@code c}: the same
+     * velocity field value {@code u(c)}, spin {@code Ω}, spin rate {@code Ω̇} and frame acceleration
+     * {@code a_F(c)} (to 1e-12 of their scales, so two patches given the same motion pass and patches that move
+     * apart do not). If so, writes the rest test's gravity {@code g − a_F(c)} into {@code gOut} and subtracts
+     * {@code I Ω̇} from {@code tauInOut}.
+     */
+    private boolean commonFrame(double t, double[] gOut, double[] tauInOut) {
+        int count = contacts.count();
+        double[] u0 = restFrame[0];
+        double[] a0 = restFrame[1];
+        double[] uk = restFrame[2];
+        double[] ak = restFrame[3];
+        MotionState p0 = contacts.at(0).poseAt(t);
+        frameFields(p0, u0, a0);
+        double uScale = norm(u0) + norm(p0.spin) * r + 1e-300;
+        double aScale = norm(a0) + norm(g) + norm(p0.spinRate) * r + 1e-300;
+        for (int k = 1; k < count; k++) {
+            MotionState pk = contacts.at(k).poseAt(t);
+            frameFields(pk, uk, ak);
+            if (distance(u0, uk) > 1e-12 * uScale || distance(p0.spin, pk.spin) * r > 1e-12 * uScale
+                || distance(a0, ak) > 1e-12 * aScale || distance(p0.spinRate, pk.spinRate) * r > 1e-12 * aScale) {
+                return false;
+            }
+        }
+        for (int i = 0; i < 3; i++) {
+            gOut[i] = g[i] - a0[i];
+            tauInOut[i] -= inertia * p0.spinRate[i];
+        }
+        return true;
+    }
+
+    /** The velocity field {@code u(c)} and the frame acceleration {@code a_F(c)} of a patch pose at the centre. */
+    private void frameFields(MotionState ps, double[] u, double[] a) {
+        ps.velocityAt(c, u);
+        double[] om = ps.spin;
+        double[] sr = ps.spinRate;
+        double qx = c[0] - ps.offset[0];
+        double qy = c[1] - ps.offset[1];
+        double qz = c[2] - ps.offset[2];
+        double ux = om[1] * qz - om[2] * qy;
+        double uy = om[2] * qx - om[0] * qz;
+        double uz = om[0] * qy - om[1] * qx;
+        a[0] = sr[1] * qz - sr[2] * qy + om[1] * uz - om[2] * uy + ps.acceleration[0];
+        a[1] = sr[2] * qx - sr[0] * qz + om[2] * ux - om[0] * uz + ps.acceleration[1];
+        a[2] = sr[0] * qy - sr[1] * qx + om[0] * uy - om[1] * ux + ps.acceleration[2];
+    }
+
+    private static double distance(double[] a, double[] b) {
+        double x = a[0] - b[0];
+        double y = a[1] - b[1];
+        double z = a[2] - b[2];
+        return Math.sqrt(x * x + y * y + z * z);
     }
 
     /** Thrown when the evaluation budget is used up. */

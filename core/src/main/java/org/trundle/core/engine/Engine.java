@@ -178,9 +178,11 @@ public final class Engine {
                     reason = EndReason.REST;
                     break;
                 }
+                ContactSlot pivotSlot = run.contacts.pivotSlot();
                 EventKind pivot = transitions.pivotCheck();
                 if (pivot != null) {
-                    run.log(pivot, run.toState(run.t, run.y, run.phase()), null, Vector3D.ZERO);
+                    run.logOn(pivotSlot.id, pivot, run.toState(run.t, run.y, run.phase()), null, Vector3D.ZERO, null,
+                        null);
                 }
                 run.flightClear = flightClear();
                 if (run.flightClear - run.t < shortestInterval(run.t, run.flightClear)) {

@@ -11,29 +11,40 @@ import org.trundle.core.Phase;
  * Patch exit: the patch margin of the contact point (m) falls to zero. When a neighbouring patch of
  * the scene continues the surface there ({@link Transitions#neighbour}) the contact is handed over
  * to it (event {@code handover}); otherwise the ball leaves every patch: the run ends there
- * ({@code stopAtExit}) or goes on in flight. Watched in contact on patches with edges. With several
- * contacts it watches the active one (the first touched): its exit ends that contact and the others go
- * on, and one that is already past its own edge (walls ending together) leaves at once as well; the edges of
- * the other touched patches are not watched while the first one touches (a limit of this version).
+ * ({@code stopAtExit}) or goes on in flight. Watched in contact on patches with edges. One rule per
+ * position of the contact set (0: the active slot), as for {@link LiftOffRule}: with several contacts the
+ * exit of any touched patch ends that contact and the others go on (no hand-over while several touch), and a
+ * contact that goes on already past its own edge (walls ending together, where both margins cross zero in the
+ * same step and the search locates one) leaves at once as well.
  */
 final class ExitRule extends SwitchRule {
-    ExitRule(Run run) {
+    /** Position in the contact set watched. */
+    private final int position;
+
+    ExitRule(Run run, int position) {
         super(run);
+        this.position = position;
     }
 
     @Override
     String label() {
-        return "exit";
+        return position == 0 ? "exit" : "exit of contact " + position;
     }
 
     @Override
     boolean watches(Phase phase) {
-        return phase.inContact() && run.surface.hasEdges();
+        if (!phase.inContact()) {
+            return false;
+        }
+        if (position == 0) {
+            return run.surface.hasEdges();
+        }
+        return position < run.contacts.count() && run.contacts.at(position).surface.hasEdges();
     }
 
     @Override
     double value(Snapshot s) {
-        return s.patchMargin;
+        return position == 0 ? s.patchMargin : s.contactMargin[position];
     }
 
     /**
@@ -46,7 +57,8 @@ final class ExitRule extends SwitchRule {
     double checkInterval(ODEStateAndDerivative s) {
         Snapshot sn = run.snapshots.at(s);
         double margin = value(sn);
-        if (!(margin > 0)) {
+        if (position > 0 || !(margin > 0)) {
+            // the other contacts' Hessians are not in the snapshot: the configured interval
             return run.set.maxCheckInterval();
         }
         // |v| + r|ω| bounds |v| from above (the velocity itself is not integrated while rolling)
@@ -56,21 +68,19 @@ final class ExitRule extends SwitchRule {
 
     @Override
     EndReason react(Transitions x, BallState before) {
+        if (run.contacts.multi()) {
+            releasePastEdges(x, run.contacts.at(position), before);
+            // the last one left may be past its edge as well: it exits by the single-contact rules below
+            if (!run.phase().inContact() || !run.surface.hasEdges()) {
+                return null;
+            }
+            run.slot.query(run.t, run.centreOf(run.y));
+            if (!(run.slot.geo.patchMargin < 0)) {
+                return null;
+            }
+        }
         run.slot.query(run.t, run.centreOf(run.y));
         String edge = run.surface.edgeName(run.dyn.geo.edge);
-        if (run.contacts.multi()) {
-            // one contact of several leaves its patch: the others go on (no hand-over while touching several)
-            x.release(run.slot, EventKind.EXIT, edge, before);
-            // walls that end together (a groove's or two rails' ends): the contact that goes on may be past its
-            // own edge already, and an event search never sees a value that starts negative, so it leaves now
-            if (run.phase().inContact() && run.surface.hasEdges()) {
-                run.slot.query(run.t, run.centreOf(run.y));
-                if (run.slot.geo.patchMargin < 0) {
-                    return react(x, before);
-                }
-            }
-            return null;
-        }
         if (run.phase() == Phase.ROLLING) {
             x.setDerivedVelocity();
         }
@@ -102,5 +112,31 @@ final class ExitRule extends SwitchRule {
         run.changePhase(Phase.FLIGHT);
         run.log(EventKind.EXIT, before, null, Vector3D.ZERO, edge);
         return null;
+    }
+
+    /**
+     * With several contacts: the contact {@code leaving} leaves its patch, then every other contact that is
+     * already past its own edge (walls that end together: an event search never sees a value that starts
+     * negative), while more than one contact remains.
+     */
+    private void releasePastEdges(Transitions x, ContactSlot leaving, BallState before) {
+        ContactSlot s = leaving;
+        while (s != null) {
+            s.query(run.t, run.centreOf(run.y));
+            x.release(s, EventKind.EXIT, s.surface.edgeName(s.geo.edge), before);
+            s = null;
+            if (run.contacts.multi()) {
+                for (int k = 0; k < run.contacts.count(); k++) {
+                    ContactSlot o = run.contacts.at(k);
+                    if (o.surface.hasEdges()) {
+                        o.query(run.t, run.centreOf(run.y));
+                        if (o.geo.patchMargin < 0) {
+                            s = o;
+                            break;
+                        }
+                    }
+                }
+            }
+        }
     }
 }

@@ -28,6 +28,14 @@ import org.trundle.core.Phase;
  * While held, {@link Dynamics} replaces the law's couple about the normal by {@code M_needed}; the
  * rest of the motion is unchanged (the couple about the normal does not enter the tangential force).
  *
+ * <p>With several contacts the rule watches the one rolling contact while every other slides
+ * ({@link ContactSet#pivotSlot}); {@code M_needed} then also balances the other contacts' moments about its
+ * normal ({@code Dynamics.pivotHold}). Two rolling contacts on still patches need no hold: their no-slip
+ * constraints {@code v + r n_i × ω = 0} give {@code ω × (n_1 − n_2) = 0}, so {@code ω} lies along the chord and
+ * {@code ω·n_i = |ω| (n_1 − n_2)·n_i/|n_1 − n_2|} with {@code (n_1 − n_2)·n_1 = 1 − n_1·n_2 > 0}: the spin
+ * about a normal is zero only when the ball is at rest (the rest rule's business), and away from zero the
+ * Coulomb couple is single-valued and exact.
+ *
  * <p>Limit: only on a patch that stands still. On a moving patch ({@link ContactSlot#pivotStick} is
  * false there) the hold is not taken; the law's regularised couple acts on the relative spin
  * {@code (ω − Ω)·n} as for any other law. A hold taken on one patch ends at a hand-over
@@ -50,17 +58,18 @@ final class PivotRule extends SwitchRule {
 
     @Override
     boolean watches(Phase phase) {
-        return phase == Phase.ROLLING && run.slot.pivotStick && !run.contacts.multi();
+        return phase.inContact() && run.contacts.pivotSlot() != null;
     }
 
     @Override
     void beginSegment() {
-        held = run.slot.pivotHeld;
-        if (held) {
+        ContactSlot slot = run.contacts.pivotSlot();
+        held = slot != null && slot.pivotHeld;
+        if (held || slot == null) {
             return;
         }
         Dynamics dyn = run.dyn;
-        dyn.phase = Phase.ROLLING;
+        dyn.phase = run.phase();
         dyn.evaluate(run.t, run.y);
         double s = dyn.normalSpin;
         if (Math.abs(s) > band(run)) {
@@ -89,14 +98,15 @@ final class PivotRule extends SwitchRule {
 
     @Override
     EndReason react(Transitions x, BallState before) {
+        ContactSlot slot = run.contacts.pivotSlot();
         if (held) {
-            run.slot.pivotHeld = false;
-            run.slot.pivotReleasedAt = run.t;
-            run.log(EventKind.PIVOT_RELEASE, before, null, Vector3D.ZERO);
+            slot.pivotHeld = false;
+            slot.pivotReleasedAt = run.t;
+            run.logOn(slot.id, EventKind.PIVOT_RELEASE, before, null, Vector3D.ZERO, null, null);
             return null;
         }
         if (x.pivotStick()) {
-            run.log(EventKind.PIVOT_STICK, before, null, Vector3D.ZERO);
+            run.logOn(slot.id, EventKind.PIVOT_STICK, before, null, Vector3D.ZERO, null, null);
         }
         return null;
     }

@@ -44,7 +44,7 @@ final class Segment {
         this.run = run;
         this.transitions = transitions;
         java.util.List<SwitchRule> list = new java.util.ArrayList<>(java.util.List.of(
-            new LiftOffRule(run, 0), new RestRule(run), new FitRule(run), new ExitRule(run),
+            new LiftOffRule(run, 0), new RestRule(run), new FitRule(run), new ExitRule(run, 0),
             new SlipRule(run, 0), new StickRule(run, 0)));
         for (ContactSlot s : run.slots) {
             list.add(new ImpactRule(run, s));
@@ -61,6 +61,7 @@ final class Segment {
                 list.add(new LiftOffRule(run, k));
                 list.add(new SlipRule(run, k));
                 list.add(new StickRule(run, k));
+                list.add(new ExitRule(run, k));
             }
         }
         this.rules = list.toArray(new SwitchRule[0]);

@@ -181,7 +181,7 @@ final class Snapshots {
                 v.acceleration = Math.sqrt(yd[V] * yd[V] + yd[V + 1] * yd[V + 1] + yd[V + 2] * yd[V + 2])
                     + r * Math.sqrt(yd[W] * yd[W] + yd[W + 1] * yd[W + 1] + yd[W + 2] * yd[W + 2]);
             }
-            if (dyn.pivotStick && phase == Phase.ROLLING) {
+            if (dyn.pivotValid) {
                 v.normalSpin = dyn.normalSpin;
                 v.pivotMargin = dyn.pivotLimit - Math.abs(dyn.pivotNeeded);
             }

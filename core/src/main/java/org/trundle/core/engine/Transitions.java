@@ -385,9 +385,13 @@ final class Transitions {
      */
     boolean pivotStick() {
         double[] y = run.y;
-        dyn.phase = Phase.ROLLING;
+        ContactSlot slot = run.contacts.pivotSlot();
+        if (slot == null) {
+            return false;
+        }
+        dyn.phase = run.phase();
         dyn.evaluate(run.t, y);
-        double[] n = dyn.geo.normal;
+        double[] n = slot.geo.normal;
         double sn = dyn.normalSpin;
         double before = run.kinetic(y);
         for (int i = 0; i < 3; i++) {
@@ -396,7 +400,7 @@ final class Transitions {
         y[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] += before - run.kinetic(y);
         // H n = 0, so the needed couple −I ω·(H v) is the same with the spin about n removed
         boolean hold = Math.abs(dyn.pivotNeeded) <= dyn.pivotLimit && dyn.pivotLimit > 0;
-        run.slot.pivotHeld = hold;
+        slot.pivotHeld = hold;
         return hold;
     }
 
@@ -408,11 +412,11 @@ final class Transitions {
      * @return the event to log, or null
      */
     EventKind pivotCheck() {
-        ContactSlot slot = run.slot;
-        if (!slot.pivotStick || run.phase() != Phase.ROLLING || run.contacts.multi()) {
+        ContactSlot slot = run.contacts.pivotSlot();
+        if (slot == null || !run.phase().inContact()) {
             return null;
         }
-        dyn.phase = Phase.ROLLING;
+        dyn.phase = run.phase();
         dyn.evaluate(run.t, run.y);
         double margin = dyn.pivotLimit - Math.abs(dyn.pivotNeeded);
         if (slot.pivotHeld) {
