@@ -14,6 +14,7 @@ import org.apache.hadoop.conf.Configuration;
 import org.apache.hadoop.fs.FileStatus;
 import org.apache.hadoop.fs.FileSystem;
 import org.apache.hadoop.fs.Path;
+import org.apache.spark.SparkContext;
 import org.apache.spark.TaskContext;
 import org.apache.spark.api.java.function.MapPartitionsFunction;
 import org.apache.spark.sql.Column;
@@ -27,6 +28,7 @@ import org.apache.spark.sql.types.DataType;
 import org.apache.spark.sql.types.DataTypes;
 import org.apache.spark.sql.types.StructField;
 import org.apache.spark.sql.types.StructType;
+import org.apache.spark.storage.StorageLevel;
 import org.trundle.core.sweep.ParameterSpace;
 import org.trundle.report.RegimeMap;
 import org.trundle.scenario.ScenarioException;
@@ -47,16 +49,25 @@ import org.trundle.scenario.SweepRow;
  * <p><b>Outputs</b>, under the output folder: {@code rows.parquet/} (the rows, one file per
  * partition), {@code sweep-csv/} (the same rows as {@link SweepRow#csv()} lines, part files in index
  * order, the header at the top of the first: concatenated, they are the local {@code sweep.csv} byte
- * for byte) and {@code regime-map.png} (for one or two parameters), computed from the Parquet
- * rows. The driver holds only aggregates: the outcome counts and, for the regime map, one
- * marker per run up to {@value #EXACT_MAP} runs, else one per outcome and cell of a
- * {@value #CELLS}×{@value #CELLS} lattice over the parameter ranges.
+ * for byte) and {@code regime-map.png} (for one or two parameters). The computed rows are kept on the
+ * executors' local disks ({@code persist(DISK_ONLY)}, dropped at the end) while the Parquet files and
+ * then the CSV are written from them, partition by partition: each partition is a contiguous index
+ * range in order, so the CSV needs no shuffle or sort, and each point runs once (a lost executor's
+ * partitions are recomputed, with the same rows). The outcome counts and the regime map are Spark
+ * aggregations over the Parquet rows. The driver holds only aggregates: the outcome counts and, for
+ * the regime map, one marker per run up to {@value #EXACT_MAP} runs, else one per outcome and cell of
+ * a {@value #CELLS}×{@value #CELLS} lattice over the parameter ranges (a {@code groupBy} on the
+ * cells), streamed to it a partition at a time.
  *
  * <p><b>Completeness.</b> Everything is written into a sibling folder
  * {@code <out>.partial-<id>} which is renamed to {@code <out>} in one step at the end (atomic on a
  * local file system and HDFS; not on object stores, where the rename is a copy). A failed or
  * cancelled job deletes the partial folder when it can; if the driver is killed it stays, named
  * {@code .partial-}; so a folder named {@code <out>} is always complete.
+ *
+ * <p><b>Stage names.</b> The jobs of each step carry a readable call site ({@link #STAGE_ROWS},
+ * {@link #STAGE_CSV}, {@link #STAGE_COUNTS}, {@link #STAGE_MAP}) as their name in Spark's status
+ * and user interface; the caller's call site is restored afterwards.
  */
 public final class SparkSweep {
     /** Largest sweep whose regime map gets one marker per run. */
@@ -64,17 +75,17 @@ public final class SparkSweep {
     /** Cells per axis of the regime-map lattice of larger sweeps. */
     public static final int CELLS = 250;
     /**
-     * Most points per partition when the partition count is not given: the sort that puts each
-     * partition's CSV lines in index order holds one partition's rows, so bounding the partition's
-     * size keeps a task's memory independent of the sweep's size.
+     * Most points per partition when the partition count is not given: a task's output files, its
+     * share of the rows kept on disk and the work redone when it is retried stay bounded however large
+     * the sweep (a task streams its rows and never holds its partition in memory).
      */
     public static final int POINTS_PER_PARTITION = 20_000;
 
     /**
      * The default partition count: {@code max(4 p, ⌈n / }{@value #POINTS_PER_PARTITION}{@code ⌉)} with
      * {@code p} Spark's default parallelism (the cluster's cores), at most one per point. Four per core
-     * keep cores busy at the end when some points are slow; the size bound keeps each task's memory flat
-     * however large the sweep.
+     * keep cores busy at the end when some points are slow; the size bound keeps each task's files and
+     * retries bounded however large the sweep.
      *
      * @param spark the session
      * @param n number of points
@@ -85,6 +96,18 @@ public final class SparkSweep {
         int bySize = (int) ((n + (long) POINTS_PER_PARTITION - 1) / POINTS_PER_PARTITION);
         return Math.max(1, Math.min(Math.max(byCores, bySize), Math.max(n, 1)));
     }
+
+    /** Name of the Spark jobs and stages that run the points and write the Parquet rows. */
+    public static final String STAGE_ROWS = "trundle sweep: runs to Parquet";
+    /** Name of the Spark jobs and stages that write the CSV in index order (range partitioning, sort). */
+    public static final String STAGE_CSV = "trundle sweep: CSV in index order";
+    /** Name of the Spark jobs and stages that count the outcomes. */
+    public static final String STAGE_COUNTS = "trundle sweep: outcome counts";
+    /** Name of the Spark jobs and stages that aggregate the regime map's markers. */
+    public static final String STAGE_MAP = "trundle sweep: regime map";
+
+    private static final String CALL_SITE_SHORT = "callSite.short";
+    private static final String CALL_SITE_LONG = "callSite.long";
 
     private SparkSweep() {
     }
@@ -215,10 +238,69 @@ public final class SparkSweep {
 
     private static Map<String, Long> write(SparkSession spark, SweepJob job, Path folder, int partitions,
         FileSystem fs) throws IOException {
+        SparkContext sc = spark.sparkContext();
+        String shortSite = sc.getLocalProperty(CALL_SITE_SHORT);
+        String longSite = sc.getLocalProperty(CALL_SITE_LONG);
+        try {
+            return stages(spark, job, folder, partitions, fs);
+        } finally {
+            sc.setLocalProperty(CALL_SITE_SHORT, shortSite);
+            sc.setLocalProperty(CALL_SITE_LONG, longSite);
+        }
+    }
+
+    private static Map<String, Long> stages(SparkSession spark, SweepJob job, Path folder, int partitions,
+        FileSystem fs) throws IOException {
+        SparkContext sc = spark.sparkContext();
+        sc.setCallSite(STAGE_ROWS);
         String parquet = new Path(folder, "rows.parquet").toString();
-        rows(spark, job, partitions).write().parquet(parquet);
+        Dataset<Row> computed = rows(spark, job, partitions).persist(StorageLevel.DISK_ONLY());
+        try {
+            computed.write().parquet(parquet);
+            sc.setCallSite(STAGE_CSV);
+            writeCsv(computed, job, new Path(folder, "sweep-csv"), fs);
+        } finally {
+            computed.unpersist(false);
+        }
         Dataset<Row> rows = spark.read().schema(schema(job.names())).parquet(parquet);
-        int parts = Math.min(partitions, Math.max(job.size(), 1));
+        sc.setCallSite(STAGE_COUNTS);
+        Map<String, Long> counts = new LinkedHashMap<>();
+        for (Row r : rows.groupBy("outcome").count().orderBy("outcome").collectAsList()) {
+            counts.put(r.getString(0), r.getLong(1));
+        }
+        List<String> names = job.names();
+        if (names.size() <= 2) {
+            sc.setCallSite(STAGE_MAP);
+            RegimeMap map = new RegimeMap(names, job.labels());
+            Column x = rows.col(quote(names.get(0)));
+            Column y = names.size() > 1 ? rows.col(quote(names.get(1))) : rows.col("end_time");
+            Dataset<Row> pts = rows.where(y.isNotNull()).select(rows.col("outcome"), x.as("x"), y.as("y"),
+                rows.col("index"));
+            if (job.size() > EXACT_MAP) {
+                pts = lattice(pts);
+            }
+            Iterator<Row> it = pts.orderBy("index").toLocalIterator();
+            while (it.hasNext()) {
+                Row r = it.next();
+                map.add(r.getString(0), r.getDouble(1), r.getDouble(2));
+            }
+            java.nio.file.Path png = Files.createTempFile("trundle-regime-map", ".png");
+            try {
+                map.write(png, "Regime map: " + String.join(" x ", names) + " (" + job.size() + " runs)",
+                    job.spec().random());
+                fs.copyFromLocalFile(true, true, new Path(png.toUri()), new Path(folder, "regime-map.png"));
+            } finally {
+                Files.deleteIfExists(png);
+            }
+        }
+        return counts;
+    }
+
+    /**
+     * Writes the rows as CSV lines, one part file per partition; the rows' partitions are contiguous index
+     * ranges in order, so the part files are in index order with no shuffle or sort.
+     */
+    private static void writeCsv(Dataset<Row> rows, SweepJob job, Path csv, FileSystem fs) throws IOException {
         int np = job.names().size();
         String header = SweepRow.header(job.names());
         MapPartitionsFunction<Row, String> toCsv = it -> {
@@ -246,44 +328,13 @@ public final class SparkSweep {
                 }
             };
         };
-        Path csv = new Path(folder, "sweep-csv");
-        rows.repartitionByRange(parts, rows.col("index")).sortWithinPartitions("index")
-            .mapPartitions(toCsv, Encoders.STRING()).write().text(csv.toString());
+        rows.mapPartitions(toCsv, Encoders.STRING()).write().text(csv.toString());
         for (FileStatus f : fs.listStatus(csv)) {
             String name = f.getPath().getName();
             if (name.startsWith("part-") && name.endsWith(".txt")) {
                 fs.rename(f.getPath(), new Path(csv, name.substring(0, name.length() - 4) + ".csv"));
             }
         }
-        Map<String, Long> counts = new LinkedHashMap<>();
-        for (Row r : rows.groupBy("outcome").count().orderBy("outcome").collectAsList()) {
-            counts.put(r.getString(0), r.getLong(1));
-        }
-        List<String> names = job.names();
-        if (names.size() <= 2) {
-            RegimeMap map = new RegimeMap(names, job.labels());
-            Column x = rows.col(quote(names.get(0)));
-            Column y = names.size() > 1 ? rows.col(quote(names.get(1))) : rows.col("end_time");
-            Dataset<Row> pts = rows.where(y.isNotNull()).select(rows.col("outcome"), x.as("x"), y.as("y"),
-                rows.col("index"));
-            if (job.size() > EXACT_MAP) {
-                pts = lattice(pts);
-            }
-            Iterator<Row> it = pts.orderBy("index").toLocalIterator();
-            while (it.hasNext()) {
-                Row r = it.next();
-                map.add(r.getString(0), r.getDouble(1), r.getDouble(2));
-            }
-            java.nio.file.Path png = Files.createTempFile("trundle-regime-map", ".png");
-            try {
-                map.write(png, "Regime map: " + String.join(" x ", names) + " (" + job.size() + " runs)",
-                    job.spec().random());
-                fs.copyFromLocalFile(true, true, new Path(png.toUri()), new Path(folder, "regime-map.png"));
-            } finally {
-                Files.deleteIfExists(png);
-            }
-        }
-        return counts;
     }
 
     /** One point per outcome and lattice cell (at the cell's centre), ordered by its first run. */

@@ -114,6 +114,7 @@ class SparkSweepTest {
         expect.add(SweepRow.header(tube.names()));
         local.forEach(r -> expect.add(r.csv()));
         assertEquals(expect, lines, "the CSV parts, concatenated in order, are the local sweep.csv");
+        assertTrue(spark.sparkContext().getPersistentRDDs().isEmpty(), "the rows kept on disk are dropped");
         try (Stream<Path> siblings = Files.list(dir)) {
             assertEquals(List.of(out), siblings.toList(), "no partial folder left beside the output");
         }
@@ -156,6 +157,7 @@ class SparkSweepTest {
         }
         assertTrue(cancelled.get());
         assertFalse(Files.exists(out), "a cancelled job leaves no output folder");
+        assertTrue(spark.sparkContext().getPersistentRDDs().isEmpty(), "nor rows kept on the executors' disks");
         try (Stream<Path> left = Files.list(dir)) {
             assertEquals(List.of(), left.toList(), "and no partial folder");
         }
