@@ -268,13 +268,34 @@ public final class Bounded implements Surface {
     }
 
     /**
-     * Slabs holding the patch: the bounded surface's slabs (the cuts only shrink the patch).
+     * Slabs holding the patch: the inner surface's slabs and this wrapper's own (every patch point
+     * has a non-negative margin for each bound): a plane bound through {@code q} with normal
+     * {@code m} gives the half-open slab {@code x·m ≥ q·m}; an axial range gives
+     * {@code x·a ≥ o·a + from} and {@code x·a ≤ o·a + to}. An angular range adds none (the cut
+     * wedge is not a slab; the inner surface's slabs still hold the patch). An inner surface with
+     * no slabs (an implicit surface) gets its extent from the bounds alone.
      *
      * @return the slabs (m)
      */
     @Override
     public List<Slab> extent() {
-        return inner.extent();
+        List<Slab> out = new ArrayList<>(inner.extent());
+        for (int i = 0; i < kind.length; i++) {
+            double[] d = data[i];
+            if (kind[i] > 2) {
+                continue;
+            }
+            Vector3D dir = new Vector3D(d[3], d[4], d[5]);
+            double at = d[0] * d[3] + d[1] * d[4] + d[2] * d[5];
+            if (kind[i] == 0) {
+                out.add(new Slab(dir, at, Double.POSITIVE_INFINITY));
+            } else if (kind[i] == 1) {
+                out.add(new Slab(dir, at + d[6], Double.POSITIVE_INFINITY));
+            } else {
+                out.add(new Slab(dir, Double.NEGATIVE_INFINITY, at + d[6]));
+            }
+        }
+        return List.copyOf(out);
     }
 
     @Override

@@ -110,6 +110,29 @@ public final class CubicSpline {
     }
 
     /**
+     * A rigorous enclosure of the spline's values on {@code [first(), last()]}: on each interval the
+     * cubic {@code y_i + y'_i x + M_i x²/2 + (M_{i+1} − M_i) x³/(6h)} ({@code x = u − u_i}) is bounded
+     * by its Bernstein control points ({@link BernsteinHull}; the spline may overshoot its knot
+     * values, this holds the overshoot).
+     *
+     * @return {@code {low, high}}, {@code low ≤ y(t) ≤ high} for every {@code t} between the end knots
+     */
+    public double[] bounds() {
+        double[] range = {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        double[] a = new double[4];
+        for (int i = 0; i < u.length - 1; i++) {
+            double h = u[i + 1] - u[i];
+            double slope = (y[i + 1] - y[i]) / h - h * (2 * m[i] + m[i + 1]) / 6;
+            a[0] = y[i];
+            a[1] = slope * h;
+            a[2] = 0.5 * m[i] * h * h;
+            a[3] = (m[i + 1] - m[i]) * h * h / 6;
+            BernsteinHull.widen(a, range);
+        }
+        return range;
+    }
+
+    /**
      * Evaluates the spline.
      *
      * @param t parameter

@@ -213,6 +213,28 @@ public final class QuinticSpline {
     }
 
     /**
+     * A rigorous enclosure of the spline's values on {@code [first(), last()]}: on each interval the
+     * quintic's Bernstein control points bound it ({@link BernsteinHull}; the spline may overshoot
+     * its knot values, this holds the overshoot).
+     *
+     * @return {@code {low, high}}, {@code low ≤ y(t) ≤ high} for every {@code t} between the end knots
+     */
+    public double[] bounds() {
+        double[] range = {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        double[] a = new double[6];
+        for (int i = 0; i < u.length - 1; i++) {
+            double h = u[i + 1] - u[i];
+            double hk = 1;
+            for (int k = 0; k < 6; k++) {
+                a[k] = c[6 * i + k] * hk;
+                hk *= h;
+            }
+            BernsteinHull.widen(a, range);
+        }
+        return range;
+    }
+
+    /**
      * Evaluates the spline.
      *
      * @param t parameter

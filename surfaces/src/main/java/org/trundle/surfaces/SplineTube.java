@@ -7,6 +7,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
@@ -704,6 +705,29 @@ public final class SplineTube implements Surface {
     @Override
     public double maxConcaveCurvature() {
         return maxConcave;
+    }
+
+    /**
+     * Slabs holding the patch: along each world axis, the range of that centreline coordinate grown
+     * by the largest radius. A patch point is {@code p = C(u) + R(u) e} with {@code |e| = 1} and
+     * {@code u} between the end points, so {@code |p_k − C_k(u)| ≤ max |R|}; each coordinate
+     * spline's range and the radius spline's are bounded rigorously from their Bernstein control
+     * points ({@link QuinticSpline#bounds()}, {@link CubicSpline#bounds()}; interpolating splines
+     * overshoot their knots, and these bounds hold the overshoot). An open tube keeps these slabs
+     * (its wall is part of the closed tube's).
+     *
+     * @return three slabs (m), along x, y and z
+     */
+    @Override
+    public List<Slab> extent() {
+        double[] r = radius.bounds();
+        double reach = Math.max(Math.abs(r[0]), Math.abs(r[1]));
+        double[] x = cx.bounds();
+        double[] y = cy.bounds();
+        double[] z = cz.bounds();
+        return List.of(new Slab(Vector3D.PLUS_I, x[0] - reach, x[1] + reach),
+            new Slab(Vector3D.PLUS_J, y[0] - reach, y[1] + reach),
+            new Slab(Vector3D.PLUS_K, z[0] - reach, z[1] + reach));
     }
 
     @Override

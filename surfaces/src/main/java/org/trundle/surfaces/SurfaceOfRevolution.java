@@ -7,6 +7,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.trundle.core.Box;
 import org.trundle.core.internal.Checks;
 import org.trundle.core.ContactGeometry;
+import org.trundle.core.Slab;
 import org.trundle.core.Surface;
 import org.trundle.core.SurfaceCoordinate;
 import org.trundle.core.SurfaceDomainException;
@@ -262,6 +263,21 @@ public final class SurfaceOfRevolution implements Surface {
     @Override
     public double maxConcaveCurvature() {
         return maxConcave;
+    }
+
+    /**
+     * Slabs holding the patch: the axial range {@code z_0 ≤ (x − o)·a ≤ z_{n−1}} and the radial reach
+     * {@code max |R(z)|} on that range about the axis ({@link Extents#aboutAxis}), the reach bounded
+     * rigorously from the profile's Bernstein control points ({@link QuinticSpline#bounds()}; the
+     * interpolating spline may bulge beyond its largest knot radius, this holds the bulge).
+     *
+     * @return the slabs (m)
+     */
+    @Override
+    public List<Slab> extent() {
+        double[] r = profile.bounds();
+        double reach = Math.max(Math.abs(r[0]), Math.abs(r[1]));
+        return Extents.aboutAxis(new Vector3D(ox, oy, oz), new Vector3D(ax, ay, az), profile.first(), profile.last(), reach);
     }
 
     @Override
