@@ -479,10 +479,11 @@ public final class Simulation {
          * report one contact per patch pressed. A moving compliant patch acts relative to its motion (approach,
          * slip and the law's spin relative to the patch) and the power it puts in is booked as drive work.
          *
-         * <p>A scene may mix compliant and rigid patches, but the ball may not touch both kinds at once: a run
-         * in which the ball reaches a rigid patch while it presses a compliant one (or the other way round)
-         * stops with a {@code SimulationException} naming both patches (a rigid contact phase has no room for
-         * a compliant force yet).
+         * <p>A scene may mix compliant and rigid patches, and the ball may touch both kinds at once: during a
+         * rigid contact phase (rolling or sliding on rigid patches) the wrench of the compliant patches it presses
+         * (force and couple about the centre) acts as an applied load in the rigid closed forms, its damping,
+         * friction and drive work booked as in flight; the rest test is not watched while a compliant contact is
+         * under way. A scene with a compliant patch integrates every state component in every phase.
          *
          * @param c the compliant contact, or null for the rigid contact (the default)
          * @return this builder

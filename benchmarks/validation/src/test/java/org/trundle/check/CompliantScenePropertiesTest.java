@@ -31,7 +31,9 @@ import org.trundle.surfaces.VGroove;
  * ball of 3–8 mm radius dropped 2–20 mm, with a sideways offset, a speed along the groove and a spin, into a V-groove
  * of 60°–140° whose two walls are compliant (steel on acrylic or on aluminium, restitution 0.3–0.95, Coulomb friction
  * 0–0.5), so that it rattles between the walls and often presses both at once; and the same ball dropped into the
- * corner of a compliant floor and a compliant side wall. The checks: the energy budget closes (elastic energy and
+ * corner of a compliant floor and a compliant side wall, and of a rigid floor (restitution and friction of the same
+ * draw) and a compliant side wall, where it bounces, slides and rolls on the floor while it presses the wall (the
+ * compliant wrench as a load of the rigid contact phases). The checks: the energy budget closes (elastic energy and
  * damping work counted) and every phase change has its cause, to 1e-7 of the energy scale (the one-wall compliant
  * runs close to about 1e-8 at the default tolerance 1e-10; the contacts' regularised friction makes the error larger
  * than the tolerance; runs at {@link #TOLERANCE}); frame invariance with both patches moved by the same rigid map (1e-6, as for the rigid
@@ -51,7 +53,7 @@ class CompliantScenePropertiesTest {
 
     static Stream<Arguments> cases() {
         List<Arguments> out = new ArrayList<>();
-        for (String family : List.of("compliant V-groove", "compliant corner")) {
+        for (String family : List.of("compliant V-groove", "compliant corner", "rigid floor, compliant wall")) {
             for (int i = 0; i < CASES; i++) {
                 PropertyCase c = make(family, SEED, i);
                 out.add(Arguments.of(Named.of(c.label() + " seed=" + Long.toHexString(SEED) + " #" + i, c)));
@@ -85,6 +87,13 @@ class CompliantScenePropertiesTest {
             b.patch(Patch.of("left", v.plusWall())).patch(Patch.of("right", v.minusWall()));
             centre = v.restingCentre(r, 0).add(new Vector3D(0, in(rnd, -0.3, 0.3) * r, drop));
             label = String.format(java.util.Locale.ROOT, "%s %.0f deg", family, Math.toDegrees(angle));
+        } else if (family.equals("rigid floor, compliant wall")) {
+            // the floor rigid (its own law, no compliance of its own: the run's compliance is withheld below)
+            b.compliance(null).patch(Patch.of("floor", new Plane(Vector3D.ZERO, Vector3D.PLUS_K)))
+                .patch(Patch.of("side", new Plane(Vector3D.ZERO, Vector3D.PLUS_J)).withCompliance(c));
+            centre = new Vector3D(0, r + in(rnd, 0, 0.3) * r, r + drop);
+            velocity = velocity.add(new Vector3D(0, -0.1, 0));
+            label = family;
         } else {
             b.patch(Patch.of("floor", new Plane(Vector3D.ZERO, Vector3D.PLUS_K)))
                 .patch(Patch.of("side", new Plane(Vector3D.ZERO, Vector3D.PLUS_J)));

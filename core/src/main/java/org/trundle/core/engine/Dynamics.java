@@ -104,9 +104,27 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private final double[][] compliantSlip;
     /** The compliant contact reported as the sample's first (the active slot if pressed, else the first pressed). */
     ContactSlot compliantPrimary;
+    /**
+     * Whether this evaluation is a rigid contact phase while compliant patches are pressed: their wrench then acts as
+     * an applied force and torque about the centre ({@link #fApp}, {@link #tApp}), added after the user's load.
+     */
+    private boolean compliantWrench;
+    /** Whether {@link #fApp}/{@link #tApp} may hold a compliant wrench of an earlier evaluation (then zeroed). */
+    private boolean appliedDirty;
+    /** Power (W) of the user's applied load alone, when a compliant wrench shares {@link #fApp}. */
+    private double userPower;
+    // losses and drive power (W) of the compliant contacts of the last evaluation
+    private double compSlide;
+    private double compRoll;
+    private double compPivot;
+    private double compOther;
+    private double compDamp;
+    private double compDrive;
     private final double[] patchVelocityAtPoint = new double[3];
+    /** A compliant contact's velocity and spin relative to its moving patch (apart from the rigid contact's). */
+    private final double[] compRelVel = new double[3];
+    private final double[] compRelSpin = new double[3];
     /** Damping power (W) of the last compliant evaluation. */
-    private double lossDamp;
 
     ContactGeometry geo;
     ContactContext ctx;
@@ -525,8 +543,23 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         lossSlide = 0;
         lossOther = 0;
         drivePower = 0;
-        lossDamp = 0;
         pressing = false;
+        compSlide = 0;
+        compRoll = 0;
+        compPivot = 0;
+        compOther = 0;
+        compDamp = 0;
+        compDrive = 0;
+        compliantWrench = phase != Phase.FLIGHT && anyPressed();
+        if (!loaded && (appliedDirty || compliantWrench)) {
+            fApp[0] = 0;
+            fApp[1] = 0;
+            fApp[2] = 0;
+            tApp[0] = 0;
+            tApp[1] = 0;
+            tApp[2] = 0;
+        }
+        appliedDirty = compliantWrench;
         pivotValid = false;
         // one method per phase keeps each small enough for the JIT to inline its callees
         if (phase != Phase.FLIGHT && contacts != null && contacts.multi()) {
@@ -584,7 +617,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             iy -= r * (nz * fx - nx * fz);
             iz -= r * (nx * fy - ny * fx);
         }
-        double applied = fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz;
+        double applied = compliantWrench ? userPower
+            : fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz;
         yDot[C] = vx;
         yDot[C + 1] = vy;
         yDot[C + 2] = vz;
@@ -592,14 +626,14 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[V + 1] = g[1] + (fy + fay) * invMass;
         yDot[V + 2] = g[2] + (fz + faz) * invMass;
         rotationRates(y, wx, wy, wz, ix * invInertia, iy * invInertia, iz * invInertia, yDot);
-        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide;
-        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
-        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
-        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide + compSlide;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll + compRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot + compPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther + compOther;
         yDot[APPLIED] = applied;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
-        yDot[DAMPING] = lossDamp;
-        yDot[DRIVE] = drivePower;
+        yDot[DAMPING] = compDamp;
+        yDot[DRIVE] = drivePower + compDrive;
         checkFinite(t, yDot);
     }
 
@@ -708,9 +742,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double vx = vel[0];
         double vy = vel[1];
         double vz = vel[2];
-        if (loaded) {
-            applyLoad(t);
-        }
+        loadAndCompliant(t);
         double fax = fApp[0];
         double fay = fApp[1];
         double faz = fApp[2];
@@ -739,7 +771,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             // d(ω·n)/dt = τ·n/I + ω·(H v) (the contact force has no moment about n): the couple
             // about the normal that keeps ω·n constant; it does not enter the tangential force
             double sn = wx * nx + wy * ny + wz * nz;
-            double tAppN = loaded ? tApp[0] * nx + tApp[1] * ny + tApp[2] * nz : 0.0;
+            double tAppN = loaded || compliantWrench ? tApp[0] * nx + tApp[1] * ny + tApp[2] * nz : 0.0;
             double needed = -inertia * (wx * hvx + wy * hvy + wz * hvz) - tAppN;
             normalSpin = sn;
             pivotNeeded = needed;
@@ -805,14 +837,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[V + 1] = gy + (fn * ny + fy + fay) * im;
         yDot[V + 2] = gz + (fn * nz + fz + faz) * im;
         rotationRates(y, wx, wy, wz, ix * invInertia, iy * invInertia, iz * invInertia, yDot);
-        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = 0;
-        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
-        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
-        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
-        yDot[APPLIED] = loaded ? fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz : 0;
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = compSlide;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll + compRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot + compPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther + compOther;
+        yDot[APPLIED] = compliantWrench ? userPower
+            : loaded ? fax * vx + fay * vy + faz * vz + tApp[0] * wx + tApp[1] * wy + tApp[2] * wz : 0;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
-        yDot[DAMPING] = 0;
-        yDot[DRIVE] = 0;
+        yDot[DAMPING] = compDamp;
+        yDot[DRIVE] = compDrive;
     }
 
     /**
@@ -858,9 +891,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         vel[1] = vy;
         vel[2] = vz;
         relativeSpeed = Math.sqrt(vrx * vrx + vry * vry + vrz * vrz) + r * Math.sqrt(rx * rx + ry * ry + rz * rz);
-        if (loaded) {
-            applyLoad(t);
-        }
+        loadAndCompliant(t);
         double fax = fApp[0];
         double fay = fApp[1];
         double faz = fApp[2];
@@ -950,14 +981,15 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[V + 1] = gy + (fcy + fay) * im;
         yDot[V + 2] = gz + (fcz + faz) * im;
         rotationRates(y, w[0], w[1], w[2], ix * invInertia, iy * invInertia, iz * invInertia, yDot);
-        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = 0;
-        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
-        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
-        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
-        yDot[APPLIED] = loaded ? fax * vx + fay * vy + faz * vz + tApp[0] * w[0] + tApp[1] * w[1] + tApp[2] * w[2] : 0;
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = compSlide;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll + compRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot + compPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther + compOther;
+        yDot[APPLIED] = compliantWrench ? userPower
+            : loaded ? fax * vx + fay * vy + faz * vz + tApp[0] * w[0] + tApp[1] * w[1] + tApp[2] * w[2] : 0;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
-        yDot[DAMPING] = 0;
-        yDot[DRIVE] = drivePower;
+        yDot[DAMPING] = compDamp;
+        yDot[DRIVE] = drivePower + compDrive;
         checkFinite(t, yDot);
     }
 
@@ -981,9 +1013,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         }
         ContactKinematics.slip(r, relVel, 0, relSpin, 0, n, slip);
         relativeSpeed = norm(relVel) + r * norm(relSpin);
-        if (loaded) {
-            applyLoad(t);
-        }
+        loadAndCompliant(t);
         // ndot = Omega x n + H v_rel
         mulSym(geo.hessian, relVel, hv);
         double ndx = om[1] * n[2] - om[2] * n[1] + hv[0];
@@ -1020,9 +1050,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         double[] n = geo.normal;
         System.arraycopy(y, V, vel, 0, 3);
         ContactKinematics.slip(r, vel, 0, w, 0, n, slip);
-        if (loaded) {
-            applyLoad(t);
-        }
+        loadAndCompliant(t);
         mulSym(geo.hessian, vel, hv);
         double vHv = dot(vel, hv);
         double fn = m * (-vHv - dot(n, g)) - dot(n, fApp);
@@ -1095,7 +1123,33 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         grip = Double.NaN;
         slipSpeed = 0;
         if (compliantSlots.length > 0) {
-            compliantForces(t);
+            compliantForces(t, force, tau, true);
+        }
+    }
+
+    /** Whether a compliant patch's contact is under way (its force then acts). */
+    private boolean anyPressed() {
+        for (ContactSlot s : compliantSlots) {
+            if (s.pressing) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * A rigid contact phase's applied load: the user's load, and while compliant patches are pressed their wrench
+     * about the centre (force and couple, {@link #compliantForces}), added to {@link #fApp} and {@link #tApp}; the
+     * user's load's own power is kept apart ({@link #userPower}: the compliant wrench's work is elastic energy,
+     * damping, friction and drive, booked by kind). Needs {@link #vel} and {@link #w} of this evaluation.
+     */
+    private void loadAndCompliant(double t) {
+        if (loaded) {
+            applyLoad(t);
+        }
+        if (compliantWrench) {
+            userPower = loaded ? dot(fApp, vel) + dot(tApp, w) : 0.0;
+            compliantForces(t, fApp, tApp, false);
         }
     }
 
@@ -1114,17 +1168,17 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
      * A moving patch ({@code u}, {@code Ω} its velocity field and spin) puts in the power
      * {@code F·u(p) + τ_c·Ω}, {@code u(p) = u(c) − r Ω × n}, booked as drive work, so that the budget closes.
      */
-    private void compliantForces(double t) {
+    private void compliantForces(double t, double[] forceOut, double[] torqueOut, boolean flight) {
         compliantPrimary = null;
         for (ContactSlot s : compliantSlots) {
             compliantOn[s.index] = false;
             compliantNormal[s.index] = 0;
             if (s.pressing) {
-                compliantContact(t, s);
+                compliantContact(t, s, forceOut, torqueOut);
             }
         }
         ContactSlot p = compliantPrimary;
-        if (p != null) {
+        if (flight && p != null) {
             int i = p.index;
             normalForce = compliantNormal[i];
             System.arraycopy(compliantFriction[i], 0, friction, 0, 3);
@@ -1134,8 +1188,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         }
     }
 
-    /** One compliant contact's force and couple, added to {@link #force} and {@link #tau}; see {@link #compliantForces}. */
-    private void compliantContact(double t, ContactSlot s) {
+    /** One compliant contact's force and couple about the centre, added to the two arrays; see {@link #compliantForces}. */
+    private void compliantContact(double t, ContactSlot s, double[] forceOut, double[] torqueOut) {
         s.query(t, c);
         ContactGeometry sg = s.geo;
         double delta = r - sg.distance;
@@ -1156,8 +1210,8 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             om = ps.spin;
             double[] up = patchVelocityAtPoint;
             ps.velocityAt(c, up);
-            rv = relVel;
-            rw = relSpin;
+            rv = compRelVel;
+            rw = compRelSpin;
             for (int i = 0; i < 3; i++) {
                 rv[i] = vel[i] - up[i];
                 rw[i] = w[i] - om[i];
@@ -1208,33 +1262,33 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         fx = fn * n[0] + fr[0];
         fy = fn * n[1] + fr[1];
         fz = fn * n[2] + fr[2];
-        force[0] += fx;
-        force[1] += fy;
-        force[2] += fz;
-        tau[0] -= r * (n[1] * fz - n[2] * fy);
-        tau[1] -= r * (n[2] * fx - n[0] * fz);
-        tau[2] -= r * (n[0] * fy - n[1] * fx);
+        forceOut[0] += fx;
+        forceOut[1] += fy;
+        forceOut[2] += fz;
+        torqueOut[0] -= r * (n[1] * fz - n[2] * fy);
+        torqueOut[1] -= r * (n[2] * fx - n[0] * fz);
+        torqueOut[2] -= r * (n[0] * fy - n[1] * fx);
         if (s.couples && fn > 0) {
             s.law.addCouples(s.ctx);
             double[] ct = access.torque(s.ctx);
             for (int i = 0; i < 3; i++) {
-                tau[i] += ct[i];
+                torqueOut[i] += ct[i];
             }
             double[] lr = access.lossRate(s.ctx);
-            lossRoll += lr[LossKind.ROLLING_RESISTANCE.ordinal()];
-            lossPivot += lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
-            lossOther += lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
+            compRoll += lr[LossKind.ROLLING_RESISTANCE.ordinal()];
+            compPivot += lr[LossKind.PIVOTING_RESISTANCE.ordinal()];
+            compOther += lr[LossKind.OTHER.ordinal()] + lr[LossKind.SLIDING_FRICTION.ordinal()];
             if (om != null) {
-                drivePower += ct[0] * om[0] + ct[1] * om[1] + ct[2] * om[2];
+                compDrive += ct[0] * om[0] + ct[1] * om[1] + ct[2] * om[2];
             }
         }
         if (om != null) {
             double[] up = patchVelocityAtPoint;
-            drivePower += fx * up[0] + fy * up[1] + fz * up[2];
+            compDrive += fx * up[0] + fy * up[1] + fz * up[2];
         }
         compliantNormal[s.index] = fn;
-        lossSlide += visc * sp * sp;
-        lossDamp += (fn - elastic) * trueRate;
+        compSlide += visc * sp * sp;
+        compDamp += (fn - elastic) * trueRate;
     }
 
     /**
@@ -1336,9 +1390,7 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         vel[0] = y[V];
         vel[1] = y[V + 1];
         vel[2] = y[V + 2];
-        if (loaded) {
-            applyLoad(t);
-        }
+        loadAndCompliant(t);
         boolean anyCouples = false;
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
@@ -1472,14 +1524,14 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
         yDot[V + 1] = a[1];
         yDot[V + 2] = a[2];
         rotationRates(y, w[0], w[1], w[2], al[0] + pivotFix[0], al[1] + pivotFix[1], al[2] + pivotFix[2], yDot);
-        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide;
-        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll;
-        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot;
-        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther;
-        yDot[APPLIED] = loaded ? dot(fApp, vel) + dot(tApp, w) : 0;
+        yDot[LOSS + LossKind.SLIDING_FRICTION.ordinal()] = lossSlide + compSlide;
+        yDot[LOSS + LossKind.ROLLING_RESISTANCE.ordinal()] = lossRoll + compRoll;
+        yDot[LOSS + LossKind.PIVOTING_RESISTANCE.ordinal()] = lossPivot + compPivot;
+        yDot[LOSS + LossKind.OTHER.ordinal()] = lossOther + compOther;
+        yDot[APPLIED] = compliantWrench ? userPower : loaded ? dot(fApp, vel) + dot(tApp, w) : 0;
         yDot[PATH] = Math.sqrt(vx * vx + vy * vy + vz * vz);
-        yDot[DAMPING] = 0;
-        yDot[DRIVE] = drivePower;
+        yDot[DAMPING] = compDamp;
+        yDot[DRIVE] = drivePower + compDrive;
     }
 
     /**

@@ -17,9 +17,10 @@ import org.trundle.core.SurfaceDomainException;
  * the impact impulses (design notes §6). On a compliant patch the event only marks the start of that
  * patch's contact (no rewind, no impulse): it records the normal speed relative to the patch that sets the
  * contact's damping, and the rule rests until the patch's {@link ReleaseRule} sees the ball leave; the other
- * patches' rules go on watching (a ball dropped into a compliant groove presses both walls). A ball may not
- * touch a rigid and a compliant patch at once: reaching one kind while in contact with the other stops the run
- * with a message naming both patches.
+ * patches' rules go on watching (a ball dropped into a compliant groove presses both walls). A compliant patch
+ * is also watched during a rigid contact phase: reached then, its contact begins and its wrench joins the phase's
+ * applied load ({@code Dynamics}); a rigid patch reached while compliant contacts are under way is an ordinary
+ * rigid impact.
  */
 final class ImpactRule extends SwitchRule {
     /** The patch this rule watches (one impact rule per patch of the scene). */
@@ -44,9 +45,12 @@ final class ImpactRule extends SwitchRule {
             inContact = false;
             return !slot.pressing;
         }
-        // in contact: a patch not touched yet may be reached (a second or third contact; a compliant one stops
-        // the run in react)
+        // in contact: a patch not touched yet may be reached (a second or third rigid contact, or a compliant
+        // patch whose contact is not under way)
         inContact = true;
+        if (slot.compliance != null) {
+            return phase.inContact() && !slot.pressing;
+        }
         return phase.inContact() && slot.mode == Mode.APART
             && run.contacts.count() < ContactForceSolver.MAX_CONTACTS;
     }
@@ -102,10 +106,6 @@ final class ImpactRule extends SwitchRule {
             // the ball keeps its contacts; the new one is added at the instant found (no rewind)
             return;
         }
-        if (slot.compliance == null && run.pressingAny()) {
-            // refused in react: keep the state as it is
-            return;
-        }
         run.activate(slot);
         if (slot.compliance == null) {
             x.rewindToContact();
@@ -116,14 +116,16 @@ final class ImpactRule extends SwitchRule {
     EndReason react(Transitions x, BallState before) {
         if (inContact) {
             if (slot.compliance != null) {
-                throw new RunFailure(mixMessage(run.t, run.slot.id, "touches rigid", slot.id, "reaches compliant"));
+                // a compliant patch reached during a rigid contact: its wrench joins the rigid phase's load
+                x.beginCompliant(slot, before);
+                return null;
             }
             x.reach(slot, before);
             return null;
         }
         if (slot.compliance != null) {
             // a compliant contact begins on this patch: its damping is set from the normal speed relative to it now
-            begin(slot, before);
+            x.beginCompliant(slot, before);
             // another compliant patch met at the same instant (a ball dropped down a groove's bisector meets both
             // walls at once): its impact function is not positive at the next segment's start, where no fall
             // through zero would be left to find, so its contact begins now too
@@ -137,15 +139,10 @@ final class ImpactRule extends SwitchRule {
                     continue;
                 }
                 if (other.geo.distance - run.r + run.impactSlack <= 0 && other.geo.patchMargin >= 0) {
-                    begin(other, before);
+                    x.beginCompliant(other, before);
                 }
             }
             return null;
-        }
-        for (ContactSlot other : run.slots) {
-            if (other.pressing) {
-                throw new RunFailure(mixMessage(run.t, other.id, "presses compliant", slot.id, "reaches rigid"));
-            }
         }
         Vector3D j = x.impact();
         run.log(EventKind.IMPACT, before, null, j);
@@ -154,28 +151,4 @@ final class ImpactRule extends SwitchRule {
         return null;
     }
 
-    /** Begins a compliant contact on a patch (queried at the run's state): damping from the relative normal speed. */
-    private void begin(ContactSlot s, BallState before) {
-        s.query(run.t, run.centreOf(run.y));
-        double vn = -ContactKinematics.relativeNormalSpeed(s, run.t, s.geo.normal, run.y);
-        s.touchSpeed = Math.max(vn, run.settleSpeed);
-        s.pressing = true;
-        run.logOn(s.id, EventKind.IMPACT, before, null, Vector3D.ZERO, null, null);
-    }
-
-    /**
-     * The message of a run stopped because the ball would touch a rigid and a compliant patch at once.
-     *
-     * @param t the time (s)
-     * @param first the patch in contact
-     * @param firstVerb how the ball touches it
-     * @param second the patch reached
-     * @param secondVerb how the ball reaches it
-     * @return the message
-     */
-    static String mixMessage(double t, String first, String firstVerb, String second, String secondVerb) {
-        return String.format(java.util.Locale.ROOT,
-            "at t = %s s the ball %s patch %s and %s patch %s: a rigid and a compliant contact at once are not"
-                + " supported (make both patches compliant, or both rigid)", t, firstVerb, first, secondVerb, second);
-    }
 }

@@ -10,7 +10,8 @@ import org.trundle.core.Phase;
  * The end of a compliant contact on one patch: the approach {@code r − d} (m) on that patch falls through zero
  * as the ball leaves the wall (the normal force has reached zero with it). One rule per compliant patch, watched
  * in flight while that patch's contact, begun with an impact event (or pressed at the start), lasts; the reaction
- * logs a {@code lift_off} event on the patch and lets its {@link ImpactRule} watch for the next contact.
+ * logs a {@code lift_off} event on the patch and lets its {@link ImpactRule} watch for the next contact. Watched in
+ * every phase: during a rigid contact phase the compliant wrench acts as an applied load.
  */
 final class ReleaseRule extends SwitchRule {
     /** The compliant patch this rule watches. */
@@ -28,7 +29,7 @@ final class ReleaseRule extends SwitchRule {
 
     @Override
     boolean watches(Phase phase) {
-        return phase == Phase.FLIGHT && slot.pressing;
+        return slot.pressing;
     }
 
     /** The patch's own distance in the snapshot (exact within two radii, so always while pressed). */

@@ -23,7 +23,8 @@ final class RestRule extends SwitchRule {
 
     @Override
     boolean watches(Phase phase) {
-        return phase.inContact();
+        // rest ignores a compliant wrench: not watched while a compliant contact is under way
+        return phase.inContact() && !run.pressingAny();
     }
 
     @Override

@@ -292,7 +292,7 @@ final class Run {
             dyn.evaluate(ts, ys);
             dyn.phase = keep;
             maxNormalForce = Math.max(maxNormalForce, dyn.normalForce);
-            if (p == Phase.FLIGHT) {
+            if (compliant) {
                 for (double f : dyn.compliantNormal) {
                     maxNormalForce = Math.max(maxNormalForce, f);
                 }
@@ -359,6 +359,19 @@ final class Run {
             touches = java.util.List.of(new SampleContact(slot.id, p, dyn.normalForce, fr, cp,
                 new Vector3D(n[0], n[1], n[2])));
         }
+        if (dyn.pressing) {
+            // compliant patches pressed during a rigid contact phase: one more contact each, after the rigid ones
+            List<SampleContact> all = new ArrayList<>(touches);
+            List<String> names = new ArrayList<>(ids);
+            for (ContactSlot sk : slots) {
+                if (dyn.compliantOn[sk.index]) {
+                    all.add(compliantContactOf(sk, ys));
+                    names.add(sk.id);
+                }
+            }
+            touches = List.copyOf(all);
+            ids = List.copyOf(names);
+        }
         observer.sample(new Sample(s, touching ? dyn.normalForce : 0.0, fr, cp, onBall, isEvent, ids, touches));
     }
 
@@ -375,11 +388,7 @@ final class Run {
             if (!dyn.compliantOn[sk.index]) {
                 continue;
             }
-            double[] n = sk.geo.normal;
-            double[] f = dyn.compliantFriction[sk.index];
-            SampleContact one = new SampleContact(sk.id, Phase.FLIGHT, dyn.compliantNormal[sk.index],
-                new Vector3D(f[0], f[1], f[2]), new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]),
-                new Vector3D(n[0], n[1], n[2]));
+            SampleContact one = compliantContactOf(sk, ys);
             if (sk == primary) {
                 first = one;
             } else {
@@ -393,6 +402,14 @@ final class Run {
         Vector3D onBall = s.orientation().applyInverseTo(new Vector3D(-r * n[0], -r * n[1], -r * n[2]));
         return new Sample(s, first.normalForce(), first.frictionForce(), first.contactPoint(), onBall, isEvent, List.copyOf(ids),
             List.copyOf(touches));
+    }
+
+    /** A compliant patch's contact in a sample (after the evaluation): its own force, friction, point and normal. */
+    private SampleContact compliantContactOf(ContactSlot sk, double[] ys) {
+        double[] n = sk.geo.normal;
+        double[] f = dyn.compliantFriction[sk.index];
+        return new SampleContact(sk.id, Phase.FLIGHT, dyn.compliantNormal[sk.index], new Vector3D(f[0], f[1], f[2]),
+            new Vector3D(ys[0] - r * n[0], ys[1] - r * n[1], ys[2] - r * n[2]), new Vector3D(n[0], n[1], n[2]));
     }
 
     /** @return whether a compliant contact is under way on any patch */

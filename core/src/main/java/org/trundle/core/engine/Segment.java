@@ -84,7 +84,9 @@ final class Segment {
         int[][] perPhase = layouts[run.slot.index];
         // several contacts integrate the full layout (the velocity is not derived from one normal), except
         // two rolling contacts on still patches: their velocity is derived from the spin, v = r ω × n₀
-        int[] layout = run.contacts.rollingPair() ? pairLayout()
+        // a scene with compliant patches integrates every component in every phase (a compliant contact's
+        // damping, friction and drive work may accrue during a rigid contact phase too)
+        int[] layout = run.compliant ? StateMapper.identity() : run.contacts.rollingPair() ? pairLayout()
             : run.contacts.multi() ? StateMapper.identity() : perPhase[phase.ordinal()];
         if (layout == null) {
             // a compliant contact integrates flight with every loss (its friction, couples and damping)

@@ -54,10 +54,10 @@ final class Transitions {
         double[] y = run.y;
         double tolLen = run.set.contactTolerance() * r;
         boolean rigidStart = requested != Phase.FLIGHT;
-        String pressed = null;
         if (run.compliant) {
-            // a compliant patch's contact is a force in flight: a start pressing one is a contact already under
-            // way (its damping set from the settle speed); a start touching no rigid patch integrates as flight
+            // a compliant patch's contact is a force: a start pressing one is a contact already under way (its
+            // damping set from the settle speed); a start touching no rigid patch integrates as flight, one
+            // touching a rigid patch starts that rigid contact with the compliant wrench as a load
             rigidStart = false;
             for (ContactSlot s : run.slots) {
                 if (s.compliance == null) {
@@ -84,13 +84,6 @@ final class Transitions {
                         s.surface.name(), d, r));
                 }
                 s.pressing = gap < 0 && s.geo.patchMargin >= 0;
-                if (s.pressing && pressed == null) {
-                    pressed = s.id;
-                }
-            }
-            if (rigidStart && pressed != null) {
-                throw run.reject(String.format(Locale.ROOT, "start touches a rigid patch and presses compliant patch %s:"
-                    + " a rigid and a compliant contact at once are not supported", pressed));
             }
         }
         if (!rigidStart && run.compliant) {
@@ -1023,6 +1016,31 @@ final class Transitions {
      * @param before the state before the impact (for the events)
      */
     void reachPressed(BallState before) {
+        reachPressedRigid(before);
+    }
+
+    /**
+     * Begins a compliant contact on a patch (queried at the run's state): its damping is set from the normal speed
+     * relative to the patch now (at least the settle speed), and an {@code impact} event on it is logged (no impulse).
+     *
+     * @param s a compliant slot whose contact is not under way
+     * @param before the state before (for the event)
+     */
+    void beginCompliant(ContactSlot s, BallState before) {
+        s.query(run.t, run.centreOf(run.y));
+        double[] full = run.phase().inContact() ? run.y.clone() : run.y;
+        if (run.phase() == Phase.ROLLING && !run.contacts.multi()) {
+            run.slot.query(run.t, run.centreOf(full));
+            ContactKinematics.rollingVelocity(run.slot, run.t, r, run.dyn.geo.normal, full);
+            s.query(run.t, run.centreOf(full));
+        }
+        double vn = -ContactKinematics.relativeNormalSpeed(s, run.t, s.geo.normal, full);
+        s.touchSpeed = Math.max(vn, run.settleSpeed);
+        s.pressing = true;
+        run.logOn(s.id, EventKind.IMPACT, before, null, Vector3D.ZERO, null, null);
+    }
+
+    private void reachPressedRigid(BallState before) {
         if (run.slots.length < 2 || !run.phase().inContact()) {
             return;
         }
@@ -1044,8 +1062,10 @@ final class Transitions {
             if (s.geo.distance - r <= tol && s.geo.patchMargin >= 0
                 && ContactKinematics.normalPart(full, V, s.geo.normal) <= 0) {
                 if (s.compliance != null) {
-                    throw new RunFailure(ImpactRule.mixMessage(run.t, run.slot.id, "touches rigid", s.id,
-                        "reaches compliant"));
+                    if (!s.pressing) {
+                        beginCompliant(s, before);
+                    }
+                    continue;
                 }
                 reach(s, before);
             }
