@@ -60,6 +60,19 @@ class SeveralContactsTest {
         return new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, Math.toRadians(60));
     }
 
+    /** A carriage translating along x from rest at the constant acceleration {@code acc} (m/s²). */
+    private static SurfaceMotion carriage(double acc) {
+        return new SurfaceMotion() {
+            @Override
+            public void at(double time, org.trundle.core.MotionState out) {
+                out.setIdentity();
+                out.offset[0] = 0.5 * acc * time * time;
+                out.velocity[0] = acc * time;
+                out.acceleration[0] = acc;
+            }
+        };
+    }
+
     /** Samples with two contacts, in time order. */
     private static List<Sample> twoContactSamples(List<Sample> all) {
         List<Sample> out = new ArrayList<>();
@@ -315,6 +328,48 @@ class SeveralContactsTest {
     }
 
     /**
+     * A groove made of two segments joined 0.10 m along it (each wall cut in two bounded patches, the second pair
+     * continuing the first): at the join both contacts are handed over to the next segment's walls
+     * ({@code handover} events, no impulse) and the ball rolls on with both contacts as if the groove were whole,
+     * {@code v = a t}, {@code x = a t²/2}, {@code a = g sinθ/2.6} (as above), to 1e-9, with the energy
+     * conserved to 1e-8. (Several contacts used to be released at a join and taken again by touches and stick
+     * impulses.)
+     */
+    @Test
+    void bothContactsAreHandedOverWhereAGrooveIsJoined() {
+        double theta = Math.toRadians(10);
+        VGroove v = groove60();
+        java.util.function.BiFunction<org.trundle.core.Surface, double[], org.trundle.core.Surface> cut = (w, r) ->
+            org.trundle.surfaces.Bounded.of(w).axialRange(Vector3D.ZERO, Vector3D.PLUS_I, r[0], r[1]).build();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus_a", cut.apply(v.plusWall(), new double[] {-1, 0.1})))
+            .patch(Patch.of("minus_a", cut.apply(v.minusWall(), new double[] {-1, 0.1})))
+            .patch(Patch.of("plus_b", cut.apply(v.plusWall(), new double[] {0.1, 1})))
+            .patch(Patch.of("minus_b", cut.apply(v.minusWall(), new double[] {0.1, 1})))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11).withSampleInterval(0.05)).build();
+        List<Sample> samples = new ArrayList<>();
+        double t = 0.9;
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), Vector3D.ZERO), t, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        double a = G * Math.sin(theta) / 2.6;
+        double tJoin = Math.sqrt(2 * 0.1 / a);
+        java.util.Set<String> entered = new java.util.TreeSet<>();
+        for (RunEvent e : res.events()) {
+            assertEquals(EventKind.HANDOVER, e.kind(), res.events().toString());
+            assertEquals(tJoin, e.time(), 1e-8 * tJoin);
+            assertEquals(Vector3D.ZERO, e.impulse());
+            entered.add(e.from() + ">" + e.to());
+        }
+        assertEquals(java.util.Set.of("minus_a>minus_b", "plus_a>plus_b"), entered);
+        assertEquals(a * t, res.endState().velocity().getX(), 1e-9 * a * t);
+        assertEquals(0.5 * a * t * t, res.endState().centre().getX(), 1e-9 * a * t * t);
+        Sample last = samples.get(samples.size() - 1);
+        assertEquals(java.util.Set.of("plus_b", "minus_b"), new java.util.HashSet<>(last.contacts()));
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
      * A groove wall that moves (design notes §9): the plus wall slides along the groove at {@code V} like a belt,
      * the minus wall stands still. Rolling without slip on both, the ball's centre moves at {@code V/2} plus the
      * still groove's motion (the contact points move at {@code V} and 0; the constraints differentiated are
@@ -354,15 +409,7 @@ class SeveralContactsTest {
     void aGrooveOnAnAcceleratingCarriage() {
         double theta = Math.toRadians(10);
         double acc = 0.8;
-        SurfaceMotion carriage = new SurfaceMotion() {
-            @Override
-            public void at(double time, org.trundle.core.MotionState out) {
-                out.setIdentity();
-                out.offset[0] = 0.5 * acc * time * time;
-                out.velocity[0] = acc * time;
-                out.acceleration[0] = acc;
-            }
-        };
+        SurfaceMotion carriage = carriage(acc);
         VGroove v = groove60();
         Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
             .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))
@@ -393,15 +440,7 @@ class SeveralContactsTest {
     void aBallRestsInAGrooveOnACarriageThatCancelsTheSlope(double factor) {
         double theta = Math.toRadians(10);
         double acc = factor * G * Math.sin(theta);
-        SurfaceMotion carriage = new SurfaceMotion() {
-            @Override
-            public void at(double time, org.trundle.core.MotionState out) {
-                out.setIdentity();
-                out.offset[0] = 0.5 * acc * time * time;
-                out.velocity[0] = acc * time;
-                out.acceleration[0] = acc;
-            }
-        };
+        SurfaceMotion carriage = carriage(acc);
         VGroove v = groove60();
         Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
             .patch(Patch.of("plus", v.plusWall()).withMotion(carriage))

@@ -155,6 +155,27 @@ final class ContactSet {
     }
 
     /**
+     * A hand-over of one contact of several: {@code in} takes the place (and mode) of the touching slot
+     * {@code out}, which no longer touches; when {@code out} was the active slot, {@code in} is.
+     *
+     * @param out a touching slot
+     * @param in a slot that does not touch
+     */
+    void replace(ContactSlot out, ContactSlot in) {
+        if (out == active) {
+            active = in;
+        } else {
+            extra[positionOf(out) - 1] = in;
+        }
+        in.mode = out.mode;
+        System.arraycopy(out.slideDir, 0, in.slideDir, 0, 3);
+        out.mode = Mode.APART;
+        dropPivotHolds();
+        summary = summarise();
+        generation++;
+    }
+
+    /**
      * Sets one touching slot's mode.
      *
      * @param s the slot

@@ -1313,18 +1313,12 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
             f[i] = -(m * g[i] + fApp[i]);
         }
         if (moving) {
-            MotionState ps = slot.poseAt(t);
-            double[] om = ps.spin;
-            double[] sr = ps.spinRate;
-            double qx = c[0] - ps.offset[0];
-            double qy = c[1] - ps.offset[1];
-            double qz = c[2] - ps.offset[2];
-            double ux = om[1] * qz - om[2] * qy;
-            double uy = om[2] * qx - om[0] * qz;
-            double uz = om[0] * qy - om[1] * qx;
-            f[0] += m * (sr[1] * qz - sr[2] * qy + om[1] * uz - om[2] * uy + ps.acceleration[0]);
-            f[1] += m * (sr[2] * qx - sr[0] * qz + om[2] * ux - om[0] * uz + ps.acceleration[1]);
-            f[2] += m * (sr[0] * qy - sr[1] * qx + om[0] * uy - om[1] * ux + ps.acceleration[2]);
+            // the frame's acceleration at the centre acts as the body force −m a_F(c) (see canRestOnSeveral)
+            double[] aF = restFrame[1];
+            frameFields(slot.poseAt(t), restFrame[0], aF);
+            f[0] += m * aF[0];
+            f[1] += m * aF[1];
+            f[2] += m * aF[2];
         }
         double fn = dot(f, n);
         if (!(fn > 0)) {

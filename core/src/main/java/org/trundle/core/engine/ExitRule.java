@@ -13,7 +13,9 @@ import org.trundle.core.Phase;
  * to it (event {@code handover}); otherwise the ball leaves every patch: the run ends there
  * ({@code stopAtExit}) or goes on in flight. Watched in contact on patches with edges. One rule per
  * position of the contact set (0: the active slot), as for {@link LiftOffRule}: with several contacts the
- * exit of any touched patch ends that contact and the others go on (no hand-over while several touch), and a
+ * exit of any touched patch is handed over to a neighbour that continues it ({@link Transitions#neighbourOf},
+ * {@link Transitions#handOverContact}: a groove or rails made of segments) or else ends that contact while the
+ * others go on, and a
  * contact that goes on already past its own edge (walls ending together, where both margins cross zero in the
  * same step and the search locates one) leaves at once as well.
  */
@@ -70,8 +72,8 @@ final class ExitRule extends SwitchRule {
     EndReason react(Transitions x, BallState before) {
         if (run.contacts.multi()) {
             releasePastEdges(x, run.contacts.at(position), before);
-            // the last one left may be past its edge as well: it exits by the single-contact rules below
-            if (!run.phase().inContact() || !run.surface.hasEdges()) {
+            // the last one left may be past its edge as well: it leaves by the single-contact rules below
+            if (run.contacts.multi() || !run.phase().inContact() || !run.surface.hasEdges()) {
                 return null;
             }
             run.slot.query(run.t, run.centreOf(run.y));
@@ -121,14 +123,23 @@ final class ExitRule extends SwitchRule {
      */
     private void releasePastEdges(Transitions x, ContactSlot leaving, BallState before) {
         ContactSlot s = leaving;
+        java.util.List<ContactSlot> entered = new java.util.ArrayList<>(2);
         while (s != null) {
             s.query(run.t, run.centreOf(run.y));
-            x.release(s, EventKind.EXIT, s.surface.edgeName(s.geo.edge), before);
+            String edge = s.surface.edgeName(s.geo.edge);
+            ContactSlot next = x.neighbourOf(s, true);
+            if (next != null) {
+                x.handOverContact(s, next, edge, before);
+                entered.add(next);
+            } else {
+                x.release(s, EventKind.EXIT, edge, before);
+            }
             s = null;
             if (run.contacts.multi()) {
                 for (int k = 0; k < run.contacts.count(); k++) {
                     ContactSlot o = run.contacts.at(k);
-                    if (o.surface.hasEdges()) {
+                    // a patch just entered may start a rounding short of its own edge: it is not leaving
+                    if (o.surface.hasEdges() && !entered.contains(o)) {
                         o.query(run.t, run.centreOf(run.y));
                         if (o.geo.patchMargin < 0) {
                             s = o;

@@ -440,7 +440,7 @@ final class Run {
                String from) {
         Phase phase = phase();
         BallState a = after != null ? after : toState(t, y, phase);
-        RunEvent e = new RunEvent(kind, before, a, edge, impulse, patch, from, from != null ? slot.id : null);
+        RunEvent e = new RunEvent(kind, before, a, edge, impulse, patch, from, from != null ? patch : null);
         events.add(e);
         trackForce(t, y, phase);
         emitSample(t, y, phase, true);

@@ -261,6 +261,21 @@ final class Transitions {
      * @return the neighbour, or null when the ball leaves every patch there
      */
     ContactSlot neighbour() {
+        return neighbourOf(run.slot, false);
+    }
+
+    /**
+     * The neighbour that continues the surface where the contact point leaves the patch of {@code from}: as
+     * {@link #neighbour()}, among the patches not touched now; with {@code sameNormal} (one contact of
+     * several) its normal must also be the leaving contact's (to 1e-6: a join with a tangent-continuous wall),
+     * so that the other touched walls' own continuations are not taken for it, and a crease is met by a touch
+     * or an impact instead.
+     *
+     * @param from the slot whose contact point leaves its patch
+     * @param sameNormal whether the neighbour's normal must be the leaving contact's
+     * @return the neighbour, or null when the contact ends there
+     */
+    ContactSlot neighbourOf(ContactSlot from, boolean sameNormal) {
         double t = run.t;
         double[] y = run.y;
         double tol = run.set.contactTolerance() * r;
@@ -271,14 +286,28 @@ final class Transitions {
         double sp = Math.sqrt(vx * vx + vy * vy + vz * vz);
         double step = sp > 0 ? 1e-6 * r / sp : 0.0;
         double[] ahead = {c[0] + vx * step, c[1] + vy * step, c[2] + vz * step};
+        double[] n0 = null;
+        if (sameNormal) {
+            from.query(t, c);
+            n0 = from.geo.normal.clone();
+        }
         for (ContactSlot s : run.slots) {
-            if (s == run.slot) {
+            if (s == from || s.mode != Mode.APART) {
                 continue;
             }
             try {
                 s.query(t, c);
                 if (!(Math.abs(s.geo.distance - r) <= tol)) {
                     continue;
+                }
+                if (n0 != null) {
+                    double[] n = s.geo.normal;
+                    double dx = n[0] - n0[0];
+                    double dy = n[1] - n0[1];
+                    double dz = n[2] - n0[2];
+                    if (!(dx * dx + dy * dy + dz * dz <= 1e-12)) {
+                        continue;
+                    }
                 }
                 s.query(t, ahead);
             } catch (org.trundle.core.SurfaceDomainException e) {
@@ -882,6 +911,20 @@ final class Transitions {
         run.syncActive();
         settleContacts();
         run.logOn(s.id, kind, before, null, Vector3D.ZERO, edge, null);
+    }
+
+    /**
+     * One contact of several leaves its patch where a neighbour continues the surface (a groove or rails made
+     * of segments): the neighbour takes its place and mode, no impulse, and the contacts settle
+     * ({@link #settleContacts}; a continuation with the same normal changes nothing). Event {@code handover}
+     * on the patch entered, from the patch left.
+     */
+    void handOverContact(ContactSlot out, ContactSlot in, String edge, BallState before) {
+        run.contacts.replace(out, in);
+        run.syncActive();
+        in.query(run.t, run.centreOf(run.y));
+        settleContacts();
+        run.logOn(in.id, EventKind.HANDOVER, before, null, Vector3D.ZERO, edge, out.id);
     }
 
     /** Slip onset at one contact of several: it slides against the friction rolling needed there. */
