@@ -1379,19 +1379,25 @@ public final class Dynamics implements OrdinaryDifferentialEquation {
     private void multiForces(double t, double[] y, double[] yDot) {
         ContactSet set = contacts;
         int count = set.count();
-        // two rolling contacts on still patches: the velocity is derived, v = r ω × n₀ (set below)
+        // two rolling contacts on still patches: the velocity is derived, v = r ω × n₀, before the applied load
+        // and the compliant patches see it (the velocity slot is not integrated then)
         boolean derive = set.rollingPair();
-        vel[0] = y[V];
-        vel[1] = y[V + 1];
-        vel[2] = y[V + 2];
+        if (derive) {
+            ContactSlot s0 = set.at(0);
+            s0.query(t, c);
+            ContactKinematics.noSlipVelocity(r, w[0], w[1], w[2], s0.geo.normal, vel, 0);
+        } else {
+            vel[0] = y[V];
+            vel[1] = y[V + 1];
+            vel[2] = y[V + 2];
+        }
         loadAndCompliant(t);
         boolean anyCouples = false;
         for (int k = 0; k < count; k++) {
             ContactSlot s = set.at(k);
             contactCoupleN[k] = 0;
-            s.query(t, c);
-            if (k == 0 && derive) {
-                ContactKinematics.noSlipVelocity(r, w[0], w[1], w[2], s.geo.normal, vel, 0);
+            if (k > 0 || !derive) {
+                s.query(t, c);
             }
             readyContext(s);
             contactDistance[k] = s.geo.distance;
