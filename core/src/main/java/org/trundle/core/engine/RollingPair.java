@@ -51,10 +51,14 @@ package org.trundle.core.engine;
  * (a ball pinched between facing walls: the tangential weight cannot see the squeeze, and {@code r_e → 0})
  * are refused ({@code solve} returns false) and left to the general solver.
  *
+ * <p>The code writes every {@code ê} as {@code e/|e|} ({@code σ = s/|e|}, {@code ρ' = ρ/|e|}), so that no square
+ * root is taken and the three reciprocals ({@code 1/|e|²}, {@code 1/|n̄|²}, {@code 1/(I + m r² |n̄|²)}) are
+ * independent of each other.
+ *
  * <p>Source: derived here from the constrained Newton–Euler equations above (the rolling radius about the
  * chord is the textbook one, e.g. J. L. Meriam and L. G. Kraige, Engineering Mechanics: Dynamics, plane
- * motion of rigid bodies; from memory). Not thread-safe only in the sense that its outputs are the caller's
- * arrays; it holds no state beyond the ball's constants.
+ * motion of rigid bodies; from memory). An instance holds only the ball's constants and writes only into the
+ * caller's arrays, so it may be shared; the static projections hold nothing.
  */
 final class RollingPair {
     /**
