@@ -68,6 +68,25 @@ class LeftForGoodTest {
         assertEquals(0.0, res.endState().time());
     }
 
+    /**
+     * The same scene turned by rotations (each component of the turned gravity and wall normal rounded): gravity
+     * is still perpendicular to the wall's normal up to rounding, so the ball has left for good at once in every
+     * frame, as in the first (the end reason does not depend on the frame a scene is described in).
+     */
+    @ParameterizedTest
+    @ValueSource(ints = {0, 1, 2, 3, 4, 5, 6, 7})
+    void awayFromAWallUnderGravityInAnyFrame(int seed) {
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(seed);
+        org.hipparchus.geometry.euclidean.threed.Rotation turn = new org.hipparchus.geometry.euclidean.threed.Rotation(
+            new Vector3D(rnd.nextDouble() - 0.5, rnd.nextDouble() - 0.5, rnd.nextDouble() - 0.5), 3 * rnd.nextDouble(),
+            org.hipparchus.geometry.euclidean.threed.RotationConvention.VECTOR_OPERATOR);
+        Simulation s = sim(new Plane(Vector3D.ZERO, turn.applyTo(Vector3D.PLUS_I)), turn.applyTo(new Vector3D(0, 0, -G)));
+        RunResult res = s.run(BallState.flying(turn.applyTo(new Vector3D(0.05, 0, 0)),
+            turn.applyTo(new Vector3D(0.1, 0, 1.0)), Vector3D.ZERO), 1e6);
+        assertEquals(EndReason.LEFT_FOR_GOOD, res.endReason(), res.message());
+        assertEquals(0.0, res.endState().time());
+    }
+
     /** An applied load could bring it back: the flight goes on to the duration. */
     @Test
     void aLoadKeepsItFlying() {

@@ -153,6 +153,7 @@ public final class Engine {
         try {
             while (reason == null) {
                 Interrupted.check();
+                run.syncSpan();
                 if (run.events.size() >= run.set.maxEvents()) {
                     reason = EndReason.BUDGET;
                     message = "event budget of " + run.set.maxEvents() + " events exhausted";

@@ -14,6 +14,13 @@ import org.trundle.core.Slab;
  * the quadratic is in range, from its roots); the intersection over the patch's slabs bounds when
  * the patch can be met, and after the latest such time over all patches the ball is clear for
  * good. A patch with no slabs can always be met (unknown extent): the flight goes on.
+ *
+ * <p>A gravity component along a slab's direction at the level of rounding ({@code |g·d| ≤ 16 ulp(|g|)},
+ * about 3.5e-15 |g|) is taken as zero: it is what a direction perpendicular to gravity becomes once the
+ * scene is turned by a rotation (the same scene in another frame), and would otherwise make the coordinate a
+ * parabola that returns after about {@code 2 |v·d| / |g·d|} (10¹² s and more at everyday speeds), so that the
+ * run's end would depend on the frame it is described in. A real tilt that small is below the resolution of
+ * the inputs.
  */
 final class LeaveCheck {
     private LeaveCheck() {
@@ -33,6 +40,7 @@ final class LeaveCheck {
      */
     static double clearFrom(double t, double[] c, double[] v, double[] g, List<List<Slab>> extents, double reach) {
         double latest = Double.NEGATIVE_INFINITY;
+        double level = 16 * Math.ulp(Math.sqrt(g[0] * g[0] + g[1] * g[1] + g[2] * g[2]));
         for (List<Slab> slabs : extents) {
             if (slabs.isEmpty()) {
                 return Double.POSITIVE_INFINITY;
@@ -46,6 +54,10 @@ final class LeaveCheck {
                 double q0 = c[0] * dx + c[1] * dy + c[2] * dz;
                 double w = v[0] * dx + v[1] * dy + v[2] * dz;
                 double a = g[0] * dx + g[1] * dy + g[2] * dz;
+                if (Math.abs(a) <= level) {
+                    // perpendicular to gravity up to rounding (see the class comment)
+                    a = 0;
+                }
                 // the rounding of q0 and of the bounds, on top of the reach (a few units in the last
                 // place: a pad proportional to the coordinates would make the end time depend on
                 // where the origin is)

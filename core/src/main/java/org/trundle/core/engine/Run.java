@@ -81,6 +81,8 @@ final class Run {
     final List<RunEvent> events = new ArrayList<>();
     final List<PhaseSpan> spans = new ArrayList<>();
     private double spanStart;
+    /** The phase the current span was opened in. */
+    private Phase spanPhase;
     private double spanPath;
 
     // ledger
@@ -454,19 +456,36 @@ final class Run {
             setPhase(next);
             spanStart = t;
             spanPath = y[PATH];
+            spanPhase = phase();
         }
     }
 
     void openSpan() {
         spanStart = t;
         spanPath = 0;
+        spanPhase = phase();
     }
 
+    /** Closes the current span, labelled with the phase it was opened in, and opens the next in the present phase. */
     void closeSpan() {
+        Phase p = spanPhase != null ? spanPhase : phase();
         if (t > spanStart || spans.isEmpty()) {
-            spans.add(new PhaseSpan(phase(), spanStart, t, y[PATH] - spanPath));
+            spans.add(new PhaseSpan(p, spanStart, t, y[PATH] - spanPath));
         }
         spanStart = t;
         spanPath = y[PATH];
+        spanPhase = phase();
+    }
+
+    /**
+     * Closes the current span when the global phase has changed without {@link #changePhase}: with several
+     * contacts each contact's mode is set on its own ({@link ContactSet#setMode}) and the global phase is their
+     * summary, so a contact that begins to slide while another rolls turns the phase to sliding at that switch.
+     * Called at every switch instant (before each segment and at the end).
+     */
+    void syncSpan() {
+        if (spanPhase != null && phase() != spanPhase) {
+            closeSpan();
+        }
     }
 }

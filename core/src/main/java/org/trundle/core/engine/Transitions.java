@@ -762,6 +762,10 @@ final class Transitions {
         double[] y = run.y;
         ContactSet set = run.contacts;
         java.util.List<String> released = new java.util.ArrayList<>();
+        // contacts set sliding against the friction they needed in this settle (their slip starts at zero), and
+        // sliding contacts stuck in it because their slip was within the band (logged as stick at the end)
+        java.util.List<ContactSlot> forced = new java.util.ArrayList<>(2);
+        java.util.List<ContactSlot> stuck = new java.util.ArrayList<>(2);
         if (!set.multi() && set.count() == 1 && set.active().mode == Mode.SLIDING) {
             // one sliding contact keeps its held direction in the right-hand side: the slot takes it over
             System.arraycopy(dyn.slideDir0, 0, set.active().slideDir, 0, 3);
@@ -795,6 +799,22 @@ final class Transitions {
             if (!set.multi()) {
                 break;
             }
+            // a sliding contact whose slip the projection has brought within the stick band sticks too: its own
+            // stick rule would start below its threshold and never see the slip fall through it, and Coulomb
+            // friction along a held direction inside the band chatters about the threshold (design notes §4)
+            ContactSlot joins = null;
+            for (int k = 0; k < set.count() && joins == null; k++) {
+                ContactSlot s = set.at(k);
+                if (s.mode == Mode.SLIDING && !forced.contains(s) && !stuck.contains(s)
+                    && Vec.norm(relativeSlip(s, y)) <= run.stickEps) {
+                    joins = s;
+                }
+            }
+            if (joins != null) {
+                stuck.add(joins);
+                set.setMode(joins, Mode.ROLLING);
+                continue;
+            }
             dyn.phase = run.phase();
             dyn.evaluate(run.t, y);
             int worst = -1;
@@ -825,12 +845,18 @@ final class Transitions {
                 }
             }
             if (slips >= 0) {
+                forced.add(set.at(slips));
                 slideAgainstNeeded(slips);
                 continue;
             }
             break;
         }
         finishSettle();
+        for (ContactSlot s : stuck) {
+            if (s.mode == Mode.ROLLING && set.positionOf(s) >= 0) {
+                run.logOn(s.id, EventKind.STICK, run.toState(run.t, y, run.phase()), null, Vector3D.ZERO, null, null);
+            }
+        }
         return released;
     }
 
