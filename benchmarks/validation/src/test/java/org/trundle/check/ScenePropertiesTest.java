@@ -60,13 +60,16 @@ class ScenePropertiesTest {
         return Patch.of("floor", new Plane(new Vector3D(0, 0, -low), Vector3D.PLUS_K));
     };
 
+    /** A still tube continuing the chute, same bore, 4–12 ball radii long. */
+    static final PatchSampler LOWER_TUBE = (rnd, b, s) -> {
+        Cylinder c = (Cylinder) s;
+        return Patch.of("lower", new Cylinder(Vector3D.ZERO, AXIS, c.radius(), Side.INSIDE, c.to(),
+            c.to() + b.radius() * Interval.of(4, 12).draw(rnd)));
+    };
+
     static final List<Family> FAMILIES = List.of(
         new Family("chute over floor", FLOOR),
-        new Family("two tubes end to end", (rnd, b, s) -> {
-            Cylinder c = (Cylinder) s;
-            return Patch.of("lower", new Cylinder(Vector3D.ZERO, AXIS, c.radius(), Side.INSIDE, c.to(),
-                c.to() + b.radius() * Interval.of(4, 12).draw(rnd)));
-        }));
+        new Family("two tubes end to end", LOWER_TUBE));
 
     static final List<Named<LawSampler>> LAWS = List.of(
         Named.of("pure rolling", (rnd, b) -> new PureRolling(rnd.nextDouble())),

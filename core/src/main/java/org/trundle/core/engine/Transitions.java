@@ -1179,6 +1179,42 @@ final class Transitions {
         return s;
     }
 
+    /**
+     * A rolling contact handed over to a neighbour (one contact; {@link #projectOntoSurface} done on the
+     * neighbour): velocity and spin are kept, so on a neighbour that moves otherwise than the patch left (a still
+     * tube into a spinning one, a floor onto a belt) the contact point slips by
+     * {@code s = P(v − u(p)) − r (ω − Ω) × n}; where both move alike {@code s} is rounding and the no-slip
+     * velocity is only re-derived. A tangent join gives no normal impulse, so a bounded grip cannot stop that slip
+     * at once: the ball slides on, against its slip, until friction stops it (a {@code stick} event); an unbounded
+     * grip (pure rolling) stops it by the impulse {@code J = −k m s/(1+k)} ({@link #stickImpulse}, its loss and
+     * drive work booked), as at an impact (design notes §6, §9). Imposing the neighbour's no-slip velocity instead
+     * would change the kinetic energy with nothing booked.
+     *
+     * @return the phase to go on in: rolling, or sliding with its direction set
+     */
+    Phase handOverRolling() {
+        double[] y = run.y;
+        run.slot.query(run.t, run.centreOf(y));
+        double[] s = slipOf(y);
+        double sp = Vec.norm(s);
+        if (!(sp > run.stickEps)) {
+            setDerivedVelocity();
+            return Phase.ROLLING;
+        }
+        dyn.phase = Phase.ROLLING;
+        dyn.evaluate(run.t, y);
+        if (dyn.grip == Double.POSITIVE_INFINITY) {
+            stickImpulse();
+            setDerivedVelocity();
+            return Phase.ROLLING;
+        }
+        for (int i = 0; i < 3; i++) {
+            dyn.slideDir0[i] = s[i] / sp;
+        }
+        dyn.phase = Phase.SLIDING;
+        return Phase.SLIDING;
+    }
+
     /** Sets the velocity slot of the run's state to the no-slip velocity r ω × n. */
     void setDerivedVelocity() {
         if (run.contacts.multi()) {
