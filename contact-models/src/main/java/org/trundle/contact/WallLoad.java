@@ -10,7 +10,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
  *
  * @param time time (s)
  * @param patch the patch's id
- * @param mode the contact's mode ("rolling", "sliding", …, the phase label)
+ * @param mode the contact's mode ("rolling", "sliding", "rest", or "compliant" for a compliant contact; {@code SampleContact.modeLabel()})
  * @param normalForce normal force F_n (N), positive pressing the wall
  * @param frictionForce magnitude of the tangential (friction) force (N)
  * @param hertz the Hertz patch under {@code normalForce}: semi-axes a ≥ b (m), their world directions (the

@@ -172,7 +172,7 @@ public final class WallLoads {
         for (SampleContact c : touches) {
             Wall w = onePatchRun && touches.size() == 1 ? walls.get(patch()) : walls.get(c.patch());
             if (w != null && c.normalForce() > 0) {
-                out.add(load(s, w, c.normalForce(), c.frictionForce(), c.mode().label()));
+                out.add(load(s, w, c.normalForce(), c.frictionForce(), c.modeLabel()));
             }
         }
         return out;

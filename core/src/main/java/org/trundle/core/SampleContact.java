@@ -12,7 +12,8 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
  * {@code F_t} (N, world frame, perpendicular to {@code n}). The contact point is {@code p = c − r n} (m).
  * The mode is {@link Phase#ROLLING} or {@link Phase#SLIDING} for a rigid contact ({@link Phase#REST} in the
  * closing sample of a ball at rest); a compliant contact pressing the wall while the ball is integrated as
- * in flight reports {@link Phase#FLIGHT}, the phase of its sample.
+ * in flight reports {@link Phase#FLIGHT}, the phase of its sample ({@link #compliant()} is then true and files
+ * name the mode {@code compliant}, {@link #modeLabel()}).
  *
  * @param patch id of the touched patch ({@link Patch#id()})
  * @param mode the contact's mode
@@ -29,5 +30,22 @@ public record SampleContact(String patch, Phase mode, double normalForce, Vector
             throw new IllegalArgumentException("a sample contact needs patch, mode, friction force, contact point and"
                 + " normal, got " + patch + ", " + mode + ", " + frictionForce + ", " + contactPoint + ", " + normal);
         }
+    }
+
+    /**
+     * @return whether this is a compliant contact: only a compliant patch pressed by the ball reports the mode
+     *     {@link Phase#FLIGHT} (its force comes from the approach, not from a constraint; the ball may at the same
+     *     time roll or slide on a rigid patch, whose contact reports that mode)
+     */
+    public boolean compliant() {
+        return mode == Phase.FLIGHT;
+    }
+
+    /**
+     * @return the contact's mode as written in files: {@code compliant} for a compliant contact, else the
+     *     mode's {@link Phase#label()} ({@code rolling}, {@code sliding}, {@code rest})
+     */
+    public String modeLabel() {
+        return compliant() ? "compliant" : mode.label();
     }
 }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 import org.trundle.core.EndReason;
+import org.trundle.core.Phase;
 import org.trundle.core.RunResult;
 
 /**
@@ -28,6 +29,36 @@ class SeveralContactsBenchmarkTest {
         double t = SeveralContactsBenchmark.DURATION;
         assertEquals(gs / 2.6 * t, groove.endState().velocity().getX(), 1e-8 * gs * t);
         assertEquals(gs * 5 / 7 * t, plane.endState().velocity().getX(), 1e-8 * gs * t);
+        assertTrue(groove.evaluations() <= 2 * plane.evaluations(),
+            "evaluations: groove " + groove.evaluations() + ", plane " + plane.evaluations());
+    }
+
+    /**
+     * The sliding pair: both slide from the start to the end, the groove at {@code g (sinθ − μ cosθ/sin γ)} with
+     * {@code γ = 30°} the half-angle (each wall's normal force {@code m g cosθ/(2 sin γ)}, Coulomb friction
+     * against the slip along the groove) and the plane at {@code g (sinθ − μ cosθ)} (Coulomb friction; common
+     * practice), to 1e-8 of the speed gained; the groove needs at most twice the plane's evaluations.
+     */
+    @Test
+    void bothSlidingRunsSlideToTheEndAtTheirAccelerations() {
+        double mu = SeveralContactsBenchmark.SLIDING_MU;
+        RunResult groove = SeveralContactsBenchmark.grooveRun(mu).run(
+            SeveralContactsBenchmark.grooveStart(SeveralContactsBenchmark.grooveRun(mu)), SeveralContactsBenchmark.DURATION);
+        RunResult plane = SeveralContactsBenchmark.planeRun(mu).run(
+            SeveralContactsBenchmark.planeStart(SeveralContactsBenchmark.planeRun(mu)), SeveralContactsBenchmark.DURATION);
+        assertEquals(EndReason.DURATION, groove.endReason());
+        assertEquals(EndReason.DURATION, plane.endReason());
+        assertEquals(1, groove.phases().size());
+        assertEquals(Phase.SLIDING, groove.phases().get(0).phase());
+        assertEquals(1, plane.phases().size());
+        assertEquals(Phase.SLIDING, plane.phases().get(0).phase());
+        double theta = Math.toRadians(10);
+        double t = SeveralContactsBenchmark.DURATION;
+        double gs = 9.81 * Math.sin(theta);
+        double grooveA = 9.81 * (Math.sin(theta) - mu * Math.cos(theta) / Math.sin(Math.toRadians(30)));
+        double planeA = 9.81 * (Math.sin(theta) - mu * Math.cos(theta));
+        assertEquals(grooveA * t, groove.endState().velocity().getX(), 1e-8 * gs * t);
+        assertEquals(planeA * t, plane.endState().velocity().getX(), 1e-8 * gs * t);
         assertTrue(groove.evaluations() <= 2 * plane.evaluations(),
             "evaluations: groove " + groove.evaluations() + ", plane " + plane.evaluations());
     }

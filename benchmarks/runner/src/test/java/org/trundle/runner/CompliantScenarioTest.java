@@ -6,7 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
@@ -107,6 +111,7 @@ class CompliantScenarioTest {
             String[] f = line.split(",");
             double[] pair = byTime.computeIfAbsent(f[0], k -> new double[] {Double.NaN, Double.NaN});
             pair[f[1].equals("liner.left") ? 0 : 1] = Double.parseDouble(f[3]);
+            assertEquals("compliant", f[2], line);
         }
         for (double[] pair : byTime.values()) {
             if (!Double.isNaN(pair[0]) && !Double.isNaN(pair[1])) {
@@ -157,5 +162,19 @@ class CompliantScenarioTest {
         assertTrue(s.get("end_state").get("velocity").get(0).asDouble() < 0, s.get("end_state").toString());
         assertTrue(s.get("energy").get("contact_damping_loss").asDouble() > 0);
         assertTrue(s.get("energy").get("relative_residual").asDouble() < 1e-6);
+        // contacts.csv names each contact's own mode: the rigid floor's rolling or sliding, the bumper's compliant,
+        // both in the rows of one sample while the ball presses the bumper and still touches the floor
+        Map<String, Set<String>> patchesAt = new HashMap<>();
+        List<String> rows = Files.readAllLines(out.resolve("contacts.csv"));
+        for (String line : rows.subList(1, rows.size())) {
+            String[] f = line.split(",");
+            if (f[1].equals("bumper")) {
+                assertEquals("compliant", f[2], line);
+            } else {
+                assertTrue(f[2].equals("rolling") || f[2].equals("sliding"), line);
+            }
+            patchesAt.computeIfAbsent(f[0], k -> new HashSet<>()).add(f[1]);
+        }
+        assertTrue(patchesAt.values().stream().anyMatch(p -> p.size() == 2), "no sample with both contacts");
     }
 }

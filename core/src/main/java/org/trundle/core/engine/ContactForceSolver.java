@@ -58,7 +58,10 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
  * form by {@link RollingPair} — the motion is a rotation about the chord through both contact points, so one
  * scalar equation and a few cross products give the same forces as the system below, squeeze rule included
  * (the unit tests compare the two on seeded random geometry) — unless their normals are nearly parallel or
- * antipodal. Every other case (a sliding contact, a moving patch, three contacts) takes the general system.
+ * antipodal. When every contact slides (still or moving patches, two or three contacts) only the normal forces
+ * are unknown and a 2×2 or 3×3 system solved by Cramer's rule gives them ({@code solveSliding}). Every other case
+ * (rolling and sliding contacts together, rolling on a moving patch, three rolling contacts) takes the general
+ * system.
  *
  * <p>A single contact does not come here: the engine keeps the closed form of §3 for it (the fast path);
  * the unit tests check that this solver agrees with that closed form.
@@ -108,6 +111,11 @@ final class ContactForceSolver {
     private LinearSolverDense<DMatrixRMaj> pinv;
     /** Relative LU quality below which the fallback solves. */
     private static final double SINGULAR = 1e-12;
+    /**
+     * Relative determinant (against the product of the rows' norms) below which the sliding closed form declines
+     * in favour of the general system.
+     */
+    private static final double SLIDING_SINGULAR = 1e-8;
     /** Rows of J (linear and angular parts) and columns of G, per unknown. */
     private final double[][] jLin = new double[3 * MAX_CONTACTS][3];
     private final double[][] jAng = new double[3 * MAX_CONTACTS][3];
@@ -119,6 +127,11 @@ final class ContactForceSolver {
     private final double[] weighted = new double[3 * MAX_CONTACTS];
     private final double[] hv = new double[3];
     private final double[] tmp = new double[3];
+    /** All-sliding closed form: the matrix n_i·u_j/m (row-major, up to 3×3), the u_j, the rhs and the N_i. */
+    private final double[] slideMatrix = new double[MAX_CONTACTS * MAX_CONTACTS];
+    private final double[] slideForceDir = new double[3 * MAX_CONTACTS];
+    private final double[] slideRhs = new double[MAX_CONTACTS];
+    private final double[] slideNormal = new double[MAX_CONTACTS];
     private final double[] unit = new double[3];
 
     /**
@@ -230,7 +243,108 @@ final class ContactForceSolver {
                 force[1])) {
             return summarise();
         }
+        if (allSliding() && solveSliding(v, g, fApp, tau)) {
+            return summarise();
+        }
         return solveGeneral(v, w, g, fApp, tau);
+    }
+
+    private boolean allSliding() {
+        for (int i = 0; i < count; i++) {
+            if (rolling[i]) {
+                return false;
+            }
+        }
+        return count > 0;
+    }
+
+    /**
+     * Every contact sliding (still or moving patches): the unknowns are the normal forces {@code N_i} alone, each
+     * contact's force is {@code N_i u_i} with {@code u_i = n_i − μ_i ŝ_i}, and the normal constraints involve the
+     * centre's acceleration only ({@code n_i·a = β_i}), so the system of the class comment shrinks to
+     * {@code Σ_j (n_i·u_j / m) N_j = β_i − n_i·(g + F_app/m)}, two or three equations solved by Cramer's rule;
+     * then {@code m a = m g + F_app + Σ N_j u_j}, {@code I α = τ − r Σ n_j × N_j u_j}. The same forces as the
+     * general system (which carries two identity rows per sliding contact), without the 6×6 or 9×9 LU; when the
+     * determinant is small against the product of the rows' norms (two contacts pressing along nearly one line)
+     * it declines and the general system with its minimum-norm fallback decides.
+     *
+     * @return false when it declines (nothing written)
+     */
+    private boolean solveSliding(double[] v, double[] g, double[] fApp, double[] tau) {
+        double invM = 1.0 / m;
+        double gx = g[0] + fApp[0] * invM;
+        double gy = g[1] + fApp[1] * invM;
+        double gz = g[2] + fApp[2] * invM;
+        double[] a = slideMatrix;
+        double[] u = slideForceDir;
+        for (int j = 0; j < count; j++) {
+            double[] nj = normal[j];
+            double mu = frictionRatio[j];
+            double[] sj = slideDir[j];
+            for (int k = 0; k < 3; k++) {
+                u[3 * j + k] = nj[k] - mu * sj[k];
+            }
+        }
+        double[] e = slideRhs;
+        for (int i = 0; i < count; i++) {
+            double[] ni = normal[i];
+            for (int j = 0; j < count; j++) {
+                a[3 * i + j] = (ni[0] * u[3 * j] + ni[1] * u[3 * j + 1] + ni[2] * u[3 * j + 2]) * invM;
+            }
+            double bi;
+            if (given[i]) {
+                bi = givenBeta[i][0];
+            } else {
+                Vec.mulSym(hessian[i], v, hv);
+                bi = -Vec.dot(v, hv);
+            }
+            e[i] = bi - (ni[0] * gx + ni[1] * gy + ni[2] * gz);
+        }
+        double[] nf = slideNormal;
+        if (count == 2) {
+            double det = a[0] * a[4] - a[1] * a[3];
+            double scale = Math.hypot(a[0], a[1]) * Math.hypot(a[3], a[4]);
+            if (!(Math.abs(det) > SLIDING_SINGULAR * scale)) {
+                return false;
+            }
+            nf[0] = (e[0] * a[4] - a[1] * e[1]) / det;
+            nf[1] = (a[0] * e[1] - e[0] * a[3]) / det;
+        } else {
+            double c0 = a[4] * a[8] - a[5] * a[7];
+            double c1 = a[5] * a[6] - a[3] * a[8];
+            double c2 = a[3] * a[7] - a[4] * a[6];
+            double det = a[0] * c0 + a[1] * c1 + a[2] * c2;
+            double scale = Math.sqrt((a[0] * a[0] + a[1] * a[1] + a[2] * a[2]) * (a[3] * a[3] + a[4] * a[4] + a[5] * a[5])
+                * (a[6] * a[6] + a[7] * a[7] + a[8] * a[8]));
+            if (!(Math.abs(det) > SLIDING_SINGULAR * scale)) {
+                return false;
+            }
+            nf[0] = (e[0] * c0 + a[1] * (a[5] * e[2] - e[1] * a[8]) + a[2] * (e[1] * a[7] - a[4] * e[2])) / det;
+            nf[1] = (a[0] * (e[1] * a[8] - a[5] * e[2]) + e[0] * c1 + a[2] * (a[3] * e[2] - e[1] * a[6])) / det;
+            nf[2] = (a[0] * (a[4] * e[2] - e[1] * a[7]) + a[1] * (e[1] * a[6] - a[3] * e[2]) + e[0] * c2) / det;
+        }
+        double invI = 1.0 / inertia;
+        acc[0] = gx;
+        acc[1] = gy;
+        acc[2] = gz;
+        for (int k = 0; k < 3; k++) {
+            angAcc[k] = tau[k] * invI;
+        }
+        for (int i = 0; i < count; i++) {
+            double[] f = force[i];
+            double[] ni = normal[i];
+            for (int k = 0; k < 3; k++) {
+                f[k] = nf[i] * u[3 * i + k];
+            }
+            acc[0] += f[0] * invM;
+            acc[1] += f[1] * invM;
+            acc[2] += f[2] * invM;
+            // α −= r n × F / I
+            angAcc[0] -= r * (ni[1] * f[2] - ni[2] * f[1]) * invI;
+            angAcc[1] -= r * (ni[2] * f[0] - ni[0] * f[2]) * invI;
+            angAcc[2] -= r * (ni[0] * f[1] - ni[1] * f[0]) * invI;
+        }
+        return true;
     }
 
     /**

@@ -27,6 +27,8 @@ final class StickRule extends SwitchRule {
     private final double[] full = new double[StateMapper.DIM];
     /** Position in the contact set watched (0: the active slot). */
     private final int position;
+    /** Local model of the slip speed while it is not falling (or on a moving patch). */
+    private final FlowSpacing spacing = new FlowSpacing();
 
     StickRule(Run run, int position) {
         super(run);
@@ -52,11 +54,22 @@ final class StickRule extends SwitchRule {
         return (position == 0 ? s.slipSpeed : s.contactSlipSpeed[position]) - run.stickEps;
     }
 
+    @Override
+    void beginSegment() {
+        spacing.reset();
+    }
+
     /**
      * The slip speed {@code |s|} falls to zero with a kink and bounces back, so a step may pass both
      * roots of {@code |s| − ε} between two checks; while {@code |s|} decreases, the next check is
      * set at half the time {@code (|s| − ε)/|d|s|/dt|} the slip needs to reach the band at its
-     * current rate, so checks close in geometrically on the root and never step over it.
+     * current rate (at most the configured interval), so checks close in geometrically on the root
+     * and never step over it. While {@code |s|} grows (or on a moving patch, where the rate below
+     * does not apply) the slip must first turn round before it can fall to the band: the spacing then
+     * comes from the local model of {@link FlowSpacing} through the last three checks (half the
+     * earliest time a pessimistic quadratic could reach the band, never less than the configured
+     * interval), as for lift-off and slip onset. A steady skid (slip growing under a small friction)
+     * is then no longer checked at every configured interval.
      */
     @Override
     double checkInterval(ODEStateAndDerivative s) {
@@ -69,13 +82,14 @@ final class StickRule extends SwitchRule {
         double sp = multi ? dyn.contactSlipSpeed[position] : dyn.slipSpeed;
         double gap = sp - run.stickEps;
         double max = run.set.maxCheckInterval();
+        double modelled = spacing.next(s.getTime(), gap, max);
         if (!(gap > 0)) {
             return max;
         }
         ContactSlot slot = multi ? run.contacts.at(position) : null;
         if (multi && slot.moving) {
             // the slip rate below is that of a still patch
-            return max;
+            return modelled;
         }
         double[] n = multi ? slot.geo.normal : dyn.geo.normal;
         double[] h = multi ? slot.geo.hessian : dyn.geo.hessian;
@@ -95,7 +109,7 @@ final class StickRule extends SwitchRule {
             rate += slip[i] * sdot / sp;
         }
         if (!(rate < 0)) {
-            return max;
+            return modelled;
         }
         return Math.min(max, Math.max(0.5 * gap / -rate, run.set.eventTimeTolerance()));
     }

@@ -290,6 +290,107 @@ class ContactForceSolverTest {
         }
     }
 
+    /**
+     * Every contact sliding: the closed form ({@code solveSliding}, Cramer's rule on the normal forces, what
+     * {@code solve} takes) against the general linear system ({@code solveGeneral}) on seeded random geometry: two
+     * contacts for odd seeds, three for even ones; random unit normals (kept at least 10° from parallel or
+     * antipodal to each other), tangential slip directions, friction ratios 0 to 1, random Hessians (|H| up to
+     * 100 1/m), state, gravity, applied force and couple; a third of the contacts on a "moving patch" with a given
+     * normal right-hand side. Both are exact up to rounding (the general system carries the same equations plus
+     * identity rows), so forces and accelerations agree to 1e-12 of their scale unless the system is
+     * ill-conditioned, which the closed form then leaves to the general system (same answer, checked bit for
+     * bit). A wrong sign or a dropped term shows at order one.
+     */
+    @ParameterizedTest(name = "seed {0}")
+    @MethodSource("seeds")
+    void slidingContactsClosedFormMatchesTheGeneralSolve(long seed) {
+        SplittableRandom rnd = new SplittableRandom(seed * 7919 + 3);
+        double k = 0.2 + 0.47 * rnd.nextDouble();
+        int count = seed % 2 == 0 ? 3 : 2;
+        double[][] n = new double[count][];
+        for (int i = 0; i < count; i++) {
+            double[] c;
+            boolean apart;
+            do {
+                c = unitVector(rnd);
+                apart = true;
+                for (int j = 0; j < i; j++) {
+                    apart &= Math.abs(Vec.dot(c, n[j])) < Math.cos(Math.toRadians(10));
+                }
+            } while (!apart);
+            n[i] = c;
+        }
+        double[] w = {rnd.nextDouble() * 40 - 20, rnd.nextDouble() * 40 - 20, rnd.nextDouble() * 40 - 20};
+        double[] v = {rnd.nextDouble() - 0.5, rnd.nextDouble() - 0.5, rnd.nextDouble() - 0.5};
+        double[] g = {rnd.nextDouble() * 4 - 2, rnd.nextDouble() * 4 - 2, -G};
+        double[] fApp = {0.2 * rnd.nextDouble() - 0.1, 0.2 * rnd.nextDouble() - 0.1, 0.2 * rnd.nextDouble() - 0.1};
+        double[] tau = {1e-3 * rnd.nextDouble(), -2e-3 * rnd.nextDouble(), 1e-3 * (rnd.nextDouble() - 0.5)};
+        ContactForceSolver closed = new ContactForceSolver(R, M, k);
+        ContactForceSolver general = new ContactForceSolver(R, M, k);
+        for (int i = 0; i < count; i++) {
+            double[] t = unitVector(rnd);
+            double along = Vec.dot(t, n[i]);
+            double[] slip = {t[0] - along * n[i][0], t[1] - along * n[i][1], t[2] - along * n[i][2]};
+            Vec.scale(slip, 1 / Vec.norm(slip));
+            double[] h = symmetric(rnd, 100);
+            double mu = rnd.nextDouble();
+            boolean moving = rnd.nextInt(3) == 0;
+            double betaN = 5 * (rnd.nextDouble() - 0.5);
+            for (ContactForceSolver s : new ContactForceSolver[] {closed, general}) {
+                if (moving) {
+                    s.addSliding(n[i], h, mu, slip, betaN);
+                } else {
+                    s.addSliding(n[i], h, mu, slip);
+                }
+            }
+        }
+        assertEquals(general.solveGeneral(v, w, g, fApp, tau), closed.solve(v, w, g, fApp, tau));
+        double fScale = M * G;
+        for (int i = 0; i < count; i++) {
+            fScale = Math.max(fScale, Vec.norm(general.force(i)));
+        }
+        for (int i = 0; i < count; i++) {
+            for (int c = 0; c < 3; c++) {
+                assertEquals(general.force(i)[c], closed.force(i)[c], 1e-12 * fScale, "force " + i + " component " + c);
+            }
+            assertEquals(general.normalForce(i), closed.normalForce(i), 1e-12 * fScale, "normal force " + i);
+            assertEquals(general.tangentialForce(i), closed.tangentialForce(i), 1e-12 * fScale, "tangential " + i);
+        }
+        double aScale = Vec.norm(general.acceleration()) + R * Vec.norm(general.angularAcceleration()) + G;
+        for (int c = 0; c < 3; c++) {
+            assertEquals(general.acceleration()[c], closed.acceleration()[c], 1e-12 * aScale, "a " + c);
+            assertEquals(general.angularAcceleration()[c], closed.angularAcceleration()[c], 1e-12 * aScale / R,
+                "alpha " + c);
+        }
+    }
+
+    /**
+     * Two sliding contacts pressing along one line (antipodal normals, a ball pinched between two parallel walls):
+     * the closed form's determinant vanishes, so it declines and the general system's minimum-norm forces decide,
+     * bit for bit the same as calling that system directly.
+     */
+    @Test
+    void antipodalSlidingContactsAreLeftToTheGeneralSolve() {
+        double[] n1 = {0, 0, 1};
+        double[] n2 = {0, 0, -1};
+        double[] slip = {1, 0, 0};
+        ContactForceSolver closed = new ContactForceSolver(R, M, 0.4);
+        ContactForceSolver general = new ContactForceSolver(R, M, 0.4);
+        for (ContactForceSolver s : new ContactForceSolver[] {closed, general}) {
+            s.addSliding(n1, new double[9], 0.3, slip);
+            s.addSliding(n2, new double[9], 0.3, slip);
+        }
+        double[] v = {0.2, 0, 0};
+        assertEquals(general.solveGeneral(v, new double[3], gravity(0.3), new double[3], new double[3]),
+            closed.solve(v, new double[3], gravity(0.3), new double[3], new double[3]));
+        for (int i = 0; i < 2; i++) {
+            assertEquals(general.normalForce(i), closed.normalForce(i), 0.0);
+            for (int c = 0; c < 3; c++) {
+                assertEquals(general.acceleration()[c], closed.acceleration()[c], 0.0);
+            }
+        }
+    }
+
     static java.util.stream.LongStream seeds() {
         return java.util.stream.LongStream.rangeClosed(1, 200);
     }
