@@ -748,8 +748,10 @@ final class Transitions {
     }
 
     /**
-     * Settles the modes of several contacts after a change (a contact reached, released, stuck, or a start):
-     * a rolling contact whose slip exceeds the stick threshold slides along its slip; the velocity is
+     * Settles the modes of several contacts after a change (a contact reached, released, stuck, handed over, or
+     * a start): a rolling contact whose slip exceeds the stick threshold slides along its slip, unless its law's
+     * grip is unbounded (pure rolling: the projection then stops the slip, as the impulse of an impact would;
+     * a hand-over onto walls that move otherwise, a conveyor groove, makes such slip); the velocity is
      * projected onto the constraints (the energy removed booked as sliding friction, as for the sticking
      * impulse of one contact); then, repeatedly, a contact whose normal force is not positive is released
      * (the most negative first) and a rolling contact that needs more friction than its grip slides against
@@ -766,12 +768,25 @@ final class Transitions {
             // one sliding contact keeps its held direction in the right-hand side: the slot takes it over
             System.arraycopy(dyn.slideDir0, 0, set.active().slideDir, 0, 3);
         }
+        boolean gripKnown = false;
         for (int k = 0; k < set.count(); k++) {
             ContactSlot s = set.at(k);
             s.query(run.t, run.centreOf(y));
             if (s.mode == Mode.ROLLING) {
                 double[] sl = relativeSlip(s, y);
                 double sp = Vec.norm(sl);
+                if (sp > run.stickEps && set.multi()) {
+                    if (!gripKnown) {
+                        dyn.phase = run.phase();
+                        dyn.evaluate(run.t, y);
+                        gripKnown = true;
+                    }
+                    if (dyn.contactGrip[k] == Double.POSITIVE_INFINITY) {
+                        // unbounded grip (pure rolling): the velocity projection below stops the slip by
+                        // impulses, booked, as at an impact; a bounded grip cannot without a normal impulse
+                        continue;
+                    }
+                }
                 if (sp > run.stickEps) {
                     for (int i = 0; i < 3; i++) {
                         s.slideDir[i] = sl[i] / sp;
