@@ -397,7 +397,7 @@ function sweepView(data, root) {
     });
     if (k === 0) c.id = 'first-point';
   });
-  if (data.left_out > 0) el('p', { class: 'note' }, right, `${data.left_out} more runs are in sweep.csv only`);
+  if (data.left_out > 0) el('p', { class: 'note' }, right, `${data.left_out} more runs are in the sweep table only`);
   document.body.dataset.ready = 'true';
 }
 

@@ -1,8 +1,10 @@
 package org.trundle.report;
 
+import java.io.FilterWriter;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -128,15 +130,72 @@ public final class HtmlReport {
      * @throws IOException when the file cannot be written
      */
     static void write(Path file, String title, ObjectNode data) throws IOException {
-        String page = resource("report-page.html");
-        String json = JSON.writeValueAsString(data).replace("<", "\\u003c");
+        String page = resource("report-page.html").replace("@@TITLE@@", escape(title));
         String script = resource("report-view.js").replace("</script", "<\\/script");
-        page = page.replace("@@TITLE@@", escape(title));
         int a = page.indexOf("@@DATA@@");
-        String withData = page.substring(0, a) + json + page.substring(a + "@@DATA@@".length());
-        int b = withData.lastIndexOf("@@SCRIPT@@");
-        String html = withData.substring(0, b) + script + withData.substring(b + "@@SCRIPT@@".length());
-        Files.writeString(file, html, StandardCharsets.UTF_8);
+        int b = page.lastIndexOf("@@SCRIPT@@");
+        if (a < 0 || b < a) {
+            throw new IllegalStateException("report-page.html must hold @@DATA@@ before @@SCRIPT@@");
+        }
+        // streamed into the file: the data (a sweep's thousands of rows) is never one string
+        try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+            w.write(page, 0, a);
+            JSON.writeValue(new ScriptSafeWriter(w), data);
+            w.write(page, a + "@@DATA@@".length(), b - a - "@@DATA@@".length());
+            w.write(script);
+            w.write(page, b + "@@SCRIPT@@".length(), page.length() - b - "@@SCRIPT@@".length());
+        }
+    }
+
+    /**
+     * Passes JSON text on with every {@code <} written as its six-character JSON escape (backslash, {@code u003c};
+     * JSON has {@code <} only inside strings, where the escape reads the same), so no {@code </script} can end
+     * the data's element; its {@code close} only flushes, leaving the file open for the rest of the page.
+     */
+    private static final class ScriptSafeWriter extends FilterWriter {
+        ScriptSafeWriter(Writer out) {
+            super(out);
+        }
+
+        @Override
+        public void write(int c) throws IOException {
+            if (c == '<') {
+                out.write("\\u003c");
+            } else {
+                out.write(c);
+            }
+        }
+
+        @Override
+        public void write(char[] buf, int off, int len) throws IOException {
+            int start = off;
+            for (int i = off; i < off + len; i++) {
+                if (buf[i] == '<') {
+                    out.write(buf, start, i - start);
+                    out.write("\\u003c");
+                    start = i + 1;
+                }
+            }
+            out.write(buf, start, off + len - start);
+        }
+
+        @Override
+        public void write(String str, int off, int len) throws IOException {
+            int start = off;
+            for (int i = off; i < off + len; i++) {
+                if (str.charAt(i) == '<') {
+                    out.write(str, start, i - start);
+                    out.write("\\u003c");
+                    start = i + 1;
+                }
+            }
+            out.write(str, start, off + len - start);
+        }
+
+        @Override
+        public void close() throws IOException {
+            out.flush();
+        }
     }
 
     /** @return a resource of this package as text */

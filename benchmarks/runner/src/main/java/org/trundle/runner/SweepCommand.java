@@ -139,14 +139,13 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
                 bar.close();
             }
         }
-        String title = "Regime map: " + String.join(" x ", space.names()) + " (" + space.size() + " runs)";
+        String title = SweepReport.title(space.names(), space.size());
         boolean drawn = !noPlot && space.names().size() <= 2;
         if (drawn) {
             map.write(out.resolve("regime-map.png"), title, job.spec().random());
         }
         Scenario base = Scenario.parse(doc);
-        html.write(out.resolve("sweep-report.html"), title, (base.description().isEmpty() ? "" : base.description() + " ")
-            + "Click a point to see its run's row of sweep.csv.");
+        html.write(out.resolve("sweep-report.html"), title, SweepReport.subtitle(base.description()));
         PrintWriter w = header(job);
         w.println("Sweep:    " + summary.delivered() + " runs over " + String.join(", ", space.names()) + " on " + n
             + " thread" + (n == 1 ? "" : "s") + (job.spec().random() ? " (random sample)" : " (grid)"));

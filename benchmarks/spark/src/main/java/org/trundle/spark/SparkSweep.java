@@ -16,6 +16,7 @@ import org.apache.hadoop.fs.FileSystem;
 import org.apache.hadoop.fs.Path;
 import org.apache.spark.SparkContext;
 import org.apache.spark.TaskContext;
+import org.apache.spark.api.java.function.FilterFunction;
 import org.apache.spark.api.java.function.MapPartitionsFunction;
 import org.apache.spark.sql.Column;
 import org.apache.spark.sql.Dataset;
@@ -31,6 +32,8 @@ import org.apache.spark.sql.types.StructType;
 import org.apache.spark.storage.StorageLevel;
 import org.trundle.core.sweep.ParameterSpace;
 import org.trundle.report.RegimeMap;
+import org.trundle.report.SweepReport;
+import org.trundle.scenario.Scenario;
 import org.trundle.scenario.ScenarioException;
 import org.trundle.scenario.SweepEngine;
 import org.trundle.scenario.SweepJob;
@@ -49,7 +52,8 @@ import org.trundle.scenario.SweepRow;
  * <p><b>Outputs</b>, under the output folder: {@code rows.parquet/} (the rows, one file per
  * partition), {@code sweep-csv/} (the same rows as {@link SweepRow#csv()} lines, part files in index
  * order, the header at the top of the first: concatenated, they are the local {@code sweep.csv} byte
- * for byte) and {@code regime-map.png} (for one or two parameters). The computed rows are kept on the
+ * for byte), {@code regime-map.png} (for one or two parameters) and {@code sweep-report.html} (the
+ * {@link SweepReport}: the same bytes as the local engine's for the same sweep). The computed rows are kept on the
  * executors' local disks ({@code persist(DISK_ONLY)}, dropped at the end) while the Parquet files and
  * then the CSV are written from them, partition by partition: each partition is a contiguous index
  * range in order, so the CSV needs no shuffle or sort, and each point runs once (a lost executor's
@@ -57,7 +61,11 @@ import org.trundle.scenario.SweepRow;
  * aggregations over the Parquet rows. The driver holds only aggregates: the outcome counts and, for
  * the regime map, one marker per run up to {@value #EXACT_MAP} runs, else one per outcome and cell of
  * a {@value #CELLS}×{@value #CELLS} lattice over the parameter ranges (a {@code groupBy} on the
- * cells), streamed to it a partition at a time.
+ * cells), streamed to it a partition at a time; and, for the report, the first
+ * {@value SweepReport#MAX_POINTS} plotted rows by index ({@link #reportRows}: taken from the kept
+ * rows a partition at a time in index order, each partition cut on its executor to its first
+ * {@value SweepReport#MAX_POINTS} plotted rows, so the driver holds at most that many rows of one
+ * partition at a time and no later partition is read once the report is full).
  *
  * <p><b>Completeness.</b> Everything is written into a sibling folder
  * {@code <out>.partial-<id>} which is renamed to {@code <out>} in one step at the end (atomic on a
@@ -66,7 +74,7 @@ import org.trundle.scenario.SweepRow;
  * {@code .partial-}; so a folder named {@code <out>} is always complete.
  *
  * <p><b>Stage names.</b> The jobs of each step carry a readable call site ({@link #STAGE_ROWS},
- * {@link #STAGE_CSV}, {@link #STAGE_COUNTS}, {@link #STAGE_MAP}) as their name in Spark's status
+ * {@link #STAGE_CSV}, {@link #STAGE_REPORT}, {@link #STAGE_COUNTS}, {@link #STAGE_MAP}) as their name in Spark's status
  * and user interface; the caller's call site is restored afterwards.
  */
 public final class SparkSweep {
@@ -101,6 +109,8 @@ public final class SparkSweep {
     public static final String STAGE_ROWS = "trundle sweep: runs to Parquet";
     /** Name of the Spark jobs and stages that write the CSV in index order (range partitioning, sort). */
     public static final String STAGE_CSV = "trundle sweep: CSV in index order";
+    /** Name of the Spark jobs and stages that take the report's first rows. */
+    public static final String STAGE_REPORT = "trundle sweep: report points";
     /** Name of the Spark jobs and stages that count the outcomes. */
     public static final String STAGE_COUNTS = "trundle sweep: outcome counts";
     /** Name of the Spark jobs and stages that aggregate the regime map's markers. */
@@ -186,12 +196,28 @@ public final class SparkSweep {
      */
     public static SweepEngine.Report run(SparkSession spark, SweepJob job, String out, int partitions)
         throws IOException {
+        return run(spark, job, out, partitions, SweepReport.MAX_POINTS);
+    }
+
+    /**
+     * {@link #run(SparkSession, SweepJob, String, int)} with the report's most points given (tests).
+     *
+     * @param spark the session
+     * @param job the sweep
+     * @param out output folder
+     * @param partitions number of partitions, at least 1
+     * @param reportPoints most runs shown as points in {@code sweep-report.html}
+     * @return what was written
+     * @throws IOException when the outputs cannot be written
+     */
+    static SweepEngine.Report run(SparkSession spark, SweepJob job, String out, int partitions, int reportPoints)
+        throws IOException {
         Path target = checkOutput(out, spark.sparkContext().hadoopConfiguration());
         FileSystem fs = target.getFileSystem(spark.sparkContext().hadoopConfiguration());
         Path partial = new Path(target.getParent(), target.getName() + ".partial-" + UUID.randomUUID());
         boolean done = false;
         try {
-            Map<String, Long> counts = write(spark, job, partial, partitions, fs);
+            Map<String, Long> counts = write(spark, job, partial, partitions, reportPoints, fs);
             if (fs.exists(target)) {
                 fs.delete(target, false); // the empty folder
             }
@@ -237,12 +263,12 @@ public final class SparkSweep {
     }
 
     private static Map<String, Long> write(SparkSession spark, SweepJob job, Path folder, int partitions,
-        FileSystem fs) throws IOException {
+        int reportPoints, FileSystem fs) throws IOException {
         SparkContext sc = spark.sparkContext();
         String shortSite = sc.getLocalProperty(CALL_SITE_SHORT);
         String longSite = sc.getLocalProperty(CALL_SITE_LONG);
         try {
-            return stages(spark, job, folder, partitions, fs);
+            return stages(spark, job, folder, partitions, reportPoints, fs);
         } finally {
             sc.setLocalProperty(CALL_SITE_SHORT, shortSite);
             sc.setLocalProperty(CALL_SITE_LONG, longSite);
@@ -250,15 +276,22 @@ public final class SparkSweep {
     }
 
     private static Map<String, Long> stages(SparkSession spark, SweepJob job, Path folder, int partitions,
-        FileSystem fs) throws IOException {
+        int reportPoints, FileSystem fs) throws IOException {
         SparkContext sc = spark.sparkContext();
         sc.setCallSite(STAGE_ROWS);
         String parquet = new Path(folder, "rows.parquet").toString();
         Dataset<Row> computed = rows(spark, job, partitions).persist(StorageLevel.DISK_ONLY());
+        List<String> names = job.names();
+        SweepReport report = new SweepReport(names, job.labels(), SweepRow.header(names), reportPoints);
         try {
             computed.write().parquet(parquet);
             sc.setCallSite(STAGE_CSV);
             writeCsv(computed, job, new Path(folder, "sweep-csv"), fs);
+            sc.setCallSite(STAGE_REPORT);
+            Iterator<Row> shown = reportRows(computed, names.size(), reportPoints).toLocalIterator();
+            while (!report.full() && shown.hasNext()) {
+                report.show(values(shown.next()));
+            }
         } finally {
             computed.unpersist(false);
         }
@@ -267,8 +300,11 @@ public final class SparkSweep {
         Map<String, Long> counts = new LinkedHashMap<>();
         for (Row r : rows.groupBy("outcome").count().orderBy("outcome").collectAsList()) {
             counts.put(r.getString(0), r.getLong(1));
+            report.count(r.getString(0), r.getLong(1));
         }
-        List<String> names = job.names();
+        String title = SweepReport.title(names, job.size());
+        copyIn(fs, new Path(folder, "sweep-report.html"), "sweep-report", ".html",
+            f -> report.write(f, title, SweepReport.subtitle(Scenario.parse(job.document()).description())));
         if (names.size() <= 2) {
             sc.setCallSite(STAGE_MAP);
             RegimeMap map = new RegimeMap(names, job.labels());
@@ -284,16 +320,71 @@ public final class SparkSweep {
                 Row r = it.next();
                 map.add(r.getString(0), r.getDouble(1), r.getDouble(2));
             }
-            java.nio.file.Path png = Files.createTempFile("trundle-regime-map", ".png");
-            try {
-                map.write(png, "Regime map: " + String.join(" x ", names) + " (" + job.size() + " runs)",
-                    job.spec().random());
-                fs.copyFromLocalFile(true, true, new Path(png.toUri()), new Path(folder, "regime-map.png"));
-            } finally {
-                Files.deleteIfExists(png);
-            }
+            copyIn(fs, new Path(folder, "regime-map.png"), "trundle-regime-map", ".png",
+                f -> map.write(f, title, job.spec().random()));
         }
         return counts;
+    }
+
+    /** Writes a file on the driver's disk and moves it to the output's file system. */
+    private static void copyIn(FileSystem fs, Path to, String prefix, String suffix, LocalWriter writer)
+        throws IOException {
+        java.nio.file.Path local = Files.createTempFile(prefix, suffix);
+        try {
+            writer.write(local);
+            fs.copyFromLocalFile(true, true, new Path(local.toUri()), to);
+        } finally {
+            Files.deleteIfExists(local);
+        }
+    }
+
+    /** Writes one local file. */
+    private interface LocalWriter {
+        void write(java.nio.file.Path file) throws IOException;
+    }
+
+    /**
+     * The rows {@code sweep-report.html} shows as points, for a Dataset whose partitions are contiguous
+     * index ranges in order (as {@link #rows} makes them): in each partition, its first {@code most} rows that
+     * {@link SweepReport#plotted have a point}. Read a partition at a time ({@code toLocalIterator}) until
+     * {@code most} rows are read, they are the sweep's first {@code most} plotted rows by index, and the
+     * driver holds at most one partition's {@code most} rows at a time; partitions after the report is full
+     * are never read.
+     *
+     * @param rows the rows, partitions in index order
+     * @param parameters number of parameters
+     * @param most most rows per partition, at least 0
+     * @return the rows, in index order within each partition
+     */
+    static Dataset<Row> reportRows(Dataset<Row> rows, int parameters, int most) {
+        FilterFunction<Row> plotted = r -> SweepReport.plotted(values(r), parameters);
+        MapPartitionsFunction<Row, Row> first = it -> new Iterator<>() {
+            private int taken;
+
+            @Override
+            public boolean hasNext() {
+                return taken < most && it.hasNext();
+            }
+
+            @Override
+            public Row next() {
+                if (!hasNext()) {
+                    throw new NoSuchElementException();
+                }
+                taken++;
+                return it.next();
+            }
+        };
+        return rows.filter(plotted).mapPartitions(first, Encoders.row(rows.schema()));
+    }
+
+    /** A Spark row's values in column order, as {@link SweepRow#values()} gives them. */
+    private static Object[] values(Row r) {
+        Object[] v = new Object[r.length()];
+        for (int c = 0; c < v.length; c++) {
+            v[c] = r.get(c);
+        }
+        return v;
     }
 
     /**
@@ -319,12 +410,7 @@ public final class SparkSweep {
                         headerDue = false;
                         return header;
                     }
-                    Row r = it.next();
-                    Object[] v = new Object[r.length()];
-                    for (int c = 0; c < v.length; c++) {
-                        v[c] = r.get(c);
-                    }
-                    return SweepRow.csv(v, np);
+                    return SweepRow.csv(values(it.next()), np);
                 }
             };
         };

@@ -1,5 +1,6 @@
 package org.trundle.runner;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -23,7 +24,8 @@ import org.trundle.scenario.ScenarioFiles;
 
 /**
  * The runner's {@code sweep --engine spark}: found through the service loader with this module on
- * the class path, and the Spark CSV parts equal the local {@code sweep.csv} line for line.
+ * the class path, the Spark CSV parts equal the local {@code sweep.csv} line for line, and both
+ * engines write the same {@code sweep-report.html} byte for byte.
  */
 class SparkEngineCommandTest {
     @TempDir
@@ -75,5 +77,7 @@ class SparkEngineCommandTest {
         assertEquals(expect, got);
         assertNotNull(ImageIO.read(full.resolve("regime-map.png").toFile()));
         assertTrue(Files.isDirectory(full.resolve("rows.parquet")));
+        assertArrayEquals(Files.readAllBytes(dir.resolve("local/sweep-report.html")),
+            Files.readAllBytes(full.resolve("sweep-report.html")), "the same report whatever the engine");
     }
 }

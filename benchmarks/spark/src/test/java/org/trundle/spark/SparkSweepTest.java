@@ -31,14 +31,17 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.trundle.core.sweep.ThreadedExecutor;
+import org.trundle.report.SweepReport;
+import org.trundle.scenario.Scenario;
 import org.trundle.scenario.ScenarioFiles;
 import org.trundle.scenario.SweepJob;
 import org.trundle.scenario.SweepRow;
 
 /**
  * Spark {@code local[2]} against the local-thread executor on the invented return-tube scenario
- * (benchmarks/scenarios): the same rows bit for bit whatever the partition count, a failed run as
- * a row, and no complete-looking output after a cancelled job. One session for the class.
+ * (benchmarks/scenarios): the same rows bit for bit whatever the partition count, the same
+ * {@code sweep-report.html} byte for byte, a failed run as a row, and no complete-looking output
+ * after a cancelled job. One session for the class.
  */
 class SparkSweepTest {
     private static SparkSession spark;
@@ -95,10 +98,23 @@ class SparkSweepTest {
         assertSameRows(local, SparkSweep.rows(spark, tube, partitions).collectAsList());
     }
 
-    @Test
-    void writtenParquetAndCsvHoldTheLocalRowsInIndexOrder() throws IOException {
+    /**
+     * The local engine's {@code sweep-report.html} of rows delivered in index order: what the runner's
+     * {@code sweep} command writes (the same class, title and subtitle).
+     */
+    private static byte[] localReport(SweepJob job, List<SweepRow> rows, int most, Path file) throws IOException {
+        SweepReport html = new SweepReport(job.names(), job.labels(), SweepRow.header(job.names()), most);
+        rows.forEach(html::add);
+        html.write(file, SweepReport.title(job.names(), job.size()),
+            SweepReport.subtitle(Scenario.parse(job.document()).description()));
+        return Files.readAllBytes(file);
+    }
+
+    @ParameterizedTest
+    @ValueSource(ints = {3, 7})
+    void writtenParquetCsvAndReportHoldTheLocalRowsInIndexOrder(int partitions) throws IOException {
         Path out = dir.resolve("tube");
-        var report = SparkSweep.run(spark, tube, out.toString(), 3);
+        var report = SparkSweep.run(spark, tube, out.toString(), partitions);
         assertEquals(2000, report.runs());
         assertEquals(2000L, report.outcomes().values().stream().mapToLong(Long::longValue).sum());
         assertSameRows(local, spark.read().parquet(out.resolve("rows.parquet").toString()).collectAsList());
@@ -114,9 +130,12 @@ class SparkSweepTest {
         expect.add(SweepRow.header(tube.names()));
         local.forEach(r -> expect.add(r.csv()));
         assertEquals(expect, lines, "the CSV parts, concatenated in order, are the local sweep.csv");
+        assertArrayEquals(localReport(tube, local, SweepReport.MAX_POINTS, dir.resolve("local.html")),
+            Files.readAllBytes(out.resolve("sweep-report.html")), "sweep-report.html is the local engine's, byte for byte");
         assertTrue(spark.sparkContext().getPersistentRDDs().isEmpty(), "the rows kept on disk are dropped");
         try (Stream<Path> siblings = Files.list(dir)) {
-            assertEquals(List.of(out), siblings.toList(), "no partial folder left beside the output");
+            assertEquals(List.of(dir.resolve("local.html"), out), siblings.sorted().toList(),
+                "no partial folder left beside the output");
         }
     }
 
@@ -133,6 +152,34 @@ class SparkSweepTest {
         String reason = bad.getAs("message");
         assertTrue(reason.contains("sweep point 3") && reason.contains("radius"), reason);
         assertFalse("failed".equals(rows.get(0).getAs("outcome")), rows.get(0).toString());
+    }
+
+    /**
+     * The report's points with a cap of 3 on a one-parameter sweep (y is the end time) whose failed runs
+     * have no end time: the first three runs that have a point, whatever the partition count, and the same
+     * bytes as the local report with the same cap.
+     */
+    @ParameterizedTest
+    @ValueSource(ints = {1, 3, 7})
+    void theReportShowsTheFirstPlottedRowsByIndex(int partitions) throws IOException {
+        // only the 4 mm ball starts in contact as the scenario asks (rolling at 4 mm from the wall); the
+        // others are failed runs without an end time
+        SweepJob job = SweepJob.of(returnTube("{\"ball.radius\": [0.004, 0.016, 0.005, 0.004, 0.014, 0.004, 0.004]}"));
+        List<SweepRow> expect = new ArrayList<>();
+        new ThreadedExecutor(1, null, null).execute(job.space(), job, expect::add);
+        List<Integer> plotted = expect.stream().filter(r -> r.endTime().isPresent()).map(SweepRow::index).toList();
+        assertEquals(List.of(0, 3, 5, 6), plotted, "runs 1, 2 and 4 fail");
+
+        List<Integer> cut = new ArrayList<>();
+        SparkSweep.reportRows(SparkSweep.rows(spark, job, partitions), 1, 3).collectAsList()
+            .forEach(r -> cut.add(r.getInt(0)));
+        assertEquals(plotted.subList(0, 3), cut.subList(0, 3), "the first three plotted runs lead, in index order");
+        assertTrue(cut.size() <= 3 * partitions, "each partition gives at most three rows: " + cut);
+
+        Path out = dir.resolve("radius");
+        SparkSweep.run(spark, job, out.toString(), partitions, 3);
+        assertArrayEquals(localReport(job, expect, 3, dir.resolve("local.html")),
+            Files.readAllBytes(out.resolve("sweep-report.html")));
     }
 
     @Test

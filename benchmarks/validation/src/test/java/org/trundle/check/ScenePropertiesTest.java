@@ -53,32 +53,48 @@ class ScenePropertiesTest {
     static final SurfaceSampler CHUTE = (rnd, b) -> new Cylinder(Vector3D.ZERO, AXIS,
         b.radius() * Interval.log(1.5, 6).draw(rnd), Side.INSIDE, 0.0, b.radius() * Interval.of(6, 12).draw(rnd));
 
+    /** A still floor 1–8 ball radii below the chute's lower mouth. */
+    static final PatchSampler FLOOR = (rnd, b, s) -> {
+        Cylinder c = (Cylinder) s;
+        double low = c.radius() + c.axis().getZ() * -c.to() + b.radius() * Interval.of(1, 8).draw(rnd);
+        return Patch.of("floor", new Plane(new Vector3D(0, 0, -low), Vector3D.PLUS_K));
+    };
+
+    /** A still tube continuing the chute, same bore, 4–12 ball radii long. */
+    static final PatchSampler LOWER_TUBE = (rnd, b, s) -> {
+        Cylinder c = (Cylinder) s;
+        return Patch.of("lower", new Cylinder(Vector3D.ZERO, AXIS, c.radius(), Side.INSIDE, c.to(),
+            c.to() + b.radius() * Interval.of(4, 12).draw(rnd)));
+    };
+
     static final List<Family> FAMILIES = List.of(
-        new Family("chute over floor", (rnd, b, s) -> {
-            Cylinder c = (Cylinder) s;
-            double low = c.radius() + c.axis().getZ() * -c.to() + b.radius() * Interval.of(1, 8).draw(rnd);
-            return Patch.of("floor", new Plane(new Vector3D(0, 0, -low), Vector3D.PLUS_K));
-        }),
-        new Family("two tubes end to end", (rnd, b, s) -> {
-            Cylinder c = (Cylinder) s;
-            return Patch.of("lower", new Cylinder(Vector3D.ZERO, AXIS, c.radius(), Side.INSIDE, c.to(),
-                c.to() + b.radius() * Interval.of(4, 12).draw(rnd)));
-        }));
+        new Family("chute over floor", FLOOR),
+        new Family("two tubes end to end", LOWER_TUBE));
 
     static final List<Named<LawSampler>> LAWS = List.of(
         Named.of("pure rolling", (rnd, b) -> new PureRolling(rnd.nextDouble())),
         Named.of("coulomb", (rnd, b) -> Catalogue.coulomb(rnd)));
 
+    /** Starts anywhere on the upper tube's wall near its top, 0.05–0.5 m/s. */
+    static final StartSampler STARTS = StartSampler.near(AXIS.scalarMultiply(0.02), 0.01)
+        .withSpeed(Interval.of(0.05, 0.5));
+
+    /**
+     * The chute scene's recipe: balls of 4–8 mm radius, the chute, a neighbour, a law, gravity 9.81 m/s² down,
+     * 0.3 s (shared with {@link MovingScenePropertiesTest}).
+     */
+    static CaseRecipe.Builder chuteScene(String label, PatchSampler neighbour, LawSampler law, StartSampler starts) {
+        return CaseRecipe.builder().label(label).balls(BallSampler.defaults().withRadius(Interval.of(0.004, 0.008)))
+            .surfaces(CHUTE).neighbour(neighbour).laws(law).gravity(GravitySampler.fixed(new Vector3D(0, 0, -G)))
+            .starts(starts).duration(0.3);
+    }
+
     static Stream<Arguments> cases() {
         List<Arguments> out = new ArrayList<>();
         for (Family f : FAMILIES) {
             for (Named<LawSampler> l : LAWS) {
-                CaseSource src = CaseRecipe.builder().label(f.name() + " x " + l.getName())
-                    .balls(BallSampler.defaults().withRadius(Interval.of(0.004, 0.008))).surfaces(CHUTE)
-                    .neighbour(f.neighbour()).laws(l.getPayload())
-                    .gravity(GravitySampler.fixed(new Vector3D(0, 0, -G)))
-                    .starts(StartSampler.near(AXIS.scalarMultiply(0.02), 0.01).withSpeed(Interval.of(0.05, 0.5)))
-                    .duration(0.3).build();
+                CaseSource src = chuteScene(f.name() + " x " + l.getName(), f.neighbour(), l.getPayload(), STARTS)
+                    .build();
                 src.stream(SEED, CASES).forEach(c -> out.add(Arguments.of(Named.of(c.describe(), c))));
             }
         }

@@ -11,6 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.trundle.contact.Coulomb;
+import org.trundle.contact.PureRolling;
 import org.trundle.core.Ball;
 import org.trundle.core.BallState;
 import org.trundle.core.ContactLaw;
@@ -25,6 +26,7 @@ import org.trundle.core.SampleContact;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
 import org.trundle.core.SurfaceMotion;
+import org.trundle.surfaces.Bounded;
 import org.trundle.surfaces.Rails;
 import org.trundle.surfaces.VGroove;
 
@@ -247,9 +249,9 @@ class SeveralContactsTest {
     void aSecondWallThatEndsFirstIsLeftAtItsEnd() {
         double theta = Math.toRadians(10);
         VGroove v = groove60();
-        org.trundle.core.Surface plus = org.trundle.surfaces.Bounded.of(v.plusWall())
+        org.trundle.core.Surface plus = Bounded.of(v.plusWall())
             .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, -1, 0.20).build();
-        org.trundle.core.Surface minus = org.trundle.surfaces.Bounded.of(v.minusWall())
+        org.trundle.core.Surface minus = Bounded.of(v.minusWall())
             .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, -1, 0.10).build();
         Simulation sim = scene(gravity(theta), new Coulomb(0.5, 0.5, 0.0), plus, minus);
         List<Sample> samples = new ArrayList<>();
@@ -290,7 +292,7 @@ class SeveralContactsTest {
         org.trundle.core.Surface floor = new org.trundle.surfaces.Plane(Vector3D.ZERO, Vector3D.PLUS_K);
         org.trundle.core.Surface wall = new org.trundle.surfaces.Plane(new Vector3D(0, R, 0), Vector3D.MINUS_J);
         Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
-            .patch(Patch.of("floor", floor).withLaw(new org.trundle.contact.PureRolling()
+            .patch(Patch.of("floor", floor).withLaw(new PureRolling()
                 .and(new org.trundle.contact.PivotingResistance(dp))))
             .patch(Patch.of("wall", wall).withLaw(new Coulomb(0, 0, 0)))
             .law(new Coulomb(0, 0, 0)).gravity(g)
@@ -340,7 +342,7 @@ class SeveralContactsTest {
         double theta = Math.toRadians(10);
         VGroove v = groove60();
         java.util.function.BiFunction<org.trundle.core.Surface, double[], org.trundle.core.Surface> cut = (w, r) ->
-            org.trundle.surfaces.Bounded.of(w).axialRange(Vector3D.ZERO, Vector3D.PLUS_I, r[0], r[1]).build();
+            Bounded.of(w).axialRange(Vector3D.ZERO, Vector3D.PLUS_I, r[0], r[1]).build();
         Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
             .patch(Patch.of("plus_a", cut.apply(v.plusWall(), new double[] {-1, 0.1})))
             .patch(Patch.of("minus_a", cut.apply(v.minusWall(), new double[] {-1, 0.1})))
@@ -480,7 +482,7 @@ class SeveralContactsTest {
         SurfaceMotion turn = SurfaceMotion.rotation(Vector3D.PLUS_K, origin, omega);
         org.trundle.surfaces.Plane table = new org.trundle.surfaces.Plane(Vector3D.ZERO, Vector3D.PLUS_K);
         Simulation sim = Simulation.builder().ball(Ball.of(R, M, k)).patch(Patch.of("table", table).withMotion(turn))
-            .patch(Patch.of("twin", table).withMotion(turn)).law(new org.trundle.contact.PureRolling())
+            .patch(Patch.of("twin", table).withMotion(turn)).law(new PureRolling())
             .gravity(new Vector3D(0, 0, -G)).settings(SolverSettings.defaults().withSampleInterval(0.05)).build();
         Vector3D c0 = new Vector3D(0.05, 0.01, R);
         Vector3D v0 = new Vector3D(-0.03, 0.08, 0);
@@ -500,5 +502,59 @@ class SeveralContactsTest {
                 1e-9 * radius);
         }
         assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+    }
+
+    /**
+     * A groove of two segments (an invented feeder): the lower pair of walls slides along the groove toward the
+     * upper pair at {@code U} (0.3 m/s), so a ball rolling down is handed over, both contacts at once, onto walls
+     * whose contact points move. With unbounded grip (pure rolling) the slip is stopped at the join by impulses
+     * along the groove at both contacts, which leave the angular momentum about the chord through the contact
+     * points unchanged: {@code m r_e v + I ω = m r_e v' + I ω'} with {@code v = r_e ω} before and
+     * {@code v' − U = r_e ω'} after, so {@code Δv = k r² U/(r_e² + k r²) = k U/(k + sin²γ)} ({@code r_e = r sin γ};
+     * 4/9 of {@code U} for a solid ball in a 90° groove; common practice of impulsive rolling), to 1e-9 of
+     * {@code U}, the ball still rolling and the budget closed with the drive work (1e-8 of {@code E_scale}). With
+     * Coulomb friction the two contacts slide on (no normal impulse at a tangent join) until friction stops the slip.
+     * (Pure rolling used to slide on frictionless, carried nowhere.)
+     */
+    @Test
+    void rollingOntoGrooveWallsThatSlideTakesUpTheirSpeedByImpulses() {
+        double th = Math.toRadians(10);
+        double r = 0.005;
+        double speed = -0.3;
+        Ball ball = Ball.solid(r, 0.004);
+        VGroove v = new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, Math.toRadians(90));
+        double k = ball.inertiaFactor();
+        double sin = Math.sin(v.halfAngle());
+        for (boolean unbounded : new boolean[] {true, false}) {
+            Simulation.Builder b = Simulation.builder().ball(ball)
+                .law(unbounded ? new PureRolling() : new Coulomb(0.5, 0.4, 0.3))
+                .gravity(new Vector3D(G * Math.sin(th), 0, -G * Math.cos(th)));
+            String[] side = {"plus", "minus"};
+            for (int w = 0; w < 2; w++) {
+                b.patch(Patch.of("upper_" + side[w], Bounded.of(v.walls().get(w))
+                    .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, -1, 0.05).build()));
+                b.patch(Patch.of("lower_" + side[w], Bounded.of(v.walls().get(w))
+                    .axialRange(Vector3D.ZERO, Vector3D.PLUS_I, 0.05, 1).build())
+                    .withMotion(SurfaceMotion.translation(new Vector3D(speed, 0, 0))));
+            }
+            Simulation sim = b.build();
+            RunResult res = sim.run(sim.rollingStart(v.restingCentre(r, 0.0), new Vector3D(0.2, 0, 0)), 0.3);
+            List<RunEvent> h = res.eventsOf(EventKind.HANDOVER);
+            assertEquals(2, h.size(), res.events().toString());
+            assertEquals(h.get(0).time(), h.get(1).time(), res.events().toString());
+            double budget = res.energy().relativeResidual();
+            assertTrue(budget < 1e-8, res.energy().toString());
+            if (unbounded) {
+                double dv = h.get(1).after().velocity().getX() - h.get(0).before().velocity().getX();
+                double error = Math.abs(dv / speed - k / (k + sin * sin));
+                System.out.printf("conveyor groove, pure rolling: dv/U %.12f against k/(k + sin^2 gamma) %.12f, budget"
+                    + " %.2g%n", dv / speed, k / (k + sin * sin), budget);
+                assertTrue(error < 1e-9, "velocity jump error " + error);
+                assertEquals(Phase.ROLLING, h.get(1).after().phase());
+            } else {
+                assertEquals(Phase.SLIDING, h.get(1).after().phase(), res.events().toString());
+                assertTrue(res.events().stream().anyMatch(e -> e.kind() == EventKind.STICK), res.events().toString());
+            }
+        }
     }
 }

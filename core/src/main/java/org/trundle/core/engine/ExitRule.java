@@ -88,12 +88,14 @@ final class ExitRule extends SwitchRule {
         }
         ContactSlot next = run.slots.length > 1 ? x.neighbour() : null;
         if (next != null) {
-            // a neighbour continues the surface: the contact moves on, no impulse, same mode
+            // a neighbour continues the surface: the contact moves on, no impulse, same mode unless the
+            // neighbour moves otherwise (Transitions.handOverRolling)
             String from = run.slot.id;
             run.activate(next);
             x.projectOntoSurface(true);
             if (run.phase() == Phase.ROLLING) {
-                x.setDerivedVelocity();
+                // a neighbour moving otherwise than the patch left: the contact point slips on it
+                run.changePhase(x.handOverRolling());
             }
             run.log(EventKind.HANDOVER, before, null, Vector3D.ZERO, edge, from);
             // the neighbour may not hold the ball (a convex lip taken too fast): then it lifts off at once

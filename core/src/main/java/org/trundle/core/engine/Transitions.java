@@ -748,8 +748,10 @@ final class Transitions {
     }
 
     /**
-     * Settles the modes of several contacts after a change (a contact reached, released, stuck, or a start):
-     * a rolling contact whose slip exceeds the stick threshold slides along its slip; the velocity is
+     * Settles the modes of several contacts after a change (a contact reached, released, stuck, handed over, or
+     * a start): a rolling contact whose slip exceeds the stick threshold slides along its slip, unless its law's
+     * grip is unbounded (pure rolling: the projection then stops the slip, as the impulse of an impact would;
+     * a hand-over onto walls that move otherwise, a conveyor groove, makes such slip); the velocity is
      * projected onto the constraints (the energy removed booked as sliding friction, as for the sticking
      * impulse of one contact); then, repeatedly, a contact whose normal force is not positive is released
      * (the most negative first) and a rolling contact that needs more friction than its grip slides against
@@ -770,12 +772,25 @@ final class Transitions {
             // one sliding contact keeps its held direction in the right-hand side: the slot takes it over
             System.arraycopy(dyn.slideDir0, 0, set.active().slideDir, 0, 3);
         }
+        boolean gripKnown = false;
         for (int k = 0; k < set.count(); k++) {
             ContactSlot s = set.at(k);
             s.query(run.t, run.centreOf(y));
             if (s.mode == Mode.ROLLING) {
                 double[] sl = relativeSlip(s, y);
                 double sp = Vec.norm(sl);
+                if (sp > run.stickEps && set.multi()) {
+                    if (!gripKnown) {
+                        dyn.phase = run.phase();
+                        dyn.evaluate(run.t, y);
+                        gripKnown = true;
+                    }
+                    if (dyn.contactGrip[k] == Double.POSITIVE_INFINITY) {
+                        // unbounded grip (pure rolling): the velocity projection below stops the slip by
+                        // impulses, booked, as at an impact; a bounded grip cannot without a normal impulse
+                        continue;
+                    }
+                }
                 if (sp > run.stickEps) {
                     for (int i = 0; i < 3; i++) {
                         s.slideDir[i] = sl[i] / sp;
@@ -1203,6 +1218,42 @@ final class Transitions {
         }
         ContactKinematics.slip(r, ys, V, ys, W, dyn.geo.normal, s);
         return s;
+    }
+
+    /**
+     * A rolling contact handed over to a neighbour (one contact; {@link #projectOntoSurface} done on the
+     * neighbour): velocity and spin are kept, so on a neighbour that moves otherwise than the patch left (a still
+     * tube into a spinning one, a floor onto a belt) the contact point slips by
+     * {@code s = P(v − u(p)) − r (ω − Ω) × n}; where both move alike {@code s} is rounding and the no-slip
+     * velocity is only re-derived. A tangent join gives no normal impulse, so a bounded grip cannot stop that slip
+     * at once: the ball slides on, against its slip, until friction stops it (a {@code stick} event); an unbounded
+     * grip (pure rolling) stops it by the impulse {@code J = −k m s/(1+k)} ({@link #stickImpulse}, its loss and
+     * drive work booked), as at an impact (design notes §6, §9). Imposing the neighbour's no-slip velocity instead
+     * would change the kinetic energy with nothing booked.
+     *
+     * @return the phase to go on in: rolling, or sliding with its direction set
+     */
+    Phase handOverRolling() {
+        double[] y = run.y;
+        run.slot.query(run.t, run.centreOf(y));
+        double[] s = slipOf(y);
+        double sp = Vec.norm(s);
+        if (!(sp > run.stickEps)) {
+            setDerivedVelocity();
+            return Phase.ROLLING;
+        }
+        dyn.phase = Phase.ROLLING;
+        dyn.evaluate(run.t, y);
+        if (dyn.grip == Double.POSITIVE_INFINITY) {
+            stickImpulse();
+            setDerivedVelocity();
+            return Phase.ROLLING;
+        }
+        for (int i = 0; i < 3; i++) {
+            dyn.slideDir0[i] = s[i] / sp;
+        }
+        dyn.phase = Phase.SLIDING;
+        return Phase.SLIDING;
     }
 
     /** Sets the velocity slot of the run's state to the no-slip velocity r ω × n. */

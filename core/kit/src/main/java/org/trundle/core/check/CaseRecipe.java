@@ -19,7 +19,12 @@ import org.trundle.core.SurfaceMotion;
  * A draw whose parts do not fit together (the simulation rejects the ball, or no start is found in
  * the region) is redrawn from the same random stream, at most 20 times, so the case stays a
  * function of {@code (s, i)}. With a {@link Builder#neighbour} sampler each case is a two-patch
- * scene: the drawn surface and a second patch drawn beside it.
+ * scene: the drawn surface and a second patch drawn beside it. Either patch may move: the drawn surface by
+ * the {@link Builder#motions} sampler's motion, the second when its sampler gives it one
+ * ({@link PatchSampler#withMotion}, with {@link MotionSampler#turntable}, {@link MotionSampler#belt} or
+ * {@link MotionSampler#spinning}), so that a scene case can have a floor turning under a chute, a belt, or
+ * a spinning tube. Draw order within a case: ball, surface, law, gravity, the surface's motion (only when a
+ * motion sampler is given), the second patch and its motion, the start.
  *
  * <pre>{@code
  * CaseSource cases = CaseRecipe.builder()
@@ -190,7 +195,8 @@ public final class CaseRecipe implements CaseSource {
         }
 
         /**
-         * @param m motion sampler of the drawn surfaces (none by default: still surfaces)
+         * @param m motion sampler of the drawn surfaces (none by default: still surfaces); in a two-patch scene
+         *     it moves the first patch (the drawn surface), not the neighbour
          * @return this builder
          */
         public Builder motions(MotionSampler m) {

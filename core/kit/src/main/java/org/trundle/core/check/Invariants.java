@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.SplittableRandom;
 import java.util.function.BiFunction;
+import java.util.function.UnaryOperator;
 
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.RotationConvention;
@@ -15,12 +16,14 @@ import org.trundle.core.ContactGeometry;
 import org.trundle.core.ContactLaw;
 import org.trundle.core.EndReason;
 import org.trundle.core.EventKind;
+import org.trundle.core.MotionState;
 import org.trundle.core.Patch;
 import org.trundle.core.Phase;
 import org.trundle.core.RunEvent;
 import org.trundle.core.Sample;
 import org.trundle.core.Simulation;
 import org.trundle.core.SolverSettings;
+import org.trundle.core.SurfaceMotion;
 
 /**
  * The kit's invariant checks. Each returns an {@link Invariant} whose verdict reports the worst
@@ -318,47 +321,199 @@ public final class Invariants {
      * @return the invariant
      */
     public static Invariant frameInvariant(Rotation rotation, Vector3D translation, double bound) {
-        Checks.positive("bound", bound);
         Checks.finite("translation", translation);
-        String name = "frame invariant";
+        return symmetry("frame invariant", sim -> movedRigidly(sim, rotation, translation),
+            s -> BallState.of(s.time(), rotation.applyTo(s.centre()).add(translation), rotation.applyTo(s.velocity()),
+                rotation.applyTo(s.orientation()), rotation.applyTo(s.spin()), s.phase()), bound);
+    }
+
+    /**
+     * A symmetry of the equations of motion, given by the caller: the run of the transformed scene
+     * {@code scene(sim)} from the mapped start {@code map(s₀)} must be the map of the run,
+     * {@code map(s(t))} at every time {@code t} (the map keeps the time; it may use it, as a Galilean boost
+     * does). {@link #frameInvariant(Rotation, Vector3D, double)} and {@link #galilean(Vector3D, double)} are
+     * such checks; a map that is not a symmetry of the case fails it, which is how a test shows that a check
+     * can fail (frame invariance with a patch's motion left behind, for instance).
+     *
+     * <p>Both runs are sampled at 16 equal intervals (the case's simulation with that sample interval is
+     * what {@code scene} receives); worst deviation over the samples and the end state: the largest of
+     * {@code |c_map − c'|/r}, {@code |v_map − v'|/V}, {@code r|ω_map − ω'|/V} and the angle between the
+     * orientations (rad); a different end reason or event sequence is a failure (infinite deviation). The
+     * two runs' step choices differ at the tolerance (the error norm is per component, relative to the
+     * state's own size, so a transformed state is stepped differently), and on integrable shapes such
+     * differences grow linearly with the angle turned, so the verdict's deviation is the worst one divided
+     * by the number of characteristic times {@code max(1, T ‖H‖ V)} (see {@link #timeReversible(double,
+     * double)}); the detail gives the raw value.
+     *
+     * @param name the check's name in verdicts
+     * @param scene gives the transformed simulation
+     * @param map maps a state of the case's run to the state the transformed run must have at the same time
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     */
+    public static Invariant symmetry(String name, UnaryOperator<Simulation> scene, UnaryOperator<BallState> map,
+                                     double bound) {
+        Checks.positive("bound", bound);
+        if (name == null || scene == null || map == null) {
+            throw new IllegalArgumentException("name, scene and map must be given, got " + name + ", " + scene + ", "
+                + map);
+        }
         return c -> {
             Simulation sim = sampled(c.simulation(), c.simulation().settings().withSampleInterval(c.duration() / 16));
-            Simulation moved = movedRigidly(sim, rotation, translation);
-            BallState s0 = c.start();
-            BallState m0 = BallState.of(s0.time(), rotation.applyTo(s0.centre()).add(translation),
-                rotation.applyTo(s0.velocity()), rotation.applyTo(s0.orientation()), rotation.applyTo(s0.spin()),
-                s0.phase());
-            Trajectory a = Trajectory.run(sim, s0, c.duration());
-            Trajectory b = Trajectory.run(moved, m0, c.duration());
-            String mismatch = compareLogs(a, b);
-            if (mismatch != null) {
-                return Verdict.measured(name, Double.POSITIVE_INFINITY, bound, mismatch);
-            }
-            double r = sim.ball().radius();
-            double v = c.speedScale();
-            double worst = 0;
-            double at = 0;
-            List<Sample> ra = a.regular();
-            List<Sample> rb = b.regular();
-            int n = Math.min(ra.size(), rb.size());
-            for (int i = 0; i <= n; i++) {
-                BallState x = i < n ? ra.get(i).state() : a.result.endState();
-                BallState y = i < n ? rb.get(i).state() : b.result.endState();
-                double dev = Math.max(Math.max(
-                    rotation.applyTo(x.centre()).add(translation).distance(y.centre()) / r,
-                    rotation.applyTo(x.velocity()).distance(y.velocity()) / v),
-                    Math.max(r * rotation.applyTo(x.spin()).distance(y.spin()) / v,
-                        Rotation.distance(rotation.applyTo(x.orientation()), y.orientation())));
-                if (!(dev <= worst)) {
-                    worst = dev;
-                    at = x.time();
+            return compareMapped(name, c, sim, scene.apply(sim), map, bound);
+        };
+    }
+
+    // ------------------------------------------------------------------ Galilean invariance
+
+    /**
+     * Galilean invariance: seen from a frame moving at the constant velocity {@code w}, with positions
+     * {@code x' = x − w t}, every patch moves with its own motion and, on top of it, at {@code −w}; gravity
+     * is the same; the run from the start {@code (c₀ − w t₀, v₀ − w, q₀, ω₀)} must be
+     * {@code (c(t) − w t, v(t) − w, q(t), ω(t))} (Newton's laws hold alike in all inertial frames:
+     * H. Goldstein, C. Poole, J. Safko, Classical Mechanics, 3rd ed., 2002, §1.1; the contact conditions
+     * involve only the velocity relative to the patch, {@code v − u}, and spins, which the boost leaves
+     * alone). Deviation and samples as in {@link #symmetry}.
+     *
+     * <p>What the boost leaves unequal, and so the check's cases should avoid: applied loads that depend on
+     * the absolute velocity (drag in still air becomes drag in a wind); the solver's speed scale
+     * {@code V = max(|v₀|, r|ω₀|, …)}, which changes with {@code |v₀|}, and so its thresholds: the stick
+     * threshold and the settle speed are far below the bound, but the smoothing band of a law's
+     * regularised couples ({@code 10⁻³ V/r}) is not, so laws with couples at small relative spin may
+     * differ by their band.
+     *
+     * @param boost the frame's velocity w (m/s)
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     */
+    public static Invariant galilean(Vector3D boost, double bound) {
+        Checks.finite("boost", boost);
+        return symmetry("galilean", sim -> rebuilt(sim, sim.gravity(),
+            p -> p.withMotion(new BoostedMotion(p.motion(), boost))), s -> boosted(s, boost), bound);
+    }
+
+    /**
+     * Galilean invariance in the frame that moves with a patch translating at a constant velocity (a belt):
+     * the boost {@code w} is that patch's velocity, so in the new frame the patch stands still
+     * ({@link org.trundle.core.SurfaceMotion#NONE}: the solver's still-patch path) while every other patch
+     * moves at {@code −w} on top of its own motion; the run must be the run with the belt moving, shifted
+     * by {@code −w t} (see {@link #galilean(Vector3D, double)} for the source and what the boost leaves
+     * unequal). Not applicable when the patch's motion is not a uniform translation over the run (its
+     * rotation the identity, spin, spin rate and acceleration zero and its velocity the same at the start,
+     * middle and end).
+     *
+     * @param patchId the id of the translating patch
+     * @param bound bound on the worst deviation
+     * @return the invariant
+     * @throws IllegalArgumentException (when checked) if the case has no patch of that id
+     */
+    public static Invariant galileanWithPatch(String patchId, double bound) {
+        Checks.positive("bound", bound);
+        String name = "galilean with " + patchId;
+        return c -> {
+            Patch belt = null;
+            for (Patch p : c.simulation().patches()) {
+                if (p.id().equals(patchId)) {
+                    belt = p;
                 }
             }
-            double turns = turns(c);
-            return Verdict.measured(name, worst / turns, bound, String.format(Locale.ROOT,
-                "raw worst %.3e at t=%.6g s over %d samples, %.3g characteristic times, end %s", worst, at, n + 1,
-                turns, a.result.endReason().label()));
+            if (belt == null) {
+                throw new IllegalArgumentException("patchId " + patchId + " names no patch of the case; its patches: "
+                    + c.simulation().patches().stream().map(Patch::id).toList());
+            }
+            double t0 = c.start().time();
+            double[] times = {t0, t0 + 0.5 * c.duration(), t0 + c.duration()};
+            MotionState m = new MotionState();
+            belt.motion().at(t0, m);
+            Vector3D w = new Vector3D(m.velocity);
+            Vector3D rest = new Vector3D(m.offset).subtract(t0, w);
+            for (double t : times) {
+                belt.motion().at(t, m);
+                String why = uniformTranslation(m, w, rest, t);
+                if (why != null) {
+                    return Verdict.notApplicable(name, "patch " + patchId + " (" + belt.motion().name()
+                        + ") is not a uniform translation: " + why + " at t=" + t + " s");
+                }
+            }
+            Patch still = belt;
+            Simulation sim = sampled(c.simulation(), c.simulation().settings().withSampleInterval(c.duration() / 16));
+            Simulation other = rebuilt(sim, sim.gravity(), p -> p.id().equals(still.id())
+                ? new Patch(p.id(), rest.getNorm() == 0 ? p.surface()
+                    : new RigidlyMovedSurface(p.surface(), Rotation.IDENTITY, rest), SurfaceMotion.NONE, p.law(),
+                    p.compliance())
+                : p.withMotion(new BoostedMotion(p.motion(), w)));
+            return compareMapped(name, c, sim, other, s -> boosted(s, w), bound);
         };
+    }
+
+    /** Null when the pose is {@code x = x₀ + rest + w t} with constant rates; otherwise what differs. */
+    private static String uniformTranslation(MotionState m, Vector3D w, Vector3D rest, double t) {
+        double[] id = {1, 0, 0, 0, 1, 0, 0, 0, 1};
+        for (int i = 0; i < 9; i++) {
+            if (m.rotation[i] != id[i]) {
+                return "rotation is not the identity";
+            }
+        }
+        for (int i = 0; i < 3; i++) {
+            if (m.spin[i] != 0 || m.spinRate[i] != 0) {
+                return "it spins";
+            }
+            if (m.acceleration[i] != 0) {
+                return "it accelerates";
+            }
+        }
+        if (!new Vector3D(m.velocity).equals(w)) {
+            return "velocity " + new Vector3D(m.velocity) + " m/s, not " + w + " m/s";
+        }
+        Vector3D expected = rest.add(t, w);
+        double scale = rest.getNorm() + w.getNorm() * Math.abs(t);
+        if (!(new Vector3D(m.offset).distance(expected) <= 1e-12 * scale)) {
+            return "offset " + new Vector3D(m.offset) + " m, not " + expected + " m";
+        }
+        return null;
+    }
+
+    /** The state seen from the frame moving at w: {@code (c − w t, v − w, q, ω)}. */
+    private static BallState boosted(BallState s, Vector3D w) {
+        return BallState.of(s.time(), s.centre().subtract(s.time(), w), s.velocity().subtract(w), s.orientation(),
+            s.spin(), s.phase());
+    }
+
+    /**
+     * Runs the case on {@code sim} and the mapped start on {@code other}; the verdict compares the mapped
+     * samples and end state with the other run's (see {@link #symmetry}).
+     */
+    private static Verdict compareMapped(String name, PropertyCase c, Simulation sim, Simulation other,
+                                         UnaryOperator<BallState> map, double bound) {
+        BallState s0 = c.start();
+        Trajectory a = Trajectory.run(sim, s0, c.duration());
+        Trajectory b = Trajectory.run(other, map.apply(s0), c.duration());
+        String mismatch = compareLogs(a, b);
+        if (mismatch != null) {
+            return Verdict.measured(name, Double.POSITIVE_INFINITY, bound, mismatch);
+        }
+        double r = sim.ball().radius();
+        double v = c.speedScale();
+        double worst = 0;
+        double at = 0;
+        List<Sample> ra = a.regular();
+        List<Sample> rb = b.regular();
+        int n = Math.min(ra.size(), rb.size());
+        for (int i = 0; i <= n; i++) {
+            BallState x = i < n ? ra.get(i).state() : a.result.endState();
+            BallState y = i < n ? rb.get(i).state() : b.result.endState();
+            BallState mx = map.apply(x);
+            double dev = Math.max(Math.max(mx.centre().distance(y.centre()) / r, mx.velocity().distance(y.velocity()) / v),
+                Math.max(r * mx.spin().distance(y.spin()) / v, Rotation.distance(mx.orientation(), y.orientation())));
+            if (!(dev <= worst)) {
+                worst = dev;
+                at = x.time();
+            }
+        }
+        double turns = turns(c);
+        return Verdict.measured(name, worst / turns, bound, String.format(Locale.ROOT,
+            "raw worst %.3e at t=%.6g s over %d samples, %.3g characteristic times, end %s", worst, at, n + 1,
+            turns, a.result.endReason().label()));
     }
 
     // ------------------------------------------------------------------ scaling
@@ -595,23 +750,24 @@ public final class Invariants {
 
     /** The simulation with every patch, its motion and the gravity moved by {@code x ↦ R x + b}. */
     private static Simulation movedRigidly(Simulation sim, Rotation rotation, Vector3D translation) {
+        return rebuilt(sim, rotation.applyTo(sim.gravity()), p -> new Patch(p.id(),
+            new RigidlyMovedSurface(p.surface(), rotation, translation),
+            p.motion().stationary() ? p.motion() : new RigidlyMovedMotion(p.motion(), rotation, translation),
+            p.law(), p.compliance()));
+    }
+
+    /** The simulation with gravity {@code g} and every patch replaced by {@code f} of it (ids, laws kept by f). */
+    private static Simulation rebuilt(Simulation sim, Vector3D g, UnaryOperator<Patch> f) {
         List<Patch> patches = sim.patches();
         if (patches.size() == 1 && patches.get(0).id().equals(Simulation.SINGLE_PATCH)) {
-            Simulation.Builder mb = sim.toBuilder()
-                .surface(new RigidlyMovedSurface(sim.surface(), rotation, translation))
-                .gravity(rotation.applyTo(sim.gravity()));
-            if (!sim.motion().stationary()) {
-                mb.motion(new RigidlyMovedMotion(sim.motion(), rotation, translation));
-            }
-            return mb.build();
+            Patch p = f.apply(patches.get(0));
+            return sim.toBuilder().surface(p.surface()).motion(p.motion()).gravity(g).build();
         }
         Simulation.Builder mb = Simulation.builder().ball(sim.ball()).law(sim.law()).load(sim.load())
-            .settings(sim.settings()).gravity(rotation.applyTo(sim.gravity()));
+            .settings(sim.settings()).gravity(g);
         sim.compliance().ifPresent(mb::compliance);
         for (Patch p : patches) {
-            mb.patch(new Patch(p.id(), new RigidlyMovedSurface(p.surface(), rotation, translation),
-                p.motion().stationary() ? p.motion() : new RigidlyMovedMotion(p.motion(), rotation, translation),
-                p.law(), p.compliance()));
+            mb.patch(f.apply(p));
         }
         return mb.build();
     }

@@ -1,8 +1,10 @@
 package org.trundle.core.check;
 
+import java.util.List;
 import java.util.Locale;
 
 import org.trundle.core.BallState;
+import org.trundle.core.Patch;
 import org.trundle.core.internal.Checks;
 import org.trundle.core.Simulation;
 
@@ -125,11 +127,33 @@ public final class PropertyCase {
         return new PropertyCase(seed, index, label, s, start, duration, true);
     }
 
-    /** @return one line naming the seed, index and every input */
+    /**
+     * @return one line naming the seed, index and every input (in a scene every patch by its id, and the
+     *     motion of each patch that moves)
+     */
     public String describe() {
         return String.format(Locale.ROOT, "seed=%d index=%d%s %s | %s | %s | %s | g=%s | start %s | T=%.6g s",
-            seed, index, derived ? " (simplified)" : "", label, simulation.ball(), simulation.surface().name(),
+            seed, index, derived ? " (simplified)" : "", label, simulation.ball(), patches(),
             simulation.law().name(), simulation.gravity(), start, duration);
+    }
+
+    /** The surface, or every patch as {@code id: surface}, each followed by its motion when it moves. */
+    private String patches() {
+        List<Patch> ps = simulation.patches();
+        StringBuilder sb = new StringBuilder();
+        for (Patch p : ps) {
+            if (sb.length() > 0) {
+                sb.append("; ");
+            }
+            if (ps.size() > 1) {
+                sb.append(p.id()).append(": ");
+            }
+            sb.append(p.surface().name());
+            if (!p.motion().stationary()) {
+                sb.append(" moving by ").append(p.motion().name());
+            }
+        }
+        return sb.toString();
     }
 
     @Override
