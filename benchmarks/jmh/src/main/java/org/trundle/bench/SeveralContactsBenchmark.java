@@ -33,7 +33,11 @@ import org.trundle.surfaces.VGroove;
  * groove run keeps both contacts rolling to the end and the plane run rolls to the end. With the parameter
  * {@code mu = 0.02}, below the grip either needs (on the plane {@code μ ≥ (2/7) tanθ = 0.050}), both walls of the
  * groove and the plane slide from the start to the end instead (the closed form of sliding contacts, Cramer's rule
- * on the normal forces, against the single-contact sliding closed form).
+ * on the normal forces, against the single-contact sliding closed form). {@link #grooveRollingAndSliding} is the
+ * groove whose minus wall is frictionless (Coulomb μ = 0 there, 0.5 on the plus wall): that wall slips at the start
+ * and the ball rolls on the plus wall and slides on the minus one to the end (the closed form of one rolling and
+ * one sliding contact), at the plane's own acceleration {@code (5/7) g sinθ}, so its cost compares with
+ * {@link #planeOneContact} at {@code mu = 0.5}.
  */
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
@@ -65,6 +69,38 @@ public class SeveralContactsBenchmark {
             check(groove.run(grooveStart, DURATION), "groove", sliding);
             check(plane.run(planeStart, DURATION), "plane", sliding);
         }
+    }
+
+    /** The groove with one frictionless wall, built and checked once. */
+    @State(Scope.Thread)
+    public static class MixedRuns {
+        Simulation groove;
+        BallState grooveStart;
+
+        /** Builds the run and checks that it rolls on one wall and slides on the other to the end. */
+        @Setup(Level.Trial)
+        public void setUp() {
+            groove = mixedGrooveRun();
+            grooveStart = grooveStart(groove);
+            RunResult r = groove.run(grooveStart, DURATION);
+            if (r.endReason() != EndReason.DURATION || r.events().size() != 1
+                || r.events().get(0).kind() != EventKind.SLIP || !"minus".equals(r.events().get(0).patch())
+                || r.events().get(0).time() != 0) {
+                throw new IllegalStateException("mixed groove run: " + r.endReason() + " " + r.events());
+            }
+        }
+    }
+
+    /**
+     * @return the groove scene with a gripping plus wall (Coulomb μ = 0.5) and a frictionless minus wall
+     *     (μ = 0)
+     */
+    static Simulation mixedGrooveRun() {
+        VGroove v = new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, Math.toRadians(60));
+        return Simulation.builder().ball(Ball.solid(0.01, 0.03))
+            .patch(Patch.of("plus", v.plusWall()).withLaw(new Coulomb(0.5, 0.5, 0.0)))
+            .patch(Patch.of("minus", v.minusWall()).withLaw(new Coulomb(0, 0, 0.0)))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(slope()).build();
     }
 
     /** Rolling: no event to the end; sliding: one phase, sliding, with only the slip events at the start. */
@@ -123,6 +159,15 @@ public class SeveralContactsBenchmark {
      */
     @Benchmark
     public RunResult grooveTwoContacts(Runs s) {
+        return s.groove.run(s.grooveStart, DURATION);
+    }
+
+    /**
+     * @param s the runs
+     * @return the result
+     */
+    @Benchmark
+    public RunResult grooveRollingAndSliding(MixedRuns s) {
         return s.groove.run(s.grooveStart, DURATION);
     }
 

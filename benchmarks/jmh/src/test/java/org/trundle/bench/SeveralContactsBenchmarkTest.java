@@ -62,4 +62,26 @@ class SeveralContactsBenchmarkTest {
         assertTrue(groove.evaluations() <= 2 * plane.evaluations(),
             "evaluations: groove " + groove.evaluations() + ", plane " + plane.evaluations());
     }
+
+    /**
+     * The groove with one frictionless wall: that wall slips at the start and the ball rolls on the other to the
+     * end at the plane's acceleration {@code (5/7) g sinθ} (it rolls about its one gripping contact as on a plane,
+     * the frictionless wall pushing through the centre; Newton–Euler, common practice), to 1e-8 of the speed
+     * gained, with at most twice the plane's evaluations.
+     */
+    @Test
+    void theGrooveWithAFrictionlessWallRollsOnTheOtherAtThePlanesAcceleration() {
+        RunResult groove = SeveralContactsBenchmark.mixedGrooveRun().run(
+            SeveralContactsBenchmark.grooveStart(SeveralContactsBenchmark.mixedGrooveRun()),
+            SeveralContactsBenchmark.DURATION);
+        RunResult plane = SeveralContactsBenchmark.planeRun().run(
+            SeveralContactsBenchmark.planeStart(SeveralContactsBenchmark.planeRun()), SeveralContactsBenchmark.DURATION);
+        assertEquals(EndReason.DURATION, groove.endReason());
+        assertEquals(1, groove.events().size(), groove.events().toString());
+        double gs = 9.81 * Math.sin(Math.toRadians(10));
+        double t = SeveralContactsBenchmark.DURATION;
+        assertEquals(gs * 5 / 7 * t, groove.endState().velocity().getX(), 1e-8 * gs * t);
+        assertTrue(groove.evaluations() <= 2 * plane.evaluations(),
+            "evaluations: groove " + groove.evaluations() + ", plane " + plane.evaluations());
+    }
 }
