@@ -179,7 +179,7 @@ final class SweepCommand implements Callable<Integer>, Main.ErrStream {
                 : ""));
         }
         SweepEngine.Report r = found.run(job, out.toString(), new SweepEngine.Options(master,
-            partitions == null ? 0 : partitions));
+            partitions == null ? 0 : partitions, !noPlot));
         PrintWriter w = header(job);
         w.println("Sweep:    " + r.runs() + " runs over " + String.join(", ", job.names()) + " on " + engine
             + (master == null ? "" : " (" + master + ")") + (job.spec().random() ? " (random sample)" : " (grid)"));

@@ -36,13 +36,24 @@ public interface SweepEngine {
      * @param master the cluster to run on (for Spark a master URL such as {@code local[2]} or
      *     {@code spark://host:7077}); null to take the one the launcher configured
      * @param partitions number of parts the points are split into; 0 for the engine's default
+     * @param picture whether to draw the regime map's picture ({@code regime-map.png}); false for {@code --no-plot}
      */
-    record Options(String master, int partitions) {
+    record Options(String master, int partitions, boolean picture) {
         /** Checks the count. */
         public Options {
             if (partitions < 0) {
                 throw new ScenarioException("--partitions must be at least 1, got " + partitions);
             }
+        }
+
+        /**
+         * Options that draw the picture.
+         *
+         * @param master the cluster to run on, or null
+         * @param partitions number of parts, 0 for the default
+         */
+        public Options(String master, int partitions) {
+            this(master, partitions, true);
         }
     }
 

@@ -196,7 +196,23 @@ public final class SparkSweep {
      */
     public static SweepEngine.Report run(SparkSession spark, SweepJob job, String out, int partitions)
         throws IOException {
-        return run(spark, job, out, partitions, SweepReport.MAX_POINTS);
+        return run(spark, job, out, partitions, SweepReport.MAX_POINTS, true);
+    }
+
+    /**
+     * {@link #run(SparkSession, SweepJob, String, int)}, drawing {@code regime-map.png} or not ({@code --no-plot}).
+     *
+     * @param spark the session
+     * @param job the sweep
+     * @param out output folder (path or URI of any Hadoop file system); it must not exist or be empty
+     * @param partitions number of partitions, at least 1
+     * @param picture whether to draw the regime map's picture
+     * @return what was written
+     * @throws IOException when the outputs cannot be written
+     */
+    public static SweepEngine.Report run(SparkSession spark, SweepJob job, String out, int partitions, boolean picture)
+        throws IOException {
+        return run(spark, job, out, partitions, SweepReport.MAX_POINTS, picture);
     }
 
     /**
@@ -212,12 +228,17 @@ public final class SparkSweep {
      */
     static SweepEngine.Report run(SparkSession spark, SweepJob job, String out, int partitions, int reportPoints)
         throws IOException {
+        return run(spark, job, out, partitions, reportPoints, true);
+    }
+
+    private static SweepEngine.Report run(SparkSession spark, SweepJob job, String out, int partitions,
+        int reportPoints, boolean picture) throws IOException {
         Path target = checkOutput(out, spark.sparkContext().hadoopConfiguration());
         FileSystem fs = target.getFileSystem(spark.sparkContext().hadoopConfiguration());
         Path partial = new Path(target.getParent(), target.getName() + ".partial-" + UUID.randomUUID());
         boolean done = false;
         try {
-            Map<String, Long> counts = write(spark, job, partial, partitions, reportPoints, fs);
+            Map<String, Long> counts = write(spark, job, partial, partitions, reportPoints, picture, fs);
             if (fs.exists(target)) {
                 fs.delete(target, false); // the empty folder
             }
@@ -263,12 +284,12 @@ public final class SparkSweep {
     }
 
     private static Map<String, Long> write(SparkSession spark, SweepJob job, Path folder, int partitions,
-        int reportPoints, FileSystem fs) throws IOException {
+        int reportPoints, boolean picture, FileSystem fs) throws IOException {
         SparkContext sc = spark.sparkContext();
         String shortSite = sc.getLocalProperty(CALL_SITE_SHORT);
         String longSite = sc.getLocalProperty(CALL_SITE_LONG);
         try {
-            return stages(spark, job, folder, partitions, reportPoints, fs);
+            return stages(spark, job, folder, partitions, reportPoints, picture, fs);
         } finally {
             sc.setLocalProperty(CALL_SITE_SHORT, shortSite);
             sc.setLocalProperty(CALL_SITE_LONG, longSite);
@@ -276,7 +297,7 @@ public final class SparkSweep {
     }
 
     private static Map<String, Long> stages(SparkSession spark, SweepJob job, Path folder, int partitions,
-        int reportPoints, FileSystem fs) throws IOException {
+        int reportPoints, boolean picture, FileSystem fs) throws IOException {
         SparkContext sc = spark.sparkContext();
         sc.setCallSite(STAGE_ROWS);
         String parquet = new Path(folder, "rows.parquet").toString();
@@ -305,7 +326,7 @@ public final class SparkSweep {
         String title = SweepReport.title(names, job.size());
         copyIn(fs, new Path(folder, "sweep-report.html"), "sweep-report", ".html",
             f -> report.write(f, title, SweepReport.subtitle(Scenario.parse(job.document()).description())));
-        if (names.size() <= 2) {
+        if (picture && names.size() <= 2) {
             sc.setCallSite(STAGE_MAP);
             RegimeMap map = new RegimeMap(names, job.labels());
             Column x = rows.col(quote(names.get(0)));

@@ -53,7 +53,7 @@ public final class SparkSweepEngine implements SweepEngine {
         try {
             int partitions = options.partitions() > 0 ? options.partitions()
                 : SparkSweep.defaultPartitions(spark, job.size());
-            return SparkSweep.run(spark, job, out, partitions);
+            return SparkSweep.run(spark, job, out, partitions, options.picture());
         } finally {
             if (!existing) {
                 spark.stop();

@@ -12,7 +12,8 @@ import org.trundle.scenario.SweepJob;
 
 /**
  * Entry point for {@code spark-submit}:
- * {@code SCENARIO.json --out DIR_OR_URI [--partitions N] [--duration S]}. The scenario file is read
+ * {@code SCENARIO.json --out DIR_OR_URI [--partitions N] [--duration S] [--no-plot]} ({@code --no-plot}: no
+ * {@code regime-map.png}). The scenario file is read
  * on the driver; the output may be any Hadoop file system URI ({@code hdfs://…}, {@code file:/…}).
  * The master comes from {@code spark-submit}. Exit codes as the runner's: 0 done, 1 the job failed,
  * 2 bad input.
@@ -39,30 +40,32 @@ public final class SparkSweepMain {
         String dir = null;
         int partitions = 0;
         Double duration = null;
+        boolean picture = true;
         try {
             for (int i = 0; i < args.length; i++) {
                 switch (args[i]) {
                     case "--out" -> dir = value(args, ++i, "--out");
                     case "--partitions" -> partitions = Integer.parseInt(value(args, ++i, "--partitions"));
                     case "--duration" -> duration = Double.valueOf(value(args, ++i, "--duration"));
+                    case "--no-plot" -> picture = false;
                     default -> {
                         if (args[i].startsWith("-") || scenario != null) {
                             throw new ScenarioException("unexpected argument " + args[i] + "; usage: SCENARIO.json"
-                                + " --out DIR_OR_URI [--partitions N] [--duration S]");
+                                + " --out DIR_OR_URI [--partitions N] [--duration S] [--no-plot]");
                         }
                         scenario = args[i];
                     }
                 }
             }
             if (scenario == null || dir == null) {
-                throw new ScenarioException("usage: SCENARIO.json --out DIR_OR_URI [--partitions N] [--duration S]");
+                throw new ScenarioException("usage: SCENARIO.json --out DIR_OR_URI [--partitions N] [--duration S] [--no-plot]");
             }
             var doc = ScenarioFiles.read(Path.of(scenario));
             if (duration != null) {
                 doc = ScenarioPath.parse("run.duration").set(doc, duration);
             }
             SweepJob job = SweepJob.of(doc);
-            SweepEngine.Report r = new SparkSweepEngine().run(job, dir, new SweepEngine.Options(null, partitions));
+            SweepEngine.Report r = new SparkSweepEngine().run(job, dir, new SweepEngine.Options(null, partitions, picture));
             print(out, job, r);
             return 0;
         } catch (ScenarioException | NumberFormatException e) {

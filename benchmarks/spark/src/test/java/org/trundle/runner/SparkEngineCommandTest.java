@@ -79,5 +79,15 @@ class SparkEngineCommandTest {
         assertTrue(Files.isDirectory(full.resolve("rows.parquet")));
         assertArrayEquals(Files.readAllBytes(dir.resolve("local/sweep-report.html")),
             Files.readAllBytes(full.resolve("sweep-report.html")), "the same report whatever the engine");
+
+        // --no-plot: no picture, everything else the same, as with the local engine
+        Path plain = dir.resolve("spark-no-plot");
+        String[] noPlot = run("sweep", f.toString(), "--out", plain.toString(), "--engine", "spark",
+            "--master", "local[2]", "--partitions", "2", "--duration", "0.2", "--no-plot");
+        assertEquals("0", noPlot[0], noPlot[2]);
+        assertTrue(!Files.exists(plain.resolve("regime-map.png")), "--no-plot draws no regime-map.png");
+        assertArrayEquals(Files.readAllBytes(dir.resolve("local/sweep-report.html")),
+            Files.readAllBytes(plain.resolve("sweep-report.html")));
+        assertTrue(Files.isDirectory(plain.resolve("sweep-csv")) && Files.isDirectory(plain.resolve("rows.parquet")));
     }
 }

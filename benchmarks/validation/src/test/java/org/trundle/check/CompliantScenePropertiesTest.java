@@ -38,8 +38,12 @@ import org.trundle.surfaces.VGroove;
  * compliant wrench as a load of the rigid contact phases); and, for comparison, the same drop into a rigid V-groove and
  * onto two rigid rails (rail diameter 1–4 r, a gap of 0.2–1.6 r between them), where the ball bounces between the
  * walls with impulses until both contacts hold, slides on both and sticks (two contacts at once, the sliding closed
- * form, the stick of several contacts; these families found a contact trapped at the stick threshold after the
- * other contact's stick, and a phase span mislabelled while several contacts changed modes, both fixed). The
+ * form, the stick of several contacts), and set down gently, spinning, into the corner of a rigid floor and two
+ * rigid side walls (touches, not impacts, then friction drives it along and against the walls). These families
+ * found a contact trapped at the stick threshold after the other contact's stick, a phase span mislabelled while
+ * several contacts changed modes, and contact-or-flight choices made on a normal force that is exactly zero in one
+ * frame and ±1e-19 N in a turned one (a vertical wall under gravity along it; a wall pressed only by a friction that
+ * has just stopped), all fixed. The
  * checks: the energy budget closes (elastic energy and
  * damping work counted) and every phase change has its cause, to 1e-7 of the energy scale (the one-wall compliant
  * runs close to about 1e-8 at the default tolerance 1e-10; the contacts' regularised friction makes the error larger
@@ -61,7 +65,7 @@ class CompliantScenePropertiesTest {
     static Stream<Arguments> cases() {
         List<Arguments> out = new ArrayList<>();
         for (String family : List.of("compliant V-groove", "compliant corner", "rigid floor, compliant wall",
-            "rigid V-groove", "rigid rails")) {
+            "rigid V-groove", "rigid rails", "rigid three-wall corner")) {
             for (int i = 0; i < CASES; i++) {
                 PropertyCase c = make(family, SEED, i);
                 out.add(Arguments.of(Named.of(c.label() + " seed=" + Long.toHexString(SEED) + " #" + i, c)));
@@ -89,7 +93,16 @@ class CompliantScenePropertiesTest {
         Vector3D spin = new Vector3D(in(rnd, -50, 50), in(rnd, -50, 50), in(rnd, -50, 50));
         Vector3D centre;
         String label;
-        if (family.equals("rigid V-groove")) {
+        if (family.equals("rigid three-wall corner")) {
+            // set down gently just clear of a floor and two side walls meeting at right angles (normal speeds below
+            // the settle speed, so the walls are touched, not struck), spinning: friction drives it along the walls
+            b.compliance(null).patch(Patch.of("floor", new Plane(Vector3D.ZERO, Vector3D.PLUS_K)))
+                .patch(Patch.of("back", new Plane(Vector3D.ZERO, Vector3D.PLUS_I)))
+                .patch(Patch.of("side", new Plane(Vector3D.ZERO, Vector3D.PLUS_J)));
+            centre = new Vector3D(r * (1 + in(rnd, 0, 1e-3)), r * (1 + in(rnd, 0, 1e-3)), r * (1 + in(rnd, 0, 1e-3)));
+            velocity = new Vector3D(-in(rnd, 0, 1e-3), -in(rnd, 0, 1e-3), -in(rnd, 0, 1e-3));
+            label = family;
+        } else if (family.equals("rigid V-groove")) {
             double angle = Math.toRadians(in(rnd, 60, 140));
             VGroove v = new VGroove(Vector3D.ZERO, Vector3D.PLUS_I, Vector3D.PLUS_K, angle);
             b.compliance(null).patch(Patch.of("left", v.plusWall())).patch(Patch.of("right", v.minusWall()));

@@ -339,14 +339,33 @@ final class Transitions {
             dyn.slideDir0[i] = s[i] / sp;
         }
         dyn.evaluate(run.t, run.y);
-        return dyn.normalForce > 0 ? Phase.SLIDING : Phase.FLIGHT;
+        return presses(dyn.normalForce) ? Phase.SLIDING : Phase.FLIGHT;
+    }
+
+    /**
+     * Whether a contact's normal force holds it: positive beyond rounding, {@code N > 1e-12 m |g|} (N). A wall the
+     * motion leaves exactly unloaded (a vertical wall met under gravity along it, a wall pressed only by a friction
+     * that has just stopped) has {@code N = 0} in one frame and ±1e-19 N in a turned one; without the margin the
+     * choice between contact and flight there would depend on the frame the scene is described in.
+     *
+     * @param normalForce the normal force (N)
+     * @return whether the contact holds
+     */
+    boolean presses(double normalForce) {
+        return normalForce > forceFloor();
+    }
+
+    /** @return the normal force below which a contact is taken as unloaded, {@code 1e-12 m |g|} (N) */
+    double forceFloor() {
+        double[] g = run.g;
+        return 1e-12 * m * Math.sqrt(g[0] * g[0] + g[1] * g[1] + g[2] * g[2]);
     }
 
     /** Rolling if the grip holds the no-slip state, else sliding; flight if the normal force would be negative. */
     Phase contactPhaseAfterStick() {
         dyn.phase = Phase.ROLLING;
         dyn.evaluate(run.t, run.y);
-        if (!(dyn.normalForce > 0)) {
+        if (!presses(dyn.normalForce)) {
             return Phase.FLIGHT;
         }
         if (dyn.neededTangential <= dyn.grip) {
@@ -832,8 +851,15 @@ final class Transitions {
             }
             dyn.phase = run.phase();
             dyn.evaluate(run.t, y);
+            // a contact whose normal force is not positive is released; "not positive" up to rounding relative to
+            // the contacts' forces, so that a wall left exactly unloaded by the others' modes (a ball pressed against
+            // a wall only by the floor's sliding friction, the floor sticking) is released in every frame
+            double total = 0;
+            for (int k = 0; k < set.count(); k++) {
+                total += Math.abs(dyn.contactNormal[k]);
+            }
             int worst = -1;
-            double low = 0;
+            double low = 1e-12 * total + forceFloor();
             for (int k = 0; k < set.count(); k++) {
                 if (dyn.contactNormal[k] <= low) {
                     low = dyn.contactNormal[k];
