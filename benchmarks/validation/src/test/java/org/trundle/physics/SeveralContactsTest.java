@@ -202,6 +202,61 @@ class SeveralContactsTest {
     }
 
     /**
+     * A groove whose walls grip differently: the 60° groove on a 10° slope with a gripping plus wall
+     * (Coulomb μ = 0.5) and a frictionless minus wall (μ = 0), from rest or rolling. The minus wall cannot hold
+     * the chord rolling, so it slips at the start (one {@code slip} event, on it) and the ball goes on rolling on
+     * the plus wall and sliding on the minus one (the closed form of one rolling and one sliding contact). The
+     * frictionless wall pushes along its normal, through the centre, so the ball rolls about its contact with the
+     * plus wall as on a single plane: Newton–Euler about that contact (the centre moves along the groove, the
+     * spin across the groove cannot change, so the plus wall's force in the cross-section is normal too) gives
+     * {@code a = g sinθ/(1 + k)} (5/7 g sinθ for a solid ball) and, by statics across the groove, both walls
+     * carry {@code N = m g cosθ/(2 sin 30°)} (common practice; derived here). The plus wall needs the friction
+     * {@code m g sinθ k/(1 + k)}, well within {@code 0.5 N}. No work is done (rolling, and a frictionless slide),
+     * so the energy is conserved to 1e-8 of its scale. Tolerances as above: 1e-9 relative on the integrated
+     * velocity and position, integration tolerance 1e-11.
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {0.0, 0.3})
+    void aGrooveWithAFrictionlessWallRollsOnTheOtherAsOnAPlane(double v0) {
+        double theta = Math.toRadians(10);
+        VGroove v = groove60();
+        Simulation sim = Simulation.builder().ball(Ball.of(R, M, K))
+            .patch(Patch.of("plus", v.plusWall()).withLaw(new Coulomb(0.5, 0.5, 0.0)))
+            .patch(Patch.of("minus", v.minusWall()).withLaw(new Coulomb(0, 0, 0.0)))
+            .law(new Coulomb(0.5, 0.5, 0.0)).gravity(gravity(theta))
+            .settings(SolverSettings.defaults().withTolerance(1e-11).withSampleInterval(0.01)).build();
+        List<Sample> samples = new ArrayList<>();
+        double t = 0.3;
+        RunResult res = sim.run(sim.rollingStart(v.restingCentre(R, 0), new Vector3D(v0, 0, 0)), t, samples::add);
+        assertEquals(EndReason.DURATION, res.endReason(), res.toString());
+        List<RunEvent> events = res.events();
+        assertEquals(1, events.size(), events.toString());
+        assertEquals(EventKind.SLIP, events.get(0).kind(), events.toString());
+        assertEquals("minus", events.get(0).patch(), events.toString());
+        assertEquals(0.0, events.get(0).time(), 0.0);
+        double a = G * Math.sin(theta) / (1 + K);
+        assertEquals(v0 + a * t, res.endState().velocity().getX(), 1e-9 * (v0 + a * t));
+        assertEquals(v0 * t + 0.5 * a * t * t, res.endState().centre().getX(), 1e-9 * (v0 * t + 0.5 * a * t * t));
+        assertEquals(0.0, res.endState().velocity().getY(), 1e-9 * a * t);
+        double n = M * G * Math.cos(theta) / (2 * Math.sin(Math.toRadians(30)));
+        List<Sample> two = twoContactSamples(samples);
+        assertEquals(samples.size(), two.size());
+        for (Sample s : two.subList(1, two.size())) {
+            SampleContact plus = s.touches().get(0);
+            SampleContact minus = s.touches().get(1);
+            assertEquals("plus", plus.patch());
+            assertEquals(Phase.ROLLING, plus.mode(), "t = " + s.time());
+            assertEquals(Phase.SLIDING, minus.mode(), "t = " + s.time());
+            assertEquals(n, plus.normalForce(), 1e-9 * n, "t = " + s.time());
+            assertEquals(n, minus.normalForce(), 1e-9 * n, "t = " + s.time());
+            assertEquals(M * G * Math.sin(theta) * K / (1 + K), plus.frictionForce().getNorm(), 1e-9 * n);
+            assertEquals(0.0, minus.frictionForce().getNorm(), 0.0);
+        }
+        assertTrue(res.energy().relativeResidual() < 1e-8, res.energy().toString());
+        assertEquals(0.0, res.energy().slidingFrictionLoss(), 0.0);
+    }
+
+    /**
      * A ball dropped into the groove off its centre line lands on one wall (impact on that patch), rolls or
      * slides down it, reaches the other wall (a second contact: an impact or a touch on that patch) and then
      * rolls with both contacts at {@code a = g sinθ/2.6} along the groove (as above). Dropped on the centre

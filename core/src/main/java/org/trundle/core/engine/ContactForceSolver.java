@@ -59,8 +59,11 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
  * scalar equation and a few cross products give the same forces as the system below, squeeze rule included
  * (the unit tests compare the two on seeded random geometry) — unless their normals are nearly parallel or
  * antipodal. When every contact slides (still or moving patches, two or three contacts) only the normal forces
- * are unknown and a 2×2 or 3×3 system solved by Cramer's rule gives them ({@code solveSliding}). Every other case
- * (rolling and sliding contacts together, rolling on a moving patch, three rolling contacts) takes the general
+ * are unknown and a 2×2 or 3×3 system solved by Cramer's rule gives them ({@code solveSliding}). One rolling and
+ * one sliding contact (a groove whose walls grip differently; still or moving patches) are solved in closed form by
+ * {@link RollingSlidingPair}: the rolling constraint eliminated as in the single-contact closed form, one scalar
+ * equation for the sliding normal force (declined where the sliding force direction makes it degenerate). Every
+ * other case (two rolling contacts on moving patches, three contacts with one or more rolling) takes the general
  * system.
  *
  * <p>A single contact does not come here: the engine keeps the closed form of §3 for it (the fast path);
@@ -79,6 +82,10 @@ final class ContactForceSolver {
     private final double inertia;
     /** The closed form of two rolling contacts on still patches (the common case: groove, rails). */
     private final RollingPair pair;
+    /** The closed form of one rolling and one sliding contact (a groove whose walls grip differently). */
+    private final RollingSlidingPair mixed;
+    /** The rolling contact's β for {@link #mixed}. */
+    private final double[] mixedBeta = new double[3];
 
     // inputs per contact
     private int count;
@@ -144,6 +151,7 @@ final class ContactForceSolver {
         this.m = mass;
         this.inertia = inertiaFactor * mass * radius * radius;
         this.pair = new RollingPair(radius, mass, inertia);
+        this.mixed = new RollingSlidingPair(radius, mass, inertia);
     }
 
     /** Forgets the contacts of the last solve. */
@@ -246,7 +254,39 @@ final class ContactForceSolver {
         if (allSliding() && solveSliding(v, g, fApp, tau)) {
             return summarise();
         }
+        if (count == 2 && rolling[0] != rolling[1] && solveMixed(v, w, g, fApp, tau)) {
+            return summarise();
+        }
         return solveGeneral(v, w, g, fApp, tau);
+    }
+
+    /**
+     * One rolling and one sliding contact (still or moving patches): the closed form of {@link RollingSlidingPair}
+     * with the constraints' right-hand sides of the class comment ({@code β = r ω × (H v)} and {@code −vᵀ H v} on
+     * still patches, the caller's on moving ones).
+     *
+     * @return false when it declines (the sliding force direction degenerate; nothing written)
+     */
+    private boolean solveMixed(double[] v, double[] w, double[] g, double[] fApp, double[] tau) {
+        int i = rolling[0] ? 0 : 1;
+        int j = 1 - i;
+        double[] b1 = mixedBeta;
+        if (given[i]) {
+            System.arraycopy(givenBeta[i], 0, b1, 0, 3);
+        } else {
+            Vec.mulSym(hessian[i], v, hv);
+            Vec.cross(w, hv, b1);
+            Vec.scale(b1, r);
+        }
+        double b2;
+        if (given[j]) {
+            b2 = givenBeta[j][0];
+        } else {
+            Vec.mulSym(hessian[j], v, hv);
+            b2 = -Vec.dot(v, hv);
+        }
+        return mixed.solve(normal[i], b1, normal[j], b2, frictionRatio[j], slideDir[j], g, fApp, tau, acc, angAcc,
+            force[i], force[j]);
     }
 
     private boolean allSliding() {
@@ -380,9 +420,9 @@ final class ContactForceSolver {
     }
 
     /**
-     * Solves by the general linear system, whatever the contacts (the closed form of {@link RollingPair} is
-     * not tried): what {@link #solve} does for every case but two rolling contacts on still patches; the tests
-     * compare the two.
+     * Solves by the general linear system, whatever the contacts (no closed form is tried: not
+     * {@link RollingPair}, {@link RollingSlidingPair} nor the all-sliding one): what {@link #solve} does for the
+     * cases without a closed form, or where one declines; the tests compare the two.
      *
      * @param v centre velocity (m/s)
      * @param w spin (rad/s)
