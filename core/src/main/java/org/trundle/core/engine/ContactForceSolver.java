@@ -119,6 +119,13 @@ final class ContactForceSolver {
     /** Relative LU quality below which the fallback solves. */
     private static final double SINGULAR = 1e-12;
     /**
+     * Singular values below this fraction of the largest (times the size, EJML's convention) count as zero in the
+     * minimum-norm fallback: a squeeze between contacts whose normals are antipodal up to rounding (a ball pinched
+     * between a bearing's races) is indeterminate, and inverting its rounding-level singular value would give
+     * forces of order 1/ε.
+     */
+    private static final double SINGULAR_VALUE = 1e-9;
+    /**
      * Relative determinant (against the product of the rows' norms) below which the sliding closed form declines
      * in favour of the general system.
      */
@@ -498,6 +505,9 @@ final class ContactForceSolver {
             // which split it equally; a negative normal force is then released by the caller
             if (pinv == null) {
                 pinv = LinearSolverFactory_DDRM.pseudoInverse(true);
+                if (pinv instanceof org.ejml.dense.row.linsol.svd.SolvePseudoInverseSvd_DDRM svd) {
+                    svd.setThreshold(SINGULAR_VALUE);
+                }
             }
             if (!pinv.setA(mat)) {
                 return false;
