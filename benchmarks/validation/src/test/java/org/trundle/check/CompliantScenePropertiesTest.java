@@ -169,7 +169,9 @@ class CompliantScenePropertiesTest {
      * decides it (README, several contacts). Six of these ten runs used to fail (forces of 1e68 N from inverting a
      * rounding-level singular value, or step-size underflow) and one took 564,586 evaluations; with the
      * pseudo-inverse's relative cutoff every run reaches its end in at most about 66,000 evaluations. Not yet in the
-     * property families above: the energy budget of these runs closes only to about 2e-6 of the scale (open).
+     * property families above: the energy budget of these runs closes only to about 2e-6 of the scale (about 2e-13 J
+     * appears at the touch of the second race against a kinetic scale of 1e-7 J; likely the unbooked potential energy
+     * of the centre's projection onto both races there; open).
      */
     @ParameterizedTest(name = "races #{0}")
     @org.junit.jupiter.params.provider.ValueSource(ints = {0, 1, 2, 3, 4, 5, 6, 7, 8, 9})
