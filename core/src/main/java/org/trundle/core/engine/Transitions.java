@@ -822,7 +822,12 @@ final class Transitions {
             if (set.count() == 0) {
                 break;
             }
+            double[] g = run.g;
+            double heightBefore = -(g[0] * y[C] + g[1] * y[C + 1] + g[2] * y[C + 2]);
             projectPositionOnContacts(run.t, y);
+            // the projection's change of potential energy m g·Δc, booked with the velocity projection's below
+            double liftWork = m * (-(g[0] * y[C] + g[1] * y[C + 1] + g[2] * y[C + 2]) - heightBefore);
+            y[LOSS + LossKind.SLIDING_FRICTION.ordinal()] -= liftWork;
             for (int k = 0; k < set.count(); k++) {
                 set.at(k).query(run.t, run.centreOf(y));
             }
