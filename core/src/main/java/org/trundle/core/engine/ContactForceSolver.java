@@ -278,22 +278,33 @@ final class ContactForceSolver {
         int i = rolling[0] ? 0 : 1;
         int j = 1 - i;
         double[] b1 = mixedBeta;
-        if (given[i]) {
-            System.arraycopy(givenBeta[i], 0, b1, 0, 3);
-        } else {
-            Vec.mulSym(hessian[i], v, hv);
-            Vec.cross(w, hv, b1);
-            Vec.scale(b1, r);
-        }
-        double b2;
-        if (given[j]) {
-            b2 = givenBeta[j][0];
-        } else {
-            Vec.mulSym(hessian[j], v, hv);
-            b2 = -Vec.dot(v, hv);
-        }
+        rollingRhs(i, v, w, b1);
+        double b2 = slidingRhs(j, v);
         return mixed.solve(normal[i], b1, normal[j], b2, frictionRatio[j], slideDir[j], g, fApp, tau, acc, angAcc,
             force[i], force[j]);
+    }
+
+    /**
+     * Rolling contact i's constraint right-hand side {@code β_i = r ω × (H_i v)} on a still patch, the caller's on a
+     * moving one.
+     */
+    private void rollingRhs(int i, double[] v, double[] w, double[] out) {
+        if (given[i]) {
+            System.arraycopy(givenBeta[i], 0, out, 0, 3);
+            return;
+        }
+        Vec.mulSym(hessian[i], v, hv);
+        Vec.cross(w, hv, out);
+        Vec.scale(out, r);
+    }
+
+    /** Sliding contact i's normal constraint right-hand side {@code −vᵀ H_i v} on a still patch, the caller's on a moving one. */
+    private double slidingRhs(int i, double[] v) {
+        if (given[i]) {
+            return givenBeta[i][0];
+        }
+        Vec.mulSym(hessian[i], v, hv);
+        return -Vec.dot(v, hv);
     }
 
     private boolean allSliding() {
@@ -338,14 +349,7 @@ final class ContactForceSolver {
             for (int j = 0; j < count; j++) {
                 a[3 * i + j] = (ni[0] * u[3 * j] + ni[1] * u[3 * j + 1] + ni[2] * u[3 * j + 2]) * invM;
             }
-            double bi;
-            if (given[i]) {
-                bi = givenBeta[i][0];
-            } else {
-                Vec.mulSym(hessian[i], v, hv);
-                bi = -Vec.dot(v, hv);
-            }
-            e[i] = bi - (ni[0] * gx + ni[1] * gy + ni[2] * gz);
+            e[i] = slidingRhs(i, v) - (ni[0] * gx + ni[1] * gy + ni[2] * gz);
         }
         double[] nf = slideNormal;
         if (count == 2) {
@@ -444,7 +448,9 @@ final class ContactForceSolver {
         double invI = 1.0 / inertia;
         for (int i = 0; i < count; i++) {
             double[] ni = normal[i];
-            Vec.mulSym(hessian[i], v, hv);
+            if (rolling[i]) {
+                rollingRhs(i, v, w, tmp);
+            }
             for (int c = 0; c < 3; c++) {
                 int row = 3 * i + c;
                 if (rolling[i]) {
@@ -455,9 +461,7 @@ final class ContactForceSolver {
                     Vec.scale(jAng[row], r);
                     System.arraycopy(jLin[row], 0, gLin[row], 0, 3);
                     System.arraycopy(jAng[row], 0, gAng[row], 0, 3);
-                    // β = r ω × (H v), component c (or the caller's, on a moving patch)
-                    Vec.cross(w, hv, tmp);
-                    beta[row] = given[i] ? givenBeta[i][c] : r * tmp[c];
+                    beta[row] = tmp[c];
                 } else if (c == 0) {
                     active[row] = true;
                     System.arraycopy(ni, 0, jLin[row], 0, 3);
@@ -470,7 +474,7 @@ final class ContactForceSolver {
                     // −r n × u
                     Vec.cross(gLin[row], ni, gAng[row]);
                     Vec.scale(gAng[row], r);
-                    beta[row] = given[i] ? givenBeta[i][0] : -Vec.dot(v, hv);
+                    beta[row] = slidingRhs(i, v);
                 } else {
                     active[row] = false;
                 }
