@@ -102,7 +102,7 @@ final class ExitRule extends SwitchRule {
             // (its lift-off rule watches only a normal force that falls through zero)
             run.dyn.phase = run.phase();
             run.dyn.evaluate(run.t, run.y);
-            if (!(run.dyn.normalForce > 0)) {
+            if (!x.presses(run.dyn.normalForce)) {
                 BallState at = run.toState(run.t, run.y, run.phase());
                 run.changePhase(Phase.FLIGHT);
                 run.log(EventKind.LIFT_OFF, at, null, Vector3D.ZERO);
